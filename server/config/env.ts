@@ -1,0 +1,78 @@
+import { z } from 'zod';
+
+/**
+ * Every setting the API, worker, mail catcher and ops scripts read, in one
+ * place, with the defaults a fresh machine needs. `profile` separates the
+ * development stack (`npm start`) from the test stack (`npm test`) so the
+ * two can run side by side without sharing a database or a port.
+ */
+const profiles = {
+  dev: { pgPort: 54329, apiPort: 8340, smtpPort: 2525, database: 'frostgrade' },
+  test: { pgPort: 54339, apiPort: 8341, smtpPort: 2526, database: 'frostgrade_test' },
+} as const;
+
+export type Profile = keyof typeof profiles;
+
+const schema = z.object({
+  FROSTGRADE_PROFILE: z.enum(['dev', 'test']).default('dev'),
+  NODE_ENV: z.enum(['development', 'test', 'production']).optional(),
+  DATABASE_URL: z.string().url().optional(),
+  PG_PORT: z.coerce.number().int().min(1024).max(65535).optional(),
+  PG_DATA_ROOT: z.string().default('/var/tmp/frostgrade'),
+  PORT: z.coerce.number().int().min(1).max(65535).optional(),
+  HOST: z.string().default('127.0.0.1'),
+  APP_ORIGIN: z.string().url().optional(),
+  SMTP_HOST: z.string().default('127.0.0.1'),
+  SMTP_PORT: z.coerce.number().int().min(1).max(65535).optional(),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASS: z.string().optional(),
+  MAIL_FROM: z.string().default('Frostgrade <frostgrade@localhost>'),
+  MAIL_CATCHER: z.enum(['0', '1']).optional(),
+  WEB_DIST: z.string().default('dist'),
+  WORKER_HEARTBEAT_SECONDS: z.coerce.number().min(1).max(300).default(5),
+});
+
+export type Env = {
+  profile: Profile;
+  production: boolean;
+  databaseUrl: string;
+  pgPort: number;
+  pgDataRoot: string;
+  host: string;
+  port: number;
+  appOrigin: string;
+  smtp: { host: string; port: number; user?: string; pass?: string };
+  mailFrom: string;
+  /** The local SMTP catcher runs and its outbox is readable (never in production). */
+  mailCatcher: boolean;
+  webDist: string;
+  heartbeatSeconds: number;
+};
+
+export function readEnv(source: NodeJS.ProcessEnv = process.env): Env {
+  const parsed = schema.safeParse(source);
+  if (!parsed.success) {
+    const issue = parsed.error.issues[0];
+    throw new Error(`Environment variable ${String(issue?.path[0])}: ${issue?.message}`);
+  }
+  const e = parsed.data;
+  const d = profiles[e.FROSTGRADE_PROFILE];
+  const production = e.NODE_ENV === 'production';
+  const pgPort = e.PG_PORT ?? d.pgPort;
+  const port = e.PORT ?? d.apiPort;
+  return {
+    profile: e.FROSTGRADE_PROFILE,
+    production,
+    databaseUrl: e.DATABASE_URL ?? `postgres://postgres@127.0.0.1:${pgPort}/${d.database}`,
+    pgPort,
+    pgDataRoot: e.PG_DATA_ROOT,
+    host: e.HOST,
+    port,
+    appOrigin: e.APP_ORIGIN ?? `http://127.0.0.1:${port}`,
+    smtp: { host: e.SMTP_HOST, port: e.SMTP_PORT ?? d.smtpPort, user: e.SMTP_USER, pass: e.SMTP_PASS },
+    mailFrom: e.MAIL_FROM,
+    mailCatcher: production ? false : e.MAIL_CATCHER !== '0',
+    webDist: e.WEB_DIST,
+    heartbeatSeconds: e.WORKER_HEARTBEAT_SECONDS,
+  };
+}

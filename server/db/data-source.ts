@@ -1,0 +1,23 @@
+import 'reflect-metadata';
+import { DataSource } from 'typeorm';
+import { CapturedMail, MaterialFamily, Team, WorkerHeartbeat } from './entities';
+import { Foundation1764612000000 } from './migrations/1764612000000-foundation';
+import { SnakeNamingStrategy } from './naming';
+
+/** Migrations in order; a new one is appended here as well as written. */
+export const migrations = [Foundation1764612000000];
+
+export function createDataSource(databaseUrl: string, applicationName = 'frostgrade'): DataSource {
+  return new DataSource({
+    type: 'postgres',
+    url: databaseUrl,
+    applicationName,
+    entities: [Team, MaterialFamily, CapturedMail, WorkerHeartbeat],
+    migrations,
+    migrationsTableName: 'schema_migration',
+    namingStrategy: new SnakeNamingStrategy(),
+    synchronize: false,
+    logging: ['error'],
+    extra: { max: 10 },
+  });
+}

@@ -1,0 +1,4 @@
+export { Team } from './team';
+export { MaterialFamily } from './material-family';
+export { CapturedMail } from './captured-mail';
+export { WorkerHeartbeat } from './worker-heartbeat';

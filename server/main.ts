@@ -1,0 +1,34 @@
+import 'reflect-metadata';
+import { readEnv } from './config/env';
+import { createDataSource } from './db/data-source';
+import { createApp } from './http/app';
+import { createMailer } from './mail/mailer';
+import { startBoss } from './queue/boss';
+import { version } from './version';
+
+/** The API process: database, queue (supervising), mail, HTTP. */
+async function main(): Promise<void> {
+  const env = readEnv();
+  const ds = await createDataSource(env.databaseUrl, 'frostgrade-api').initialize();
+  const boss = await startBoss(env.databaseUrl, 'frostgrade-api');
+  const mailer = createMailer(env);
+  const app = createApp({ env, ds, boss, mailer, version });
+  const server = app.listen(env.port, env.host, () => console.log(`[api] listening on http://${env.host}:${env.port}`));
+  let stopping = false;
+  const stop = async (): Promise<void> => {
+    if (stopping) return;
+    stopping = true;
+    server.close();
+    await boss.stop({ graceful: true, timeout: 5000 });
+    mailer.close();
+    await ds.destroy();
+    process.exit(0);
+  };
+  process.on('SIGTERM', () => void stop());
+  process.on('SIGINT', () => void stop());
+}
+
+main().catch((err: Error) => {
+  console.error(`[api] failed to start: ${err.message}`);
+  process.exit(1);
+});

@@ -1,0 +1,119 @@
+import { execFileSync, spawnSync } from 'node:child_process';
+import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync, chownSync } from 'node:fs';
+import { join } from 'node:path';
+import { Client } from 'pg';
+import { log } from './log';
+
+/**
+ * A private PostgreSQL cluster on loopback, one per profile, under a
+ * directory the `postgres` user can reach (a checkout under /root is not).
+ * initdb and pg_ctl refuse to run as root, so they run as `postgres`.
+ */
+export type Cluster = { dataDir: string; port: number; startedHere: boolean };
+
+function pgBin(): string {
+  for (const v of ['17', '16', '15']) {
+    const dir = `/usr/lib/postgresql/${v}/bin`;
+    if (existsSync(join(dir, 'pg_ctl'))) return dir;
+  }
+  return '';
+}
+
+function ensureServerInstalled(): string {
+  let bin = pgBin();
+  if (bin) return bin;
+  log('postgres', 'PostgreSQL server not found: installing Debian package postgresql');
+  execFileSync('bash', ['-c', 'apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq postgresql >/dev/null'], { stdio: 'inherit' });
+  // Debian's package starts its own cluster on 5432; we do not use it.
+  spawnSync('bash', ['-c', 'pg_ctlcluster --force 15 main stop 2>/dev/null || true']);
+  bin = pgBin();
+  if (!bin) throw new Error('PostgreSQL server binaries are still missing after apt-get install postgresql');
+  return bin;
+}
+
+function asPostgres(bin: string, args: string[], cwd: string): ReturnType<typeof spawnSync> {
+  return spawnSync('runuser', ['-u', 'postgres', '--', join(bin, args[0]!), ...args.slice(1)], { cwd, encoding: 'utf8' });
+}
+
+function pidAlive(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+  } catch {
+    return false;
+  }
+  // A killed postmaster can linger as a zombie: alive to kill(0), dead in fact.
+  const stat = existsSync(`/proc/${pid}/stat`) ? readFileSync(`/proc/${pid}/stat`, 'utf8') : '';
+  const state = stat.split(') ')[1]?.charAt(0);
+  return state !== undefined && state !== 'Z' && state !== 'X';
+}
+
+function clearStaleLock(dataDir: string, port: number): void {
+  const pidFile = join(dataDir, 'postmaster.pid');
+  if (!existsSync(pidFile)) return;
+  const pid = Number(readFileSync(pidFile, 'utf8').split('\n')[0]);
+  if (Number.isFinite(pid) && pid > 0 && pidAlive(pid)) return;
+  log('postgres', `removing stale postmaster.pid (pid ${pid} is gone)`);
+  rmSync(pidFile, { force: true });
+  for (const f of [`.s.PGSQL.${port}`, `.s.PGSQL.${port}.lock`]) rmSync(join(dataDir, f), { force: true });
+}
+
+function isRunning(bin: string, dataDir: string): boolean {
+  return asPostgres(bin, ['pg_ctl', 'status', '-D', dataDir], '/').status === 0;
+}
+
+/** Start (or reuse) the cluster; idempotent and safe after a crash. */
+export function ensureCluster(root: string, profile: string, port: number): Cluster {
+  const bin = ensureServerInstalled();
+  const base = join(root, profile);
+  const dataDir = join(base, 'pgdata');
+  mkdirSync(base, { recursive: true, mode: 0o755 });
+  execFileSync('chown', ['postgres:postgres', root, base]);
+  if (!existsSync(join(dataDir, 'PG_VERSION'))) {
+    log('postgres', `initdb ${dataDir}`);
+    rmSync(dataDir, { recursive: true, force: true });
+    const r = asPostgres(bin, ['initdb', '-D', dataDir, '-U', 'postgres', '-A', 'trust', '-E', 'UTF8', '--locale=C.UTF-8'], '/');
+    if (r.status !== 0) throw new Error(`initdb failed: ${String(r.stderr)}`);
+    writeFileSync(
+      join(dataDir, 'postgresql.auto.conf'),
+      [`listen_addresses = '127.0.0.1'`, `port = ${port}`, `unix_socket_directories = '${dataDir}'`, 'fsync = off',
+        'synchronous_commit = off', 'full_page_writes = off', 'max_connections = 200', ''].join('\n'),
+    );
+    chownSync(join(dataDir, 'postgresql.auto.conf'), uid('postgres'), gid('postgres'));
+  }
+  clearStaleLock(dataDir, port);
+  if (isRunning(bin, dataDir)) return { dataDir, port, startedHere: false };
+  const r = asPostgres(bin, ['pg_ctl', 'start', '-w', '-t', '60', '-D', dataDir, '-l', join(base, 'postgres.log')], '/');
+  if (r.status !== 0) throw new Error(`PostgreSQL did not start (see ${join(base, 'postgres.log')}): ${String(r.stderr || r.stdout)}`);
+  log('postgres', `listening on 127.0.0.1:${port}`);
+  return { dataDir, port, startedHere: true };
+}
+
+export function stopCluster(cluster: Cluster): void {
+  const bin = pgBin();
+  if (bin) asPostgres(bin, ['pg_ctl', 'stop', '-m', 'fast', '-D', cluster.dataDir], '/');
+}
+
+function uid(name: string): number {
+  return Number(execFileSync('id', ['-u', name], { encoding: 'utf8' }).trim());
+}
+function gid(name: string): number {
+  return Number(execFileSync('id', ['-g', name], { encoding: 'utf8' }).trim());
+}
+
+/** Create the database if missing; with `fresh`, drop it first (test runs). */
+export async function ensureDatabase(port: number, name: string, fresh = false): Promise<void> {
+  const client = new Client({ host: '127.0.0.1', port, user: 'postgres', database: 'postgres' });
+  await client.connect();
+  try {
+    if (fresh) await client.query(`DROP DATABASE IF EXISTS ${quoteIdent(name)} WITH (FORCE)`);
+    const found = await client.query('SELECT 1 FROM pg_database WHERE datname = $1', [name]);
+    if (found.rowCount === 0) await client.query(`CREATE DATABASE ${quoteIdent(name)}`);
+  } finally {
+    await client.end();
+  }
+}
+
+function quoteIdent(name: string): string {
+  if (!/^[a-z_][a-z0-9_]*$/.test(name)) throw new Error(`database name ${name} must be lower-case letters, digits and _`);
+  return `"${name}"`;
+}

@@ -1,0 +1,5 @@
+/** Queue names shared by the API (which sends) and the workers (which work). */
+export const queues = {
+  /** A no-op job used by the health check and tests to prove the queue → worker path. */
+  probe: 'system-probe',
+} as const;
