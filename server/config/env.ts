@@ -49,7 +49,7 @@ export type Env = {
   heartbeatSeconds: number;
 };
 
-export function readEnv(source: NodeJS.ProcessEnv = process.env): Env {
+export function readEnv(source: Record<string, string | undefined> = process.env): Env {
   const parsed = schema.safeParse(source);
   if (!parsed.success) {
     const issue = parsed.error.issues[0];

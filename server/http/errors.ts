@@ -8,21 +8,22 @@ export class HttpError extends Error {
     readonly status: number,
     message: string,
     readonly errors?: FieldError[],
+    name = 'HttpError',
   ) {
     super(message);
-    this.name = new.target.name;
+    this.name = name;
   }
 }
 
 export class NotFoundError extends HttpError {
   constructor(what = 'resource') {
-    super(404, `No such ${what}.`);
+    super(404, `No such ${what}.`, undefined, 'NotFound');
   }
 }
 
 export class ValidationError extends HttpError {
   constructor(errors: FieldError[]) {
-    super(400, errors.map((e) => `${e.field}: ${e.message}`).join('; '), errors);
+    super(400, errors.map((e) => `${e.field}: ${e.message}`).join('; '), errors, 'ValidationError');
   }
 }
 

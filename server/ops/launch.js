@@ -22,7 +22,11 @@ const stamp = join(root, 'node_modules', '.frostgrade-lock-sha1');
 const installed = existsSync(stamp) && readFileSync(stamp, 'utf8').trim() === lockHash;
 if (!installed) {
   console.log('[setup] node_modules missing or older than package-lock.json: running npm ci (a few minutes the first time)');
-  const r = spawnSync('npm', ['ci', '--no-audit', '--no-fund'], { cwd: root, stdio: 'inherit' });
+  // Use the npm that launched us: a dependency's own `npm` in node_modules/.bin
+  // must never shadow it.
+  const npmCli = process.env.npm_execpath;
+  const [cmd, args] = npmCli ? [process.execPath, [npmCli]] : ['npm', []];
+  const r = spawnSync(cmd, [...args, 'ci', '--no-audit', '--no-fund'], { cwd: root, stdio: 'inherit' });
   if (r.status !== 0) process.exit(r.status ?? 1);
   writeFileSync(stamp, `${lockHash}\n`);
 }
