@@ -1,0 +1,5 @@
+export * from './common';
+export * from './errors';
+export * from './families';
+export * from './health';
+export * from './outbox';
