@@ -1,0 +1,1 @@
+export { AppShell as default } from '@/components/shell/app-shell';

@@ -1,0 +1,19 @@
+// One import per weight, so only the weights in use are bundled.
+import { IBMPlexMono_400Regular } from '@expo-google-fonts/ibm-plex-mono/400Regular';
+import { IBMPlexMono_500Medium } from '@expo-google-fonts/ibm-plex-mono/500Medium';
+import { IBMPlexSans_400Regular } from '@expo-google-fonts/ibm-plex-sans/400Regular';
+import { IBMPlexSans_500Medium } from '@expo-google-fonts/ibm-plex-sans/500Medium';
+import { IBMPlexSans_600SemiBold } from '@expo-google-fonts/ibm-plex-sans/600SemiBold';
+
+/**
+ * The font files ship inside the npm packages and are bundled as assets;
+ * nothing is fetched from a font service at run time. Keys are the family
+ * names used in `theme.fonts`.
+ */
+export const appFonts = {
+  IBMPlexSans_400Regular,
+  IBMPlexSans_500Medium,
+  IBMPlexSans_600SemiBold,
+  IBMPlexMono_400Regular,
+  IBMPlexMono_500Medium,
+};

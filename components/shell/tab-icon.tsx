@@ -1,0 +1,85 @@
+import { StyleSheet, View } from 'react-native';
+
+export type TabIconName = 'materials' | 'outbox' | 'system';
+
+/**
+ * Navigation icons drawn with views: stacked zones (materials), an envelope
+ * (outbox) and a gauge (system). 24 × 24 px, one colour.
+ */
+export function TabIcon({ name, color }: { name: TabIconName; color: string }) {
+  return (
+    <View style={styles.box} aria-hidden>
+      {name === 'materials' ? <Layers color={color} /> : null}
+      {name === 'outbox' ? <Envelope color={color} /> : null}
+      {name === 'system' ? <Gauge color={color} /> : null}
+    </View>
+  );
+}
+
+function Layers({ color }: { color: string }) {
+  return (
+    <View style={styles.layers}>
+      <View style={[styles.layer, styles.layerTop, { backgroundColor: color }]} />
+      <View style={[styles.layer, styles.layerMid, { backgroundColor: color }]} />
+      <View style={[styles.layer, { backgroundColor: color }]} />
+    </View>
+  );
+}
+
+function Envelope({ color }: { color: string }) {
+  return (
+    <View style={[styles.envelope, { borderColor: color }]}>
+      <View style={[styles.flap, { borderColor: color }]} />
+    </View>
+  );
+}
+
+function Gauge({ color }: { color: string }) {
+  return (
+    <View style={[styles.gauge, { borderColor: color }]}>
+      <View style={[styles.needle, { backgroundColor: color }]} />
+      <View style={[styles.hub, { backgroundColor: color }]} />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  box: { width: 24, height: 24, alignItems: 'center', justifyContent: 'center' },
+  layers: { width: 20, gap: 3, alignItems: 'center' },
+  layer: { height: 4, width: 20, borderRadius: 1 },
+  layerMid: { width: 16, opacity: 0.8 },
+  layerTop: { width: 12, opacity: 0.6 },
+  envelope: {
+    width: 20,
+    height: 15,
+    borderWidth: 2,
+    borderRadius: 2,
+    alignItems: 'center',
+    overflow: 'hidden',
+  },
+  flap: {
+    width: 12,
+    height: 12,
+    marginTop: -8,
+    borderRightWidth: 2,
+    borderBottomWidth: 2,
+    transform: [{ rotate: '45deg' }],
+  },
+  gauge: {
+    width: 20,
+    height: 20,
+    borderRadius: 10,
+    borderWidth: 2,
+    alignItems: 'center',
+    justifyContent: 'center',
+  },
+  needle: {
+    position: 'absolute',
+    width: 2,
+    height: 7,
+    top: 3,
+    left: 10,
+    transform: [{ rotate: '40deg' }],
+  },
+  hub: { width: 4, height: 4, borderRadius: 2 },
+});

@@ -1,0 +1,29 @@
+import type { Href } from 'expo-router';
+import type { UseTabsWithTriggersOptions } from 'expo-router/ui';
+import type { TabIconName } from './tab-icon';
+
+export type TabSpec = {
+  /** Route name inside `app/(tabs)/` (file name without extension). */
+  name: string;
+  href: Href;
+  label: string;
+  icon: TabIconName;
+};
+
+/**
+ * The app's top-level destinations, in display order. Adding a tab is one
+ * line here plus its one-line route file in `app/(tabs)/`.
+ */
+export const tabs: readonly TabSpec[] = [
+  { name: 'index', href: '/', label: 'Materials', icon: 'materials' },
+  { name: 'outbox', href: '/outbox', label: 'Outbox', icon: 'outbox' },
+  { name: 'system', href: '/system', label: 'System', icon: 'system' },
+];
+
+type ScreenTrigger = UseTabsWithTriggersOptions['triggers'][number];
+
+export const tabTriggers: ScreenTrigger[] = tabs.map((tab) => ({
+  type: 'internal',
+  name: tab.name,
+  href: tab.href,
+}));
