@@ -18,7 +18,9 @@ export function MessageRow({ message }: { message: OutboxMessage }) {
         onPress={() => setOpen((value) => !value)}
         style={({ pressed }) => [styles.header, pressed && styles.pressed]}
       >
-        <Glyph name={open ? 'chevron-down' : 'chevron-right'} color={colors.primary} />
+        <View style={styles.glyph}>
+          <Glyph name={open ? 'chevron-down' : 'chevron-right'} color={colors.primary} />
+        </View>
         <View style={styles.headings}>
           <AppText variant="bodyStrong">{message.subject || '(no subject)'}</AppText>
           <AppText variant="caption" tone="muted">
@@ -56,6 +58,8 @@ const styles = StyleSheet.create({
     padding: spacing.lg,
   },
   pressed: { backgroundColor: colors.surfaceSunken },
+  // Centres the 16-px glyph on the first 22-px line of the subject.
+  glyph: { marginTop: 3 },
   headings: { flex: 1, minWidth: 200, gap: spacing.xxs },
   when: { marginLeft: spacing.xl + spacing.xs },
   body: {

@@ -20,7 +20,9 @@ export function HealthReport({ health, checkedAt }: HealthReportProps) {
   return (
     <View style={styles.stack}>
       <View style={[styles.banner, ok ? styles.bannerOk : styles.bannerBad]} role="status">
-        <Glyph name={ok ? 'check' : 'cross'} color={ok ? colors.ok : colors.danger} />
+        <View style={styles.glyph}>
+          <Glyph name={ok ? 'check' : 'cross'} color={ok ? colors.ok : colors.danger} />
+        </View>
         <View style={styles.bannerText}>
           <AppText variant="heading" tone={ok ? 'ok' : 'danger'}>
             {ok ? 'All systems working' : 'Degraded: some parts need attention'}
@@ -53,6 +55,8 @@ const styles = StyleSheet.create({
   },
   bannerOk: { backgroundColor: colors.okSoft, borderColor: colors.ok },
   bannerBad: { backgroundColor: colors.dangerSoft, borderColor: colors.danger },
+  // Centres the 16-px glyph on the 24-px heading line.
+  glyph: { marginTop: 4 },
   bannerText: { flex: 1, gap: spacing.xxs },
   list: {
     backgroundColor: colors.surface,
