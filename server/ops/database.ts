@@ -1,6 +1,7 @@
 import type { Env } from '../config/env';
 import { createDataSource } from '../db/data-source';
 import { seedDemo } from '../db/seed/seed';
+import { startBoss } from '../queue/boss';
 import { log } from './log';
 import { ensureCluster, ensureDatabase, type Cluster } from './postgres';
 
@@ -18,5 +19,8 @@ export async function prepareDatabase(env: Env, opts: { fresh: boolean }): Promi
   } finally {
     await ds.destroy();
   }
+  // Install pg-boss's schema and our queues once, before several processes race to.
+  const boss = await startBoss(env.databaseUrl, 'frostgrade-setup');
+  await boss.stop({ graceful: false, wait: true });
   return cluster;
 }

@@ -1,17 +1,30 @@
 import PgBoss from 'pg-boss';
 import { queues } from './queues';
 
+function isDeadlock(err: unknown): boolean {
+  return typeof err === 'object' && err !== null && (err as { code?: string }).code === '40P01';
+}
+
 /**
  * pg-boss on the application database (schema `pgboss`). Every process that
  * starts it also supervises, so expired jobs are retried even when only one
- * kind of process is up.
+ * kind of process is up. Processes starting together can deadlock on pg-boss's
+ * own schema set-up; the set-up step runs it first, and a deadlock is retried.
  */
 export async function startBoss(databaseUrl: string, applicationName: string): Promise<PgBoss> {
-  const boss = new PgBoss({ connectionString: databaseUrl, schema: 'pgboss', application_name: applicationName, max: 4 });
-  boss.on('error', (err: Error) => console.error(`[${applicationName}] pg-boss: ${err.message}`));
-  await boss.start();
-  for (const name of Object.values(queues)) {
-    if (!(await boss.getQueue(name))) await boss.createQueue(name, { name, retryLimit: 0, expireInSeconds: 60 });
+  for (let attempt = 1; ; attempt += 1) {
+    const boss = new PgBoss({ connectionString: databaseUrl, schema: 'pgboss', application_name: applicationName, max: 4 });
+    boss.on('error', (err: Error) => console.error(`[${applicationName}] pg-boss: ${err.message}`));
+    try {
+      await boss.start();
+      for (const name of Object.values(queues)) {
+        if (!(await boss.getQueue(name))) await boss.createQueue(name, { name, retryLimit: 0, expireInSeconds: 60 });
+      }
+      return boss;
+    } catch (err) {
+      await boss.stop({ graceful: false }).catch(() => undefined);
+      if (!isDeadlock(err) || attempt >= 5) throw err;
+      await new Promise((r) => setTimeout(r, 200 * attempt));
+    }
   }
-  return boss;
 }
