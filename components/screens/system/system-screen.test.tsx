@@ -3,6 +3,9 @@ import type { HealthResponse } from '@/shared/api/health';
 import { mockFetch, renderWithProviders } from '@/components/test-utils';
 import { SystemScreen } from './system-screen';
 
+// Skia is not available under jest; the chart is checked in the browser test.
+jest.mock('@/components/charts/line-plot', () => ({ LinePlot: () => null }));
+
 const degraded: HealthResponse = {
   status: 'degraded',
   version: '0.1.0+abc1234',

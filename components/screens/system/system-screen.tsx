@@ -2,6 +2,7 @@ import { useHealth } from '@/components/api/health';
 import { ScreenFrame } from '@/components/shell/screen-frame';
 import { Button } from '@/components/ui/button';
 import { ErrorState, LoadingState } from '@/components/ui/state-views';
+import { ChartCheck } from './chart-check';
 import { HealthReport } from './health-report';
 
 /** Health of the API and what it depends on (database, queue, workers, mail). */
@@ -26,6 +27,7 @@ export function SystemScreen() {
         />
       ) : null}
       {query.data ? <HealthReport health={query.data} checkedAt={query.dataUpdatedAt} /> : null}
+      <ChartCheck />
     </ScreenFrame>
   );
 }

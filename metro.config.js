@@ -1,0 +1,27 @@
+// Metro configuration: Expo's defaults, plus one preparation step for charts.
+//
+// Skia on the web runs on CanvasKit, a WebAssembly binary that the browser
+// fetches at run time from `/canvaskit.wasm` (see components/charts). Expo
+// serves and exports everything in `public/`, so the binary is copied there
+// from the installed `canvaskit-wasm` package whenever Metro starts (dev
+// server and `expo export` alike). Copying instead of committing keeps it in
+// step with the JavaScript half of CanvasKit after every upgrade.
+const fs = require('node:fs');
+const path = require('node:path');
+const { getDefaultConfig } = require('expo/metro-config');
+
+function ensureCanvasKitWasm(projectRoot) {
+  const source = require.resolve('canvaskit-wasm/bin/full/canvaskit.wasm', {
+    paths: [path.dirname(require.resolve('@shopify/react-native-skia/package.json'))],
+  });
+  const target = path.join(projectRoot, 'public', 'canvaskit.wasm');
+  const wanted = fs.readFileSync(source);
+  const current = fs.existsSync(target) ? fs.readFileSync(target) : null;
+  if (current && current.equals(wanted)) return;
+  fs.mkdirSync(path.dirname(target), { recursive: true });
+  fs.writeFileSync(target, wanted);
+}
+
+ensureCanvasKitWasm(__dirname);
+
+module.exports = getDefaultConfig(__dirname);
