@@ -1,0 +1,202 @@
+/**
+ * The two-point problem by shooting. The state is known at the cold end up
+ * to one unknown (Tc when the heat load is given, the heat load when Tc is
+ * given, or the current when both are given); the hot-end condition
+ * T(L) = Th fixes it. Each trial integrates the whole leg; the root is found
+ * by secant steps then Brent's method, starting from the closed-form
+ * constant-property estimate (or from the caller's warm start).
+ */
+import { secantThenBrent } from './find-root';
+import { integrateLeg, type IntegrationResult } from './integrate';
+import type { Leg } from './leg-profile';
+import type { Properties } from './material-family';
+
+/** Length-averaged S, resistivity and thermal resistivity of a leg at one temperature. */
+export type LegAverages = { seebeck: number; resistivity: number; kappa: number };
+
+const scratch: Properties = { seebeck: 0, sigma: 0, kappa: 0 };
+
+export function legAverages(leg: Leg, temperature: number): LegAverages {
+  let s = 0;
+  let rho = 0;
+  let w = 0;
+  for (const section of leg.sections) {
+    const len = section.end - section.start;
+    const t = Math.min(section.family.maxTemperature, Math.max(section.family.minTemperature, temperature));
+    // Three-point Simpson along the section: good enough for a starting guess.
+    for (const [f, weight] of [
+      [0, 1 / 6],
+      [0.5, 4 / 6],
+      [1, 1 / 6],
+    ] as const) {
+      section.family.properties(section.log10Start + f * (section.log10End - section.log10Start), t, scratch);
+      s += weight * len * scratch.seebeck;
+      rho += (weight * len) / scratch.sigma;
+      w += (weight * len) / scratch.kappa;
+    }
+  }
+  return { seebeck: s / leg.length, resistivity: rho / leg.length, kappa: leg.length / w };
+}
+
+/** Everything a converged shot knows. */
+export type Shot = {
+  coldSide: number;
+  /** Heat flux density at the cold end [W/m²] (heat load / area). */
+  coldFlux: number;
+  /** At the last trial, within the tolerance of the root. */
+  hotFlux: number;
+  /** Voltage along +x for the signed current density, at the last trial. */
+  voltage: number;
+  currentDensity: number;
+  /** d T(L) / d(unknown) at the root, for warm starts and error estimates. */
+  slope: number;
+  /** T(L) − Th at the last trial. */
+  residual: number;
+  /** Bound on the root's error in the unknown's units (the last correction applied). */
+  rootError: number;
+  shots: number;
+  evaluations: number;
+};
+
+export type ShotSettings = {
+  /** Relative tolerance of the unknown. */
+  tolerance: number;
+  /** Integrator tolerance per step. */
+  odeTolerance: number;
+  stepHint: { step: number };
+  /** Warm start: a previous root and slope (skips the coarse phase). */
+  guess?: number;
+  slope?: number;
+};
+
+/** Outcome of a root search, or the reason there is none. */
+export type ShotOutcome = { ok: true; shot: Shot } | { ok: false; reason: 'low' | 'high'; x: number; temperature: number; shots: number; evaluations: number };
+
+/** Coarse phase: loose enough for a few steps per section, tight enough for a good slope. */
+const COARSE_ODE_TOLERANCE = 1e-6;
+const COARSE_ROOT_TOLERANCE = 1e-5;
+
+type Unknown = {
+  /** Integrate the leg for a trial value of the unknown. */
+  run: (x: number, odeTolerance: number, stepHint: { step: number }) => IntegrationResult;
+  guess: number;
+  slope: number;
+  lower: number;
+  upper: number;
+  /** Absolute tolerance on the unknown at the requested relative accuracy. */
+  scale: number;
+};
+
+function gapOf(result: IntegrationResult, hotSide: number): number {
+  if (result.status === 'low') return -Infinity;
+  if (result.status === 'high') return Infinity;
+  return result.temperature - hotSide;
+}
+
+/**
+ * Two phases: a coarse shooting (loose integration) lands within ~1e-6 of the
+ * root and measures the slope; the fine phase then needs one or two Newton
+ * steps at full accuracy. A warm start skips the coarse phase.
+ */
+function solveUnknown(u: Unknown, hotSide: number, settings: ShotSettings): { root: number; slope: number; rootError: number; last: IntegrationResult; shots: number; evaluations: number } {
+  let shots = 0;
+  let evaluations = 0;
+  let last: IntegrationResult | undefined;
+  const trial = (odeTolerance: number, hint: { step: number }) => (x: number) => {
+    last = u.run(x, odeTolerance, hint);
+    shots++;
+    evaluations += last.evaluations;
+    return gapOf(last, hotSide);
+  };
+  let guess = settings.guess ?? u.guess;
+  let slope = settings.slope ?? u.slope;
+  if (settings.guess === undefined && settings.odeTolerance < COARSE_ODE_TOLERANCE) {
+    const coarse = secantThenBrent(trial(COARSE_ODE_TOLERANCE, { step: settings.stepHint.step }), guess, slope, u.lower, u.upper, COARSE_ROOT_TOLERANCE * u.scale);
+    guess = coarse.root;
+    slope = coarse.slope;
+  }
+  const fine = secantThenBrent(trial(settings.odeTolerance, settings.stepHint), guess, slope, u.lower, u.upper, settings.tolerance * u.scale);
+  const result = last as IntegrationResult;
+  return { root: fine.root, slope: fine.slope, rootError: fine.extrapolated ? Math.abs(fine.value / fine.slope) : 0, last: result, shots, evaluations };
+}
+
+function outcome(r: ReturnType<typeof solveUnknown>, hotSide: number, build: (root: number) => Pick<Shot, 'coldSide' | 'coldFlux'>, J: number): ShotOutcome {
+  if (r.last.status !== 'ok') return { ok: false, reason: r.last.status, x: r.last.x, temperature: r.last.temperature, shots: r.shots, evaluations: r.evaluations };
+  return {
+    ok: true,
+    shot: {
+      ...build(r.root),
+      hotFlux: r.last.flux,
+      voltage: r.last.voltage,
+      currentDensity: J,
+      slope: r.slope,
+      residual: r.last.temperature - hotSide,
+      rootError: r.rootError,
+      shots: r.shots,
+      evaluations: r.evaluations,
+    },
+  };
+}
+
+/** Flux scale [W/m²] for q's error weight: conduction across the leg plus Peltier flux. */
+export function legFluxScale(leg: Leg, hotSide: number, currentDensity: number): number {
+  const avg = legAverages(leg, hotSide);
+  return (avg.kappa * hotSide) / leg.length + Math.abs(avg.seebeck * hotSide * currentDensity);
+}
+
+/** Unknown Tc for a given heat load (cold flux = heat load / area). */
+export function shootColdSide(leg: Leg, currentDensity: number, hotSide: number, coldFlux: number, settings: ShotSettings): ShotOutcome {
+  const L = leg.length;
+  const J = currentDensity;
+  // Constant properties: T(L) = Tc·(1 + a) − b exactly (see PHYSICS.md).
+  // Properties averaged at Th first, then again at the mean temperature.
+  const estimate = (temperature: number) => {
+    const avg = legAverages(leg, temperature);
+    const a = (avg.seebeck * J * L) / avg.kappa;
+    const b = (coldFlux * L) / avg.kappa + (J * J * avg.resistivity * L * L) / (2 * avg.kappa);
+    return { a, tc: (hotSide + b) / (1 + a) };
+  };
+  const first = estimate(hotSide);
+  const { a, tc } = Number.isFinite(first.tc) && first.tc > 0 ? estimate(0.5 * (first.tc + hotSide)) : first;
+  const family = leg.sections[0].family;
+  const fluxScale = legFluxScale(leg, hotSide, J);
+  const r = solveUnknown(
+    {
+      run: (tc, tolerance, stepHint) => integrateLeg(leg, J, tc, coldFlux, { tolerance, fluxScale, stepHint }),
+      guess: tc,
+      slope: 1 + a > 0 ? 1 + a : 1,
+      lower: Math.max(family.minTemperature, 1e-3),
+      upper: Number.isFinite(family.maxTemperature) ? family.maxTemperature : 50 * hotSide,
+      scale: hotSide,
+    },
+    hotSide,
+    settings,
+  );
+  return outcome(r, hotSide, (root) => ({ coldSide: root, coldFlux }), J);
+}
+
+/** Unknown heat load for a given Tc. */
+export function shootHeatLoad(leg: Leg, currentDensity: number, hotSide: number, coldSide: number, settings: ShotSettings): ShotOutcome {
+  const avg = legAverages(leg, 0.5 * (hotSide + coldSide));
+  const L = leg.length;
+  const J = currentDensity;
+  const a = (avg.seebeck * J * L) / avg.kappa;
+  const fluxScale = legFluxScale(leg, hotSide, J);
+  const guess = (avg.kappa * (coldSide * (1 + a) - hotSide) - 0.5 * J * J * avg.resistivity * L * L) / L;
+  // The flux scale bounds any physical heat flux by orders of magnitude.
+  const bound = 1e3 * fluxScale + Math.abs(guess);
+  const r = solveUnknown(
+    {
+      run: (flux, tolerance, stepHint) => integrateLeg(leg, J, coldSide, flux, { tolerance, fluxScale, stepHint }),
+      guess,
+      slope: -L / avg.kappa,
+      lower: -bound,
+      upper: bound,
+      // The heat load can be ~0 at the edge of the useful range: measure it against the flux scale.
+      scale: 1e-2 * fluxScale,
+    },
+    hotSide,
+    settings,
+  );
+  return outcome(r, hotSide, (root) => ({ coldSide, coldFlux: root }), J);
+}
