@@ -1,0 +1,1 @@
+export { NotFoundScreen as default } from '@/components/screens/not-found-screen';
