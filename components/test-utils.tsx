@@ -1,7 +1,10 @@
 import type { ReactElement, ReactNode } from 'react';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { render, type RenderOptions } from '@testing-library/react-native';
+import { configure, render, type RenderOptions } from '@testing-library/react-native';
 import { SafeAreaProvider } from 'react-native-safe-area-context';
+
+// The first render of a suite can take over a second on a busy 2-core machine.
+configure({ asyncUtilTimeout: 5_000 });
 
 const safeAreaMetrics = {
   frame: { x: 0, y: 0, width: 390, height: 844 },
