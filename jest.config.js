@@ -35,7 +35,7 @@ module.exports = {
       displayName: 'client',
       preset: 'jest-expo',
       roots: roots('app', 'components'),
-      testMatch: ['**/*.test.tsx'],
+      testMatch: ['**/*.test.ts?(x)'],
       moduleNameMapper: { '^@/(.*)$': '<rootDir>/$1' },
     },
     {

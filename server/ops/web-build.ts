@@ -4,11 +4,13 @@ import { existsSync, readdirSync, readFileSync, statSync, writeFileSync } from '
 import { join } from 'node:path';
 import { log } from './log';
 
+// Generated at export time (Metro copies CanvasKit into public/), so not an input.
+const generated = new Set(['public/canvaskit.wasm']);
 const inputs = ['app', 'components', 'shared', 'assets', 'public', 'app.json', 'package-lock.json', 'babel.config.js', 'metro.config.js'];
 
 function hashTree(root: string, path: string, h: ReturnType<typeof createHash>): void {
   const full = join(root, path);
-  if (!existsSync(full)) return;
+  if (!existsSync(full) || generated.has(path)) return;
   if (statSync(full).isDirectory()) {
     for (const name of readdirSync(full).sort()) if (!name.startsWith('.') && name !== 'node_modules') hashTree(root, join(path, name), h);
   } else {
