@@ -75,6 +75,8 @@ export type ShotOutcome = { ok: true; shot: Shot } | { ok: false; reason: 'low' 
 /** Coarse phase: loose enough for a few steps per section, tight enough for a good slope. */
 const COARSE_ODE_TOLERANCE = 1e-6;
 const COARSE_ROOT_TOLERANCE = 1e-5;
+/** A warm start whose first correction is below this (relative) skips the coarse phase. */
+const WARM_START_REACH = 1e-4;
 
 type Unknown = {
   /** Integrate the leg for a trial value of the unknown. */
@@ -110,10 +112,20 @@ function solveUnknown(u: Unknown, hotSide: number, settings: ShotSettings): { ro
   };
   let guess = settings.guess ?? u.guess;
   let slope = settings.slope ?? u.slope;
-  if (settings.guess === undefined && settings.odeTolerance < COARSE_ODE_TOLERANCE) {
-    const coarse = secantThenBrent(trial(COARSE_ODE_TOLERANCE, { step: settings.stepHint.step }), guess, slope, u.lower, u.upper, COARSE_ROOT_TOLERANCE * u.scale);
-    guess = coarse.root;
-    slope = coarse.slope;
+  const coarse = () => {
+    const r = secantThenBrent(trial(COARSE_ODE_TOLERANCE, { step: settings.stepHint.step }), guess, slope, u.lower, u.upper, COARSE_ROOT_TOLERANCE * u.scale);
+    guess = r.root;
+    slope = r.slope;
+  };
+  if (settings.odeTolerance < COARSE_ODE_TOLERANCE) {
+    if (settings.guess === undefined) coarse();
+    else {
+      // A warm start close to the root goes straight to full accuracy; a far
+      // one (after a long optimiser step) is cheaper to approach coarsely.
+      const g0 = trial(settings.odeTolerance, settings.stepHint)(guess);
+      if (Number.isFinite(g0) && Math.abs(g0 / slope) <= WARM_START_REACH * u.scale) guess -= g0 / slope;
+      else coarse();
+    }
   }
   const fine = secantThenBrent(trial(settings.odeTolerance, settings.stepHint), guess, slope, u.lower, u.upper, settings.tolerance * u.scale);
   const result = last as IntegrationResult;

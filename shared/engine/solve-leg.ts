@@ -131,7 +131,7 @@ function log10At(section: LegSection, x: number): number {
   return section.log10Start + w * (section.log10End - section.log10Start);
 }
 
-export function solveLeg(problem: LegProblem, options: SolveOptions = {}): LegSolution {
+export function solveLegProblem(problem: LegProblem, options: SolveOptions = {}): LegSolution {
   const o = checkSolveOptions(options);
   if ((problem.coldSide === undefined) === (problem.heatLoad === undefined)) {
     throw new CaseError('coldSide', 'give either the heat load or the cold-side temperature, not both and not neither');

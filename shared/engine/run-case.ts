@@ -1,0 +1,233 @@
+/**
+ * Checked case in, result object out: solveLeg and optimizeLeg, the two
+ * calls the CLI, the worker and the API make. Pure: no I/O; time is read
+ * through an injectable clock only to report `seconds`.
+ */
+import { bestUniform, localBestZt, type LocalZtBaseline, type UniformBaseline } from './baselines';
+import { CaseError } from './case-error';
+import type { CheckedCase } from './check-case';
+import type { Conditions, DesignScore, Objective } from './evaluate-design';
+import { nodeFractions, type Counter, type DopingProblem } from './doping-problem';
+import { gradedLeg, segmentedLeg, type Leg, type Segment } from './leg-profile';
+import { optimizeDoping } from './optimize-doping';
+import { bestSingleSegment, optimizeSegments } from './optimize-segments';
+import { nodeSensitivities, type NodeSensitivity } from './sensitivity';
+import { solveLegProblem, type LegProfile, type LegSolution, type SolveOptions } from './solve-leg';
+
+/** What `leg solve` prints. */
+export type CaseSolution = Omit<LegSolution, 'shots' | 'evaluations'>;
+
+/** A checkpoint: where an optimisation stands, to resume it with `start`. */
+export type OptimizerState = { kind: 'doping'; perCm3: number[]; current: number } | { kind: 'segments'; fractions: number[]; current: number };
+
+export type OptimizeProgress = {
+  phase: 'uniform' | 'localBestZt' | 'profile' | 'fractions' | 'current';
+  /** Iterations of the main optimisation so far (0 during the baselines). */
+  iteration: number;
+  /** Objective at the latest point: ΔT [K], heat load [W] or COP. */
+  objective: number;
+  /** Best objective so far. */
+  best: number;
+  /** Best design so far, resumable. */
+  state: OptimizerState | null;
+};
+
+export type OptimizeOptions = {
+  /** Called after each baseline and each iteration; the worker streams these. */
+  onProgress?: (progress: OptimizeProgress) => void;
+  /** Checked between iterations; true ends the run with the best design so far. */
+  shouldStop?: () => boolean;
+  /** Resume from a checkpoint (added as the first starting point). */
+  start?: OptimizerState;
+  /**
+   * Relative accuracy of every solve.
+   * @default 1e-9
+   */
+  tolerance?: number;
+  /**
+   * Milliseconds clock, for `seconds` only.
+   * @default performance.now (Date.now where absent)
+   */
+  now?: () => number;
+};
+
+export type BaselineReport = {
+  uniform: { perCm3: number; current: number; deltaT: number; objective: number };
+  localBestZt: { current: number; deltaT: number; objective: number; doping: { x: number[]; perCm3: number[] }; passes: number; converged: boolean };
+};
+
+export type SegmentBaselineReport = { uniform: { segment: number; current: number; deltaT: number; objective: number }; localBestZt: null };
+
+export type OptimizeResult = CaseSolution & {
+  objective: { name: Objective; value: number };
+  /** Optimised doping nodes: fractions of the length from the cold end, cm⁻³. */
+  doping?: { x: number[]; perCm3: number[] };
+  /** Optimised segments (fractions) for segmented legs. */
+  segments?: Segment[];
+  baselines: BaselineReport | SegmentBaselineReport | null;
+  /** Per doping node: dΔT/dlog10 n, d²ΔT/dlog10 n² and the ±decades costing 1 K. */
+  sensitivity: NodeSensitivity[];
+  /** Leg solves spent. */
+  evaluations: number;
+  seconds: number;
+  /** True when shouldStop ended the run early. */
+  stopped: boolean;
+  state: OptimizerState | null;
+};
+
+const defaultClock = (): number => (typeof performance !== 'undefined' ? performance.now() : Date.now());
+
+function buildLeg(c: CheckedCase): Leg {
+  if (c.leg.kind === 'segments') return segmentedLeg(c.length, c.area, c.leg.segments);
+  const doping = c.leg.doping ?? { x: [0, 1], log10: [0, 0] };
+  return gradedLeg(c.length, c.area, c.leg.family, doping.x, doping.log10);
+}
+
+function strip(s: LegSolution): CaseSolution {
+  const { shots: _shots, evaluations: _evaluations, ...rest } = s;
+  return rest;
+}
+
+/** Solve a checked case (mode 'solve'). */
+export function solveLeg(c: CheckedCase, options: SolveOptions = {}): CaseSolution {
+  if (c.current === undefined) throw new CaseError('current', 'is required for solve');
+  const leg = buildLeg(c);
+  return strip(solveLegProblem({ leg, hotSide: c.hotSide, current: c.current, heatLoad: c.heatLoad, coldSide: c.heatLoad === undefined ? c.coldSide : undefined }, options));
+}
+
+function conditionsOf(c: CheckedCase): Conditions {
+  return { objective: c.objective, hotSide: c.hotSide, heatLoad: c.heatLoad ?? 0, coldSide: c.coldSide };
+}
+
+/** The full solution of the winning design, solved for the objective's unknown. */
+function finalSolution(c: CheckedCase, leg: Leg, score: DesignScore, tolerance: number): CaseSolution {
+  const problem =
+    c.objective === 'maxHeatLoad'
+      ? { leg, hotSide: c.hotSide, current: score.current, coldSide: c.coldSide }
+      : { leg, hotSide: c.hotSide, current: score.current, heatLoad: score.heatLoad };
+  return strip(solveLegProblem(problem, { tolerance }));
+}
+
+const baselineOf = (u: UniformBaseline, z: LocalZtBaseline): BaselineReport => ({
+  uniform: { perCm3: Math.pow(10, u.log10), current: u.score.current, deltaT: u.score.deltaT, objective: u.score.value },
+  localBestZt: {
+    current: z.score.current,
+    deltaT: z.score.deltaT,
+    objective: z.score.value,
+    doping: { x: z.x, perCm3: z.log10.map((v) => Math.pow(10, v)) },
+    passes: z.iterations,
+    converged: z.converged,
+  },
+});
+
+/** Optimise a checked case (mode 'optimize'). */
+export function optimizeLeg(c: CheckedCase, options: OptimizeOptions = {}): OptimizeResult {
+  const now = options.now ?? defaultClock;
+  const t0 = now();
+  const tolerance = options.tolerance ?? 1e-9;
+  const conditions = conditionsOf(c);
+  const seconds = () => (now() - t0) / 1000;
+
+  if (c.leg.kind === 'segments' || c.leg.material.kind === 'constant') {
+    const material = c.leg.kind === 'family' && c.leg.material.kind === 'constant' ? c.leg.material : undefined;
+    const segments: Segment[] = c.leg.kind === 'segments' ? c.leg.segments : [{ fraction: 1, seebeck: material?.seebeck ?? 0, sigma: material?.sigma ?? 1, kappa: material?.kappa ?? 1 }];
+    const problem = { segments, length: c.length, area: c.area, conditions, freeFractions: c.leg.kind === 'segments' && c.leg.freeFractions, current: c.current, tolerance };
+    if (options.start && options.start.kind !== 'segments') throw new CaseError('start', 'a doping checkpoint cannot resume a segmented leg');
+    if (options.start && options.start.fractions.length !== segments.length) throw new CaseError('start.fractions', `needs one fraction per segment (${segments.length})`);
+    const phase = problem.freeFractions ? 'fractions' : 'current';
+    const opt = optimizeSegments(problem, {
+      shouldStop: options.shouldStop,
+      start: options.start?.kind === 'segments' ? options.start : undefined,
+      onProgress: (p) => options.onProgress?.({ phase, iteration: p.iteration, objective: p.objective, best: p.best, state: { kind: 'segments', ...p.state } }),
+    });
+    if (!opt.score.feasible) throw new CaseError(c.objective === 'maxCop' ? 'heatLoad' : 'hotSide', 'no current gives a steady state for these conditions');
+    const single = segments.length > 1 && c.leg.kind === 'segments' ? bestSingleSegment(problem) : undefined;
+    const fitted = segments.map((s, k) => ({ ...s, fraction: opt.fractions[k] }));
+    const solution = finalSolution(c, segmentedLeg(c.length, c.area, fitted), opt.score, tolerance);
+    return {
+      ...solution,
+      objective: { name: c.objective, value: opt.score.value },
+      ...(c.leg.kind === 'segments' ? { segments: fitted } : {}),
+      baselines: single ? { uniform: { segment: single.segment, current: single.score.current, deltaT: single.score.deltaT, objective: single.score.value }, localBestZt: null } : null,
+      sensitivity: [],
+      evaluations: opt.evaluations + (single?.evaluations ?? 0) + 1,
+      seconds: seconds(),
+      stopped: opt.stopped,
+      state: { kind: 'segments', fractions: opt.fractions, current: opt.score.current },
+    };
+  }
+
+  const leg = c.leg;
+  const bounds = leg.bounds as { lower: number; upper: number };
+  const problem: DopingProblem = {
+    family: leg.family,
+    length: c.length,
+    area: c.area,
+    conditions,
+    lower: bounds.lower,
+    upper: bounds.upper,
+    controlPoints: leg.controlPoints,
+    monotone: leg.monotone,
+    current: c.current,
+    tolerance,
+  };
+  const x = nodeFractions(problem);
+  let start: { log10: number[]; current: number } | undefined;
+  if (options.start) {
+    if (options.start.kind !== 'doping') throw new CaseError('start', 'a segment checkpoint cannot resume a doping optimisation');
+    if (options.start.perCm3.length !== x.length) throw new CaseError('start.perCm3', `needs one doping per control point (${x.length})`);
+    start = { log10: options.start.perCm3.map((v) => Math.min(bounds.upper, Math.max(bounds.lower, Math.log10(v)))), current: options.start.current };
+  } else if (leg.doping) {
+    // A doping given in an optimize case is a starting point too.
+    const given = leg.doping;
+    const log10 = x.map((f) => {
+      for (let k = 0; k + 1 < given.x.length; k++) {
+        if (f <= given.x[k + 1]) return given.log10[k] + ((f - given.x[k]) / (given.x[k + 1] - given.x[k])) * (given.log10[k + 1] - given.log10[k]);
+      }
+      return given.log10[given.log10.length - 1];
+    });
+    start = { log10: log10.map((v) => Math.min(bounds.upper, Math.max(bounds.lower, v))), current: c.current ?? NaN };
+  }
+
+  const counter: Counter = { evaluations: 0 };
+  const doping = (log10: number[]) => ({ kind: 'doping' as const, perCm3: log10.map((v) => Math.pow(10, v)), current: 0 });
+  const uniform = bestUniform(problem, counter);
+  options.onProgress?.({ phase: 'uniform', iteration: 0, objective: uniform.score.value, best: uniform.score.value, state: { ...doping(x.map(() => uniform.log10)), current: uniform.score.current } });
+  const local = localBestZt(problem, uniform, counter);
+  const bestBaseline = local.score.value > uniform.score.value ? local.score.value : uniform.score.value;
+  options.onProgress?.({ phase: 'localBestZt', iteration: 0, objective: local.score.value, best: bestBaseline, state: { ...doping(x.map(() => uniform.log10)), current: uniform.score.current } });
+
+  if (start && !Number.isFinite(start.current)) start.current = uniform.score.current;
+  const opt = optimizeDoping(problem, uniform, local, counter, {
+    start,
+    shouldStop: options.shouldStop,
+    onProgress: (p) =>
+      options.onProgress?.({ phase: 'profile', iteration: p.iteration, objective: p.objective, best: p.best, state: { ...doping(p.state.log10), current: p.state.current } }),
+  });
+  const designLeg = gradedLeg(c.length, c.area, leg.family, x, opt.log10);
+  const solution = finalSolution(c, designLeg, opt.score, tolerance);
+  const sensitivity = nodeSensitivities({
+    x,
+    log10: opt.log10,
+    current: solution.current,
+    heatLoad: solution.heatLoad,
+    hotSide: c.hotSide,
+    build: (log10) => gradedLeg(c.length, c.area, leg.family, x, log10),
+    minLog10: leg.family.minLog10Doping,
+    maxLog10: leg.family.maxLog10Doping,
+    tolerance,
+  });
+  return {
+    ...solution,
+    objective: { name: c.objective, value: opt.score.value },
+    doping: { x, perCm3: opt.log10.map((v) => Math.pow(10, v)) },
+    baselines: baselineOf(uniform, local),
+    sensitivity: sensitivity.nodes,
+    evaluations: counter.evaluations + sensitivity.evaluations + 1,
+    seconds: seconds(),
+    stopped: opt.stopped,
+    state: { ...doping(opt.log10), current: opt.score.current },
+  };
+}
+
+export type { LegProfile };
