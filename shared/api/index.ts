@@ -3,3 +3,4 @@ export * from './errors';
 export * from './families';
 export * from './health';
 export * from './outbox';
+export * from './family-upload';
