@@ -99,7 +99,7 @@ function checkDopingProfile(input: CaseInput, family: MaterialFamily): { x: numb
     if (y < family.minLog10Doping - 1e-9 || y > family.maxLog10Doping + 1e-9) {
       throw new CaseError(
         field,
-        `${v} cm⁻³ is outside the table's doping range ${Math.pow(10, family.minLog10Doping).toPrecision(3)}–${Math.pow(10, family.maxLog10Doping).toPrecision(3)} cm⁻³`,
+        `${v.toExponential()} cm⁻³ is outside the table's doping range ${Math.pow(10, family.minLog10Doping).toPrecision(3)}–${Math.pow(10, family.maxLog10Doping).toPrecision(3)} cm⁻³`,
       );
     }
     return y;

@@ -53,14 +53,14 @@ export function tableFamily(rows: readonly TableRow[], field = 'material.rows'):
     const i = dopings.findIndex((d) => sameDoping(d, row.perCm3));
     const j = temperatures.findIndex((t) => sameTemperature(t, row.temperature));
     if (index[i][j] >= 0) {
-      throw new CaseError(`${field}[${k}]`, `duplicates row ${index[i][j]} (same perCm3 ${row.perCm3} and temperature ${row.temperature} K)`);
+      throw new CaseError(`${field}[${k}]`, `duplicates row ${index[i][j]} (same perCm3 ${row.perCm3.toExponential()} and temperature ${row.temperature} K)`);
     }
     index[i][j] = k;
   });
   dopings.forEach((d, i) =>
     temperatures.forEach((t, j) => {
       if (index[i][j] < 0) {
-        throw new CaseError(field, `no row at perCm3 = ${d} and temperature = ${t} K: the table must hold every doping × temperature pair of its grid`);
+        throw new CaseError(field, `no row at perCm3 = ${d.toExponential()} and temperature = ${t} K: the table must hold every doping × temperature pair of its grid`);
       }
     }),
   );
