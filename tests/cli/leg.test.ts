@@ -1,0 +1,98 @@
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+
+/**
+ * The command-line contract: `npm run -s leg -- solve|optimize FILE` prints
+ * one JSON object on stdout; invalid input exits 2 with one line on stderr
+ * naming the field and nothing on stdout.
+ */
+const root = join(__dirname, '..', '..');
+const tsx = join(root, 'node_modules', '.bin', 'tsx');
+const dir = mkdtempSync(join(tmpdir(), 'frostgrade-leg-'));
+
+type Run = { status: number | null; stdout: string; stderr: string };
+
+function leg(args: string[]): Run {
+  const r = spawnSync(tsx, [join(root, 'worker', 'cli', 'leg.ts'), ...args], { cwd: root, encoding: 'utf8', timeout: 120_000 });
+  return { status: r.status, stdout: r.stdout, stderr: r.stderr };
+}
+
+function caseFile(name: string, json: unknown): string {
+  const file = join(dir, `${name}.json`);
+  writeFileSync(file, typeof json === 'string' ? json : JSON.stringify(json));
+  return file;
+}
+
+// Ioffe's worked example (A. F. Ioffe, Semiconductor Thermoelements and
+// Thermoelectric Cooling, 1957): S = 200 µV/K, σ = 1e5 S/m, κ = 1.5 W/(m·K),
+// Th = 300 K → ΔTmax = 70.3307 K.
+const uniform = { hotSide: 300, length: 1e-3, area: 1e-6, segments: [{ fraction: 1, seebeck: 2e-4, sigma: 1e5, kappa: 1.5 }] };
+const band = { kind: 'band', carrier: 'p', effectiveMass: 1, mobility300: 350, mobilityExponent: -1.5, latticeKappa300: 1, latticeKappaExponent: -1 };
+
+describe('leg CLI', () => {
+  test('solve prints the contract fields for the bundled example', () => {
+    const r = leg(['solve', join(root, 'shared', 'engine', 'examples', 'detector-leg-solve.json')]);
+    expect(r.stderr).toBe('');
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout);
+    for (const field of ['coldSide', 'hotSide', 'deltaT', 'current', 'voltage', 'power', 'heatLoad', 'heatRejected', 'cop', 'profile']) expect(out).toHaveProperty(field);
+    for (const field of ['x', 'temperature', 'seebeck', 'sigma', 'kappa', 'zT', 'perCm3']) expect(Array.isArray(out.profile[field])).toBe(true);
+    expect(out.profile.x[0]).toBe(0);
+    expect(out.profile.x[out.profile.x.length - 1]).toBeCloseTo(0.0012, 15);
+    expect(out.profile.temperature[out.profile.temperature.length - 1]).toBeCloseTo(300, 6);
+    expect(out.power).toBeCloseTo(out.voltage * out.current, 10);
+    expect(out.deltaT).toBeCloseTo(out.hotSide - out.coldSide, 12);
+  });
+
+  test('runs through the documented npm script', () => {
+    const r = spawnSync('npm', ['run', '-s', 'leg', '--', 'solve', caseFile('npm', { ...uniform, current: 4 })], { cwd: root, encoding: 'utf8', timeout: 120_000 });
+    expect(r.status).toBe(0);
+    // Ioffe's balance: Tc = (½I²R + K·Th)/(S·I + K) with R = 0.01 Ω, K = 1.5e-3 W/K.
+    expect(JSON.parse(r.stdout).coldSide).toBeCloseTo((0.5 * 16 * 0.01 + 1.5e-3 * 300) / (2e-4 * 4 + 1.5e-3), 9);
+  });
+
+  test('optimize of a uniform constant leg reproduces Ioffe’s ΔTmax = 70.3307 K', () => {
+    const r = leg(['optimize', caseFile('ioffe', uniform)]);
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout);
+    expect(out.deltaT).toBeCloseTo(70.3307, 4);
+    expect(typeof out.evaluations).toBe('number');
+    expect(typeof out.seconds).toBe('number');
+  });
+
+  test('optimize of a band family adds doping, baselines, sensitivity, evaluations and seconds', () => {
+    const r = leg(['optimize', caseFile('band', { hotSide: 300, length: 1e-3, area: 1e-6, material: band, bounds: { minPerCm3: 1e18, maxPerCm3: 1e20 }, controlPoints: 4 })]);
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout);
+    expect(out.doping.x).toEqual([0, 1 / 3, 2 / 3, 1]);
+    expect(out.doping.perCm3).toHaveLength(4);
+    expect(out.baselines.uniform).toEqual(expect.objectContaining({ perCm3: expect.any(Number), current: expect.any(Number), deltaT: expect.any(Number) }));
+    expect(out.baselines.localBestZt).toEqual(expect.objectContaining({ current: expect.any(Number), deltaT: expect.any(Number), doping: expect.any(Object) }));
+    expect(out.sensitivity).toHaveLength(4);
+    expect(out.deltaT).toBeGreaterThan(out.baselines.uniform.deltaT);
+    expect(out.profile.perCm3).toBeDefined();
+  });
+
+  test.each<[string, string[] | (() => string[]), RegExp]>([
+    ['unknown command', ['frobnicate', 'x.json'], /^command: /],
+    ['missing file argument', ['solve'], /^FILE: /],
+    ['unreadable file', ['solve', '/nonexistent/case.json'], /^FILE: cannot read/],
+    ['invalid JSON', () => ['solve', caseFile('broken', '{"hotSide": 300,')], /^\(case\): .*not valid JSON/],
+    ['doping in m⁻³', () => ['solve', caseFile('m3', { ...uniform, segments: undefined, material: band, doping: 1e25, current: 3 })], /^doping: .*cm⁻³/],
+    ['doping node out of range', () => ['solve', caseFile('node', { ...uniform, segments: undefined, material: band, doping: { x: [0, 1], perCm3: [1e19, 1e10] }, current: 3 })], /^doping\.perCm3\[1\]: /],
+    ['segment fraction', () => ['solve', caseFile('frac', { ...uniform, current: 3, segments: [{ ...uniform.segments[0], fraction: 0.5 }, { ...uniform.segments[0], fraction: -0.5 }] })], /^segments\[1\]\.fraction: /],
+    ['band effective mass', () => ['solve', caseFile('mass', { ...uniform, segments: undefined, material: { ...band, effectiveMass: -1 }, doping: 1e19, current: 3 })], /^material\.effectiveMass: /],
+    ['NaN written as a string', () => ['solve', caseFile('nan', { ...uniform, current: 'NaN' })], /^current: /],
+    ['current missing for solve', () => ['solve', caseFile('nocurrent', uniform)], /^current: is required/],
+    ['bounds missing for a band optimisation', () => ['optimize', caseFile('nobounds', { ...uniform, segments: undefined, material: band })], /^bounds: /],
+  ])('bad input (%s): exit 2, one line naming the field on stderr, nothing on stdout', (_name, args, pattern) => {
+    const r = leg(typeof args === 'function' ? args() : args);
+    expect(r.status).toBe(2);
+    expect(r.stdout).toBe('');
+    const lines = r.stderr.split('\n').filter((l) => l.length > 0);
+    expect(lines).toHaveLength(1);
+    expect(lines[0]).toMatch(pattern);
+  });
+});
