@@ -34,7 +34,12 @@ const LN300 = Math.log(300);
 /** ln of 4π(2·m_e·k/h²)^{3/2} [m⁻³ K^{-3/2}]: N(T) = e^this·(m*·T)^{3/2}. */
 const LN_DOS_PREFACTOR = Math.log(4 * Math.PI * Math.pow((2 * ELECTRON_MASS * BOLTZMANN) / (PLANCK * PLANCK), 1.5));
 const LN_CM3_TO_M3 = Math.log(1e6);
+// Module-local copies: under tsx an imported binding is read through a
+// getter on every access, which shows in the integrator's inner loop.
+const CHARGE = ELEMENTARY_CHARGE;
+const KE = K_OVER_E;
 const K_OVER_E_SQ = K_OVER_E * K_OVER_E;
+const factorsInto = bandFactorsInto;
 
 /** Band-model temperatures the engine accepts [K]; beyond, one band at fixed doping is no model. */
 export const BAND_MIN_TEMPERATURE = 1;
@@ -60,10 +65,10 @@ export function bandFamily(p: BandParameters): MaterialFamily {
     properties(log10Doping: number, temperature: number, out: Properties) {
       const lnT = Math.log(temperature);
       const lnN = LN10 * log10Doping + LN_CM3_TO_M3; // ln(n / m⁻³)
-      bandFactorsInto(lnN + uOffset - 1.5 * lnT, factors);
+      factorsInto(lnN + uOffset - 1.5 * lnT, factors);
       const mobility = mu300 * Math.exp(p.mobilityExponent * (lnT - LN300)) * factors.mobility;
-      const sigma = Math.exp(lnN) * ELEMENTARY_CHARGE * mobility;
-      out.seebeck = sign * K_OVER_E * factors.seebeck;
+      const sigma = Math.exp(lnN) * CHARGE * mobility;
+      out.seebeck = sign * KE * factors.seebeck;
       out.sigma = sigma;
       out.kappa = p.latticeKappa300 * Math.exp(p.latticeKappaExponent * (lnT - LN300)) + K_OVER_E_SQ * factors.lorenz * sigma * temperature;
     },

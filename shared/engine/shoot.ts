@@ -15,6 +15,12 @@ import type { Properties } from './material-family';
 export type LegAverages = { seebeck: number; resistivity: number; kappa: number };
 
 const scratch: Properties = { seebeck: 0, sigma: 0, kappa: 0 };
+/** Simpson's rule along a section: good enough for a starting guess. */
+const SIMPSON: readonly (readonly [number, number])[] = [
+  [0, 1 / 6],
+  [0.5, 4 / 6],
+  [1, 1 / 6],
+];
 
 export function legAverages(leg: Leg, temperature: number): LegAverages {
   let s = 0;
@@ -23,12 +29,7 @@ export function legAverages(leg: Leg, temperature: number): LegAverages {
   for (const section of leg.sections) {
     const len = section.end - section.start;
     const t = Math.min(section.family.maxTemperature, Math.max(section.family.minTemperature, temperature));
-    // Three-point Simpson along the section: good enough for a starting guess.
-    for (const [f, weight] of [
-      [0, 1 / 6],
-      [0.5, 4 / 6],
-      [1, 1 / 6],
-    ] as const) {
+    for (const [f, weight] of SIMPSON) {
       section.family.properties(section.log10Start + f * (section.log10End - section.log10Start), t, scratch);
       s += weight * len * scratch.seebeck;
       rho += (weight * len) / scratch.sigma;
@@ -151,8 +152,8 @@ function outcome(r: ReturnType<typeof solveUnknown>, hotSide: number, build: (ro
 }
 
 /** Flux scale [W/m²] for q's error weight: conduction across the leg plus Peltier flux. */
-export function legFluxScale(leg: Leg, hotSide: number, currentDensity: number): number {
-  const avg = legAverages(leg, hotSide);
+export function legFluxScale(leg: Leg, hotSide: number, currentDensity: number, averages?: LegAverages): number {
+  const avg = averages ?? legAverages(leg, hotSide);
   return (avg.kappa * hotSide) / leg.length + Math.abs(avg.seebeck * hotSide * currentDensity);
 }
 
@@ -162,16 +163,16 @@ export function shootColdSide(leg: Leg, currentDensity: number, hotSide: number,
   const J = currentDensity;
   // Constant properties: T(L) = Tc·(1 + a) − b exactly (see PHYSICS.md).
   // Properties averaged at Th first, then again at the mean temperature.
-  const estimate = (temperature: number) => {
-    const avg = legAverages(leg, temperature);
+  const estimate = (avg: LegAverages) => {
     const a = (avg.seebeck * J * L) / avg.kappa;
     const b = (coldFlux * L) / avg.kappa + (J * J * avg.resistivity * L * L) / (2 * avg.kappa);
     return { a, tc: (hotSide + b) / (1 + a) };
   };
-  const first = estimate(hotSide);
-  const { a, tc } = Number.isFinite(first.tc) && first.tc > 0 ? estimate(0.5 * (first.tc + hotSide)) : first;
+  const atHot = legAverages(leg, hotSide);
+  const first = estimate(atHot);
+  const { a, tc } = settings.guess === undefined && Number.isFinite(first.tc) && first.tc > 0 ? estimate(legAverages(leg, 0.5 * (first.tc + hotSide))) : first;
   const family = leg.sections[0].family;
-  const fluxScale = legFluxScale(leg, hotSide, J);
+  const fluxScale = legFluxScale(leg, hotSide, J, atHot);
   const r = solveUnknown(
     {
       run: (tc, tolerance, stepHint) => integrateLeg(leg, J, tc, coldFlux, { tolerance, fluxScale, stepHint }),

@@ -1,0 +1,143 @@
+/**
+ * `npm run bench`: speed figures of the leg engine, printed, never asserted.
+ *
+ * 1. First use of the band model (its Fermi-integral tables are built lazily).
+ * 2. One solve of a uniform and of a strongly graded band-model leg, at the
+ *    issue's 1e-6 relative accuracy and at the default 1e-9, with the error
+ *    actually made (against odex + bisection at 1e-13).
+ * 3. The 11-node doping optimisation of the issue (p-type, m* = 1,
+ *    μ300 = 350 cm²/(V·s), exponents −1.5 and −1, κL300 = 1 W/(m·K),
+ *    Th = 300 K, bounds 1e18–1e20 cm⁻³): time, evaluations, ΔT against the
+ *    baselines, and the time at which the best design came within 0.05 K of
+ *    the optimum, against a reference run at 100× tighter tolerance.
+ */
+import { bandFamily } from '../../shared/engine/band-model';
+import { parseCase } from '../../shared/engine/check-case';
+import { gradedLeg, uniformLeg, type Leg } from '../../shared/engine/leg-profile';
+import { optimizeLeg, type BaselineReport } from '../../shared/engine/run-case';
+import { solveLegProblem } from '../../shared/engine/solve-leg';
+import { integrateLeg } from '../../shared/engine/integrate';
+
+type OdexModule = { Solver: new (n: number) => { absoluteTolerance: number; relativeTolerance: number; maxSteps: number; solve(f: (x: number, y: number[]) => number[], x0: number, y0: number[], x1: number): { y: number[] } } };
+// eslint-disable-next-line @typescript-eslint/no-require-imports -- odex ships TS sources that do not pass our strict type-check; load the JS.
+const odex = require('odex') as OdexModule;
+
+const material = { kind: 'band', carrier: 'p', effectiveMass: 1, mobility300: 350, mobilityExponent: -1.5, latticeKappa300: 1, latticeKappaExponent: -1 } as const;
+const L = 1e-3;
+const A = 1e-6;
+const TH = 300;
+
+function median(values: number[]): number {
+  const s = [...values].sort((a, b) => a - b);
+  return s[Math.floor(s.length / 2)];
+}
+
+function time<T>(fn: () => T, runs: number): { ms: number; result: T } {
+  let result = fn();
+  const samples: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const t = performance.now();
+    result = fn();
+    samples.push(performance.now() - t);
+  }
+  return { ms: median(samples), result };
+}
+
+/** Reference Tc by odex (Gragg–Bulirsch–Stoer at 1e-13) and bisection. */
+function referenceColdSide(leg: Leg, current: number): number {
+  const J = current / A;
+  const p = { seebeck: 0, sigma: 0, kappa: 0 };
+  const hotEnd = (tc: number) => {
+    let y = [tc, 0];
+    for (const s of leg.sections) {
+      const solver = new odex.Solver(2);
+      solver.absoluteTolerance = solver.relativeTolerance = 1e-13;
+      solver.maxSteps = 100000;
+      const slope = (s.log10End - s.log10Start) / (s.end - s.start);
+      y = solver.solve(
+        (x, st) => {
+          s.family.properties(s.log10Start + slope * (x - s.start), st[0], p);
+          const dT = (p.seebeck * st[0] * J - st[1]) / p.kappa;
+          return [dT, (J * J) / p.sigma + J * p.seebeck * dT];
+        },
+        s.start,
+        y,
+        s.end,
+      ).y;
+    }
+    return y[0] - TH;
+  };
+  let a = 150;
+  let b = 300;
+  for (let k = 0; k < 60; k++) {
+    const m = 0.5 * (a + b);
+    if (hotEnd(m) < 0) a = m;
+    else b = m;
+  }
+  return 0.5 * (a + b);
+}
+
+function main(): void {
+  const lines: string[] = [];
+  const say = (s: string) => {
+    lines.push(s);
+    console.log(s);
+  };
+  say(`Frostgrade leg engine benchmark — node ${process.version}, ${new Date().toISOString()}`);
+
+  const family = bandFamily(material);
+  const t0 = performance.now();
+  family.properties(19, 300, { seebeck: 0, sigma: 0, kappa: 0 });
+  say(`band-model tables, first use: ${(performance.now() - t0).toFixed(1)} ms (once per process)`);
+
+  const nodes = Array.from({ length: 11 }, (_, k) => k / 10);
+  const legs: [string, Leg, number][] = [
+    ['uniform 1.3e19 cm⁻³', uniformLeg(L, A, family, 19.11), 4.2],
+    ['graded 4e19→1e18 cm⁻³ (11 nodes)', gradedLeg(L, A, family, nodes, nodes.map((f) => 19.6 - 1.6 * f * f)), 4.0],
+  ];
+  say('');
+  say('single solve (public solveLeg path: shooting, recorded profile, error estimate)');
+  for (const [name, leg, current] of legs) {
+    const reference = referenceColdSide(leg, current);
+    for (const tolerance of [1e-6, 1e-9]) {
+      const { ms, result } = time(() => solveLegProblem({ leg, hotSide: TH, current, heatLoad: 0 }, { tolerance }), 300);
+      const fast = time(() => solveLegProblem({ leg, hotSide: TH, current, heatLoad: 0 }, { tolerance, estimateError: false }), 300);
+      const actual = Math.abs(result.coldSide - reference) / reference;
+      say(
+        `  ${name.padEnd(34)} tol ${tolerance.toExponential(0)}: ${ms.toFixed(3)} ms (${fast.ms.toFixed(3)} ms without the error estimate), ` +
+          `${result.shots} shots, Tc = ${result.coldSide.toFixed(6)} K, estimated rel. error ${result.accuracy.relativeError.toExponential(1)}, actual ${actual.toExponential(1)}`,
+      );
+    }
+    const one = time(() => integrateLeg(leg, current / A, 230, 0, { tolerance: 1e-10, fluxScale: 1e6 }), 500);
+    say(`  ${''.padEnd(34)} one integration at step tolerance 1e-10: ${(one.ms * 1000).toFixed(0)} µs, ${one.result.steps} steps, ${one.result.evaluations} property evaluations`);
+  }
+
+  say('');
+  say('11-node doping optimisation (maxDeltaT, free current, bounds 1e18–1e20 cm⁻³)');
+  const caseJson = { hotSide: TH, length: L, area: A, material, bounds: { minPerCm3: 1e18, maxPerCm3: 1e20 }, controlPoints: 11 };
+  const reference = optimizeLeg(parseCase(caseJson, 'optimize'), { tolerance: 1e-11 });
+  const runs: { seconds: number; within: number; deltaT: number; evaluations: number; iterations: number }[] = [];
+  let last: ReturnType<typeof optimizeLeg> | undefined;
+  for (let r = 0; r < 5; r++) {
+    const start = performance.now();
+    let within = NaN;
+    let iterations = 0;
+    last = optimizeLeg(parseCase(caseJson, 'optimize'), {
+      onProgress: (p) => {
+        iterations = Math.max(iterations, p.iteration);
+        if (Number.isNaN(within) && p.best >= reference.deltaT - 0.05) within = (performance.now() - start) / 1000;
+      },
+    });
+    runs.push({ seconds: last.seconds, within, deltaT: last.deltaT, evaluations: last.evaluations, iterations });
+  }
+  const b = last?.baselines as BaselineReport;
+  say(`  run times: ${runs.map((r) => `${(r.seconds * 1000).toFixed(0)} ms`).join(', ')} (median ${(median(runs.map((r) => r.seconds)) * 1000).toFixed(0)} ms)`);
+  say(`  best design within 0.05 K of the optimum after: median ${(median(runs.map((r) => r.within)) * 1000).toFixed(0)} ms`);
+  say(`  leg solves per run: ${runs[0].evaluations}, quasi-Newton iterations: ${runs[0].iterations}`);
+  say(`  ΔT optimum ${runs[0].deltaT.toFixed(4)} K (reference run at tolerance 1e-11: ${reference.deltaT.toFixed(4)} K, difference ${(reference.deltaT - runs[0].deltaT).toExponential(1)} K)`);
+  say(`  baselines: best uniform ${b.uniform.deltaT.toFixed(4)} K at ${b.uniform.perCm3.toExponential(3)} cm⁻³, ${b.uniform.current.toFixed(3)} A; local-best-zT ${b.localBestZt.deltaT.toFixed(4)} K at ${b.localBestZt.current.toFixed(3)} A`);
+  say(`  gain of grading over the best uniform leg: ${(runs[0].deltaT - b.uniform.deltaT).toFixed(3)} K`);
+  say(`  optimum: current ${last?.current.toFixed(4)} A, doping ${(last?.doping?.perCm3 ?? []).map((v) => v.toExponential(2)).join(' ')} cm⁻³`);
+}
+
+main();
