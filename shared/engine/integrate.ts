@@ -71,7 +71,6 @@ const props: Properties = { seebeck: 0, sigma: 0, kappa: 0 };
 
 export function integrateLeg(leg: Leg, currentDensity: number, coldTemperature: number, coldFlux: number, options: IntegrationOptions): IntegrationResult {
   const J = currentDensity;
-  const J2 = J * J;
   const rtol = options.tolerance;
   const fluxScale = options.fluxScale;
   const stops = options.stops ?? [];

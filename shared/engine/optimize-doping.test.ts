@@ -168,3 +168,26 @@ describe('tolerance band from the quadratic model', () => {
     expect(toleranceBand(0.5, 0)).toEqual({ minus: -2, plus: null });
   });
 });
+
+describe('other objectives on the band family', () => {
+  test('maxHeatLoad at a given cold side: the graded leg pumps more than both baselines, at exactly that cold side', () => {
+    const r = optimizeLeg(parseCase({ ...base, controlPoints: 5, objective: 'maxHeatLoad', coldSide: 250 }, 'optimize'));
+    const b = r.baselines as BaselineReport;
+    expect(r.coldSide).toBeCloseTo(250, 9);
+    expect(r.heatLoad).toBeGreaterThan(b.uniform.objective);
+    expect(r.heatLoad).toBeGreaterThan(b.localBestZt.objective);
+    expect(r.objective.value).toBeCloseTo(r.heatLoad, 9);
+    // Energy balance of the reported design.
+    expect(r.power).toBeCloseTo(r.voltage * r.current, 9);
+  });
+
+  test('maxCop at a given cold side and heat load: the current is the one that meets both, the COP beats the baselines', () => {
+    const r = optimizeLeg(parseCase({ ...base, controlPoints: 5, objective: 'maxCop', coldSide: 270, heatLoad: 0.05 }, 'optimize'));
+    const b = r.baselines as BaselineReport;
+    expect(r.coldSide).toBeCloseTo(270, 6);
+    expect(r.heatLoad).toBe(0.05);
+    expect(r.cop as number).toBeCloseTo(0.05 / r.power, 12);
+    expect(r.cop as number).toBeGreaterThan(b.uniform.objective);
+    expect(r.cop as number).toBeGreaterThan(b.localBestZt.objective);
+  });
+});

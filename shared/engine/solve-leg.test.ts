@@ -1,7 +1,6 @@
 import { bandFamily } from './band-model';
-import { CaseError } from './case-error';
 import { parseCase } from './check-case';
-import { gradedLeg, segmentedLeg, uniformLeg } from './leg-profile';
+import { gradedLeg, uniformLeg } from './leg-profile';
 import { optimizeLeg, solveLeg } from './run-case';
 import { solveLegProblem } from './solve-leg';
 import { tableFamily, type TableRow } from './table-family';
