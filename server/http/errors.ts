@@ -1,4 +1,5 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { MulterError } from 'multer';
 
 export type FieldError = { field: string; message: string };
 
@@ -36,14 +37,25 @@ export function errorHandler(logStacks: boolean): ErrorRequestHandler {
       res.status(err.status).json({ name: err.name, message: err.message, ...(err.errors ? { errors: err.errors } : {}) });
       return;
     }
-    // body-parser errors carry a status (413 too large, 400 malformed JSON).
-    const status = typeof err === 'object' && err !== null && 'status' in err ? Number((err as { status: unknown }).status) : 500;
-    if (status >= 400 && status < 500) {
-      const message = status === 413 ? 'Request body is too large.' : 'Request body is not valid JSON.';
-      res.status(status).json({ name: status === 413 ? 'PayloadTooLarge' : 'BadRequest', message, errors: [{ field: 'body', message }] });
+    const known = clientError(err);
+    if (known) {
+      res.status(known.status).json({ name: known.name, message: known.message, errors: known.errors });
       return;
     }
     if (logStacks) console.error(err);
     res.status(500).json({ name: 'InternalError', message: 'Something went wrong on the server; the error has been logged.' });
   };
+}
+
+/** Errors raised by body-parser and multer, mapped to the field the user can fix. */
+function clientError(err: unknown): HttpError | null {
+  if (err instanceof MulterError) {
+    if (err.code === 'LIMIT_FILE_SIZE') return new HttpError(413, 'The file is larger than 5 MB.', [{ field: 'file', message: 'too large' }], 'PayloadTooLarge');
+    return new HttpError(400, `Upload refused: ${err.message}.`, [{ field: err.field ?? 'file', message: err.message }], 'ValidationError');
+  }
+  const type = typeof err === 'object' && err !== null ? (err as { type?: unknown }).type : undefined;
+  if (type === 'entity.too.large') return new HttpError(413, 'Request body is too large.', [{ field: 'body', message: 'too large' }], 'PayloadTooLarge');
+  if (type === 'entity.parse.failed') return new HttpError(400, 'Request body is not valid JSON.', [{ field: 'body', message: 'not valid JSON' }], 'BadRequest');
+  if (type === 'charset.unsupported' || type === 'encoding.unsupported') return new HttpError(415, 'Unsupported request encoding.', [{ field: 'body', message: 'unsupported encoding' }], 'UnsupportedMediaType');
+  return null;
 }

@@ -27,6 +27,11 @@ export function teamContext(ds: DataSource, teamSlug: string): RequestHandler {
   };
 }
 
+/** Who is acting, for provenance ("created by"). Until sign-in exists, a visitor of the demo team. */
+export function actorName(_req: { team?: Team }): string {
+  return 'demo visitor';
+}
+
 export function requireTeam(req: { team?: Team }): Team {
   if (!req.team) throw new NotFoundError('team');
   return req.team;

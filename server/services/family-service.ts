@@ -1,32 +1,111 @@
-import type { DataSource } from 'typeorm';
-import { MaterialFamily, Team } from '../db/entities';
+import type { DataSource, EntityManager } from 'typeorm';
+import type { FamiliesResponse, FamilyDetailResponse, FamilySummary } from '../../shared/api';
+import type { createFamilyRequestSchema, updateFamilyRequestSchema, duplicateFamilyRequestSchema } from '../../shared/api';
+import type { MaterialInput } from '../../shared/engine';
+import type { z } from 'zod';
+import { MaterialFamily, MaterialFamilyVersion, Team } from '../db/entities';
+import { HttpError, ValidationError } from '../http/errors';
+import { checkDefinition } from './family-definition';
+import { detail, findFamily, findVersion, summarise } from './family-store';
 
-export type FamilySummary = {
-  id: string;
-  name: string;
-  kind: MaterialFamily['kind'];
-  carrier: MaterialFamily['carrier'];
-  summary: string;
-  source: string;
-  createdBy: string;
-  createdAt: string;
-  isDemo: boolean;
-};
+type CreateInput = z.output<typeof createFamilyRequestSchema>;
+type UpdateInput = z.output<typeof updateFamilyRequestSchema>;
+type DuplicateInput = z.output<typeof duplicateFamilyRequestSchema>;
 
-export async function listFamilies(ds: DataSource, team: Team): Promise<{ team: { id: string; name: string }; families: FamilySummary[] }> {
-  const rows = await ds.getRepository(MaterialFamily).find({ where: { teamId: team.id }, order: { name: 'ASC' } });
+export async function listFamilies(ds: DataSource, team: Team, archived: boolean): Promise<FamiliesResponse> {
+  const rows = await ds.getRepository(MaterialFamily)
+    .createQueryBuilder('f')
+    .innerJoinAndMapOne('f.current', MaterialFamilyVersion, 'v', 'v.familyId = f.id AND v.version = f.currentVersion')
+    .where('f.teamId = :team AND f.archived = :archived', { team: team.id, archived })
+    .orderBy('lower(f.name)', 'ASC')
+    .getMany();
   return {
     team: { id: team.id, name: team.name },
-    families: rows.map((f) => ({
-      id: f.id,
-      name: f.name,
-      kind: f.kind,
-      carrier: f.carrier,
-      summary: f.summary,
-      source: f.source,
-      createdBy: f.createdBy,
-      createdAt: f.createdAt.toISOString(),
-      isDemo: f.isDemo,
-    })),
+    families: rows.map((f) => summarise(f, (f as MaterialFamily & { current: MaterialFamilyVersion }).current)),
   };
+}
+
+export function getFamily(ds: DataSource, team: Team, id: unknown, version?: number): Promise<FamilyDetailResponse> {
+  return ds.transaction(async (m) => detail(m, await findFamily(m, team, id), version));
+}
+
+async function assertNameFree(m: EntityManager, team: Team, name: string, except?: string): Promise<void> {
+  const clash = await m.getRepository(MaterialFamily).createQueryBuilder('f')
+    .where('f.teamId = :team AND lower(f.name) = lower(:name)', { team: team.id, name })
+    .andWhere(except ? 'f.id <> :except' : 'TRUE', { except })
+    .getOne();
+  if (clash) throw new HttpError(409, `A family named "${clash.name}" already exists in this team.`, [{ field: 'name', message: 'another family of the team has this name' }], 'Conflict');
+}
+
+type NewFamily = { name: string; summary: string; source: string; definition: MaterialInput; isDemo?: boolean };
+
+/** Inserts the family and its version 1 in the caller's transaction. */
+export async function insertFamily(m: EntityManager, team: Team, input: NewFamily, by: string): Promise<MaterialFamily> {
+  const carrier = checkDefinition(input.definition);
+  await assertNameFree(m, team, input.name);
+  const families = m.getRepository(MaterialFamily);
+  const f = await families.save(families.create({ teamId: team.id, name: input.name, kind: input.definition.kind, carrier, createdBy: by, isDemo: input.isDemo ?? false, currentVersion: 1 }));
+  const versions = m.getRepository(MaterialFamilyVersion);
+  await versions.save(versions.create({ familyId: f.id, version: 1, definition: input.definition as Record<string, unknown>, summary: input.summary, source: input.source, createdBy: by }));
+  return f;
+}
+
+export async function createFamily(ds: DataSource, team: Team, input: CreateInput, by: string): Promise<FamilySummary> {
+  return ds.transaction(async (m) => {
+    const f = await insertFamily(m, team, input, by);
+    return summarise(f, await findVersion(m, f));
+  });
+}
+
+/** Name changes in place; any change of content writes the next immutable version. */
+export async function updateFamily(ds: DataSource, team: Team, id: unknown, input: UpdateInput, by: string): Promise<FamilySummary> {
+  return ds.transaction(async (m) => {
+    const f = await findFamily(m, team, id, true);
+    const current = await findVersion(m, f);
+    if (input.name !== undefined && input.name !== f.name) {
+      await assertNameFree(m, team, input.name, f.id);
+      f.name = input.name;
+    }
+    if (input.definition && input.definition.kind !== f.kind) {
+      throw new ValidationError([{ field: 'definition.kind', message: `this family is a ${f.kind} family; a ${input.definition.kind} family is a new family` }]);
+    }
+    const next = {
+      definition: (input.definition ?? current.definition) as MaterialInput,
+      summary: input.summary ?? current.summary,
+      source: input.source ?? current.source,
+    };
+    const changed = JSON.stringify(next.definition) !== JSON.stringify(current.definition) || next.summary !== current.summary || next.source !== current.source;
+    if (changed) {
+      const carrier = checkDefinition(next.definition);
+      if (f.carrier && carrier !== f.carrier) throw new ValidationError([{ field: 'definition', message: `the family is ${f.carrier}-type; this definition is ${carrier}-type` }]);
+      const versions = m.getRepository(MaterialFamilyVersion);
+      f.currentVersion += 1;
+      await versions.save(versions.create({ familyId: f.id, version: f.currentVersion, ...next, definition: next.definition as Record<string, unknown>, createdBy: by }));
+    }
+    const saved = await m.getRepository(MaterialFamily).save(f);
+    return summarise(saved, await findVersion(m, saved));
+  });
+}
+
+export async function duplicateFamily(ds: DataSource, team: Team, id: unknown, input: DuplicateInput, by: string): Promise<FamilySummary> {
+  return ds.transaction(async (m) => {
+    const f = await findFamily(m, team, id);
+    const v = await findVersion(m, f);
+    const copy = await insertFamily(m, team, {
+      name: input.name,
+      summary: v.summary,
+      source: `${v.source}${v.source ? '\n' : ''}Duplicated from "${f.name}" version ${v.version}.`,
+      definition: v.definition as MaterialInput,
+    }, by);
+    return summarise(copy, await findVersion(m, copy));
+  });
+}
+
+export async function setArchived(ds: DataSource, team: Team, id: unknown, archived: boolean): Promise<FamilySummary> {
+  return ds.transaction(async (m) => {
+    const f = await findFamily(m, team, id, true);
+    f.archived = archived;
+    const saved = await m.getRepository(MaterialFamily).save(f);
+    return summarise(saved, await findVersion(m, saved));
+  });
 }

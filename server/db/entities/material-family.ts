@@ -1,4 +1,4 @@
-import { Column, CreateDateColumn, Entity, Index, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
+import { Column, CreateDateColumn, Entity, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
 import { Team } from './team';
 
 export type FamilyKind = 'band' | 'table' | 'constant';
@@ -6,11 +6,10 @@ export type Carrier = 'p' | 'n';
 
 /**
  * A doping-controlled material family: how S, σ and κ follow carrier
- * concentration and temperature. `definition` holds the engine's material
- * object (SI except doping in cm⁻³ and mobility in cm²/(V·s)).
+ * concentration and temperature. Its content lives in immutable versions
+ * (MaterialFamilyVersion); this row names it and points at the current one.
  */
 @Entity('material_family')
-@Index(['teamId', 'name'])
 export class MaterialFamily {
   @PrimaryGeneratedColumn('uuid')
   id!: string;
@@ -24,28 +23,28 @@ export class MaterialFamily {
   @Column({ type: 'text' })
   name!: string;
 
+  /** Fixed for the life of the family: a new kind is a new family. */
   @Column({ type: 'text' })
   kind!: FamilyKind;
 
   @Column({ type: 'text', nullable: true })
   carrier!: Carrier | null;
 
-  @Column({ type: 'text', default: '' })
-  summary!: string;
-
-  /** Provenance: where the numbers come from ("Hall and Seebeck on 12 samples…"). */
-  @Column({ type: 'text', default: '' })
-  source!: string;
-
   @Column({ type: 'text' })
   createdBy!: string;
-
-  @Column({ type: 'jsonb' })
-  definition!: Record<string, unknown>;
 
   @Column({ type: 'boolean', default: false })
   isDemo!: boolean;
 
+  @Column({ type: 'integer', default: 1 })
+  currentVersion!: number;
+
+  @Column({ type: 'boolean', default: false })
+  archived!: boolean;
+
   @CreateDateColumn({ type: 'timestamptz' })
   createdAt!: Date;
+
+  @UpdateDateColumn({ type: 'timestamptz' })
+  updatedAt!: Date;
 }

@@ -1,3 +1,5 @@
+import { familyFromMaterial, propertiesAt, type MaterialInput } from '../../../shared/engine';
+
 /**
  * Demo data for an invented lab: Northlight Sensors' detector-cooling group,
  * who need a small Peltier stage under an infrared detector. The numbers are
@@ -7,38 +9,65 @@
 export const demoTeam = { slug: 'northlight', name: 'Northlight Sensors — detector cooling group' };
 export const otherTeam = { slug: 'harbour-cryo', name: 'Harbour Cryo Lab (second demo team)' };
 
-export type DemoFamily = {
-  name: string;
-  kind: 'band' | 'table' | 'constant';
-  carrier: 'p' | 'n' | null;
-  summary: string;
-  source: string;
-  definition: Record<string, unknown>;
-};
+export type DemoFamily = { name: string; summary: string; source: string; definition: MaterialInput };
 
-export const demoFamilies: DemoFamily[] = [
+const modelFamilies: DemoFamily[] = [
   {
     name: 'NL-P7 (Bi,Sb)₂Te₃-like, p-type band model',
-    kind: 'band',
-    carrier: 'p',
     summary: 'Single parabolic band, acoustic-phonon scattering; m* = 1.0 m₀, μ₀ = 350 cm²/(V·s)·(T/300 K)^−1.5, κL = 1.0 W/(m·K)·(T/300 K)^−1.',
     source: 'Demo data: typical values for a p-type bismuth-telluride alloy, from memory; not a measurement.',
     definition: { kind: 'band', carrier: 'p', effectiveMass: 1.0, mobility300: 350, mobilityExponent: -1.5, latticeKappa300: 1.0, latticeKappaExponent: -1 },
   },
   {
     name: 'NL-N3 Bi₂(Te,Se)₃-like, n-type band model',
-    kind: 'band',
-    carrier: 'n',
     summary: 'Single parabolic band, acoustic-phonon scattering; m* = 1.1 m₀, μ₀ = 300 cm²/(V·s)·(T/300 K)^−1.5, κL = 1.3 W/(m·K)·(T/300 K)^−1.',
     source: 'Demo data: typical values for an n-type bismuth-telluride alloy, from memory; not a measurement.',
     definition: { kind: 'band', carrier: 'n', effectiveMass: 1.1, mobility300: 300, mobilityExponent: -1.5, latticeKappa300: 1.3, latticeKappaExponent: -1 },
   },
   {
     name: 'Reference leg, constant properties',
-    kind: 'constant',
-    carrier: 'p',
     summary: 'S = 200 µV/K, σ = 1000 S/cm, κ = 1.5 W/(m·K) at every temperature: the textbook leg for checking closed-form limits.',
     source: 'Demo data: round numbers chosen for hand checks.',
     definition: { kind: 'constant', seebeck: 200e-6, sigma: 1e5, kappa: 1.5 },
   },
 ];
+
+/** Small deterministic generator (mulberry32), so every seed writes the same demo table. */
+function random(seed: number): () => number {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+/**
+ * An invented "measured" table: the p-type model sampled on an uneven grid
+ * (no sample between 3e19 and 1.2e20 cm⁻³, so the upload preview shows a
+ * sparse region) with ±2 % scatter on S and ±3 % on σ and κ.
+ */
+function measuredDemo(): DemoFamily {
+  const model = familyFromMaterial(modelFamilies[0]!.definition);
+  const rnd = random(7);
+  const jitter = (v: number, rel: number): number => v * (1 + rel * (2 * rnd() - 1));
+  const dopings = [1e18, 2e18, 4e18, 8e18, 1.5e19, 3e19, 1.2e20];
+  const temperatures = [220, 250, 280, 300, 330, 360, 400];
+  const rows = dopings.flatMap((n) => temperatures.map((t) => {
+    const p = propertiesAt(model, n, t);
+    const r = (v: number): number => Number(v.toPrecision(4));
+    return { perCm3: n, temperature: t, seebeck: r(jitter(p.seebeck, 0.02)), sigma: r(jitter(p.sigma, 0.03)), kappa: r(jitter(p.kappa, 0.03)) };
+  }));
+  return {
+    name: 'NL-P7 ingot batch 7, measured (demo)',
+    summary: '7 carrier concentrations × 7 temperatures, 220–400 K; no sample between 3e19 and 1.2e20 cm⁻³.',
+    source: 'Demo data: generated from the NL-P7 band model with ±2–3 % invented scatter to look like Hall, Seebeck and laser-flash measurements; not a measurement.',
+    definition: { kind: 'table', rows },
+  };
+}
+
+export function demoFamilies(): DemoFamily[] {
+  return [...modelFamilies, measuredDemo()];
+}

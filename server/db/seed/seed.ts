@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm';
 import { MaterialFamily, Team } from '../entities';
+import { insertFamily } from '../../services/family-service';
 import { demoFamilies, demoTeam, otherTeam } from './demo-data';
 
 /** Insert the demo lab if it is missing; running it twice changes nothing. */
@@ -17,9 +18,9 @@ export async function seedDemo(ds: DataSource): Promise<{ teams: number; familie
     };
     const lab = await ensureTeam(demoTeam);
     await ensureTeam(otherTeam);
-    for (const f of demoFamilies) {
+    for (const f of demoFamilies()) {
       if (await families.existsBy({ teamId: lab.id, name: f.name })) continue;
-      await families.save(families.create({ ...f, teamId: lab.id, createdBy: 'demo seed', isDemo: true }));
+      await insertFamily(m, lab, { ...f, isDemo: true }, 'demo seed');
       addedFamilies += 1;
     }
     return { teams: addedTeams, families: addedFamilies };
