@@ -27,6 +27,11 @@ export type BoxOptions = {
   valueTolerance?: number;
   /** Largest change of any variable in the first step. @default 0.25 */
   initialStep?: number;
+  /**
+   * Gradient at a point just evaluated (f(x) = fx), when the caller has a
+   * better one than forward differences; return undefined to fall back.
+   */
+  gradient?: (x: readonly number[], fx: number) => number[] | undefined;
   /** Called after every iteration with the new point and value. */
   onIteration?: (iteration: number, x: readonly number[], value: number) => void;
   /** Checked before every iteration; true ends the run, keeping the best point. */
@@ -58,6 +63,8 @@ export function minimizeBox(f: (x: readonly number[]) => number, start: readonly
     return Number.isNaN(v) ? Infinity : v;
   };
   const gradient = (x: readonly number[], fx: number): number[] => {
+    const supplied = options.gradient?.(x, fx);
+    if (supplied) return supplied;
     const g = new Array<number>(n).fill(0);
     for (let i = 0; i < n; i++) {
       const h = steps[i];

@@ -58,7 +58,7 @@ export function scoreDesign(leg: Leg, current: number, conditions: Conditions, w
   if (conditions.objective === 'maxHeatLoad') {
     const coldSide = conditions.coldSide as number;
     const out = shootHeatLoad(leg, J, hotSide, coldSide, settings);
-    if (!out.ok || Math.abs(out.shot.residual) > 1e-6 * hotSide) return { ...INFEASIBLE, current };
+    if (!out.ok || !out.shot.converged) return { ...INFEASIBLE, current };
     warm.guess = out.shot.coldFlux;
     warm.slope = out.shot.slope;
     const heatLoad = out.shot.coldFlux * leg.area;
@@ -66,7 +66,7 @@ export function scoreDesign(leg: Leg, current: number, conditions: Conditions, w
     return { feasible: true, value: heatLoad, current, coldSide, heatLoad, deltaT: hotSide - coldSide, cop: power > 0 ? heatLoad / power : null };
   }
   const out = shootColdSide(leg, J, hotSide, conditions.heatLoad / leg.area, settings);
-  if (!out.ok || Math.abs(out.shot.residual) > 1e-6 * hotSide) return { ...INFEASIBLE, current };
+  if (!out.ok || !out.shot.converged) return { ...INFEASIBLE, current };
   warm.guess = out.shot.coldSide;
   warm.slope = out.shot.slope;
   const power = (out.shot.hotFlux - out.shot.coldFlux) * leg.area;
@@ -119,4 +119,56 @@ function scoreCop(leg: Leg, conditions: Conditions, warm: WarmStart, tolerance: 
   const power = (end.flux - q0) * leg.area;
   const cop = power > 0 ? heatLoad / power : null;
   return { feasible: true, value: cop ?? 0, current, coldSide, heatLoad, deltaT: hotSide - coldSide, cop };
+}
+
+/** A design perturbed in one variable, for implicitGradient. */
+export type DesignPoint = { leg: Leg; current: number };
+
+/**
+ * d(objective)/d(variable) for maxDeltaT and maxHeatLoad by implicit
+ * differentiation of the shooting condition g(root, v) = T(L) − Th = 0:
+ * d root/dv = −(∂g/∂v)/(∂g/∂root). Both partials are finite differences of
+ * one integration each, all replaying the step sequence of one adaptive
+ * integration at the base root — so a gradient costs n + 2 integrations
+ * instead of n shooting solves, and is free of step-selection noise.
+ * Returns undefined for maxCop (whose current is itself a root) or when an
+ * integration leaves the material's range; callers then fall back to plain
+ * finite differences.
+ */
+export function implicitGradient(
+  base: DesignPoint,
+  root: number,
+  conditions: Conditions,
+  tolerance: number,
+  perturbed: (i: number) => { point: DesignPoint; step: number },
+  count: number,
+): number[] | undefined {
+  if (conditions.objective === 'maxCop') return undefined;
+  const { leg } = base;
+  const unknownIsCold = conditions.objective === 'maxDeltaT';
+  const q0 = conditions.heatLoad / leg.area;
+  const tc = conditions.coldSide as number;
+  const density = (p: DesignPoint) => (p.leg.sign * p.current) / p.leg.area;
+  const fluxScale = legFluxScale(leg, conditions.hotSide, density(base));
+  const odeTolerance = odeToleranceFor(tolerance);
+  const steps: number[] = [];
+  const at = (p: DesignPoint, value: number, replay?: readonly number[]) =>
+    integrateLeg(p.leg, density(p), unknownIsCold ? value : tc, unknownIsCold ? q0 : value, { tolerance: odeTolerance, fluxScale, record: replay ? undefined : steps, replay });
+  const reference = at(base, root);
+  if (reference.status !== 'ok') return undefined;
+  const delta = unknownIsCold ? 1e-4 * root : 1e-6 * fluxScale;
+  const shifted = at(base, root + delta, steps);
+  if (shifted.status !== 'ok') return undefined;
+  const slope = (shifted.temperature - reference.temperature) / delta;
+  if (!(slope !== 0 && Number.isFinite(slope))) return undefined;
+  const gradient: number[] = [];
+  for (let i = 0; i < count; i++) {
+    const { point, step } = perturbed(i);
+    const r = at(point, root, steps);
+    if (r.status !== 'ok') return undefined;
+    const dRoot = -(r.temperature - reference.temperature) / step / slope;
+    // ΔT = Th − Tc falls as Tc rises; the heat load is the root times the area.
+    gradient.push(unknownIsCold ? -dRoot : dRoot * leg.area);
+  }
+  return gradient;
 }

@@ -79,6 +79,8 @@ export type SecantResult = RootResult & {
   slope: number;
   /** True when the root is the last trial plus a Newton correction smaller than the tolerance (not itself evaluated). */
   extrapolated: boolean;
+  /** False when the search gave up: the root lies beyond [lower, upper] or the evaluation budget ran out. */
+  converged: boolean;
 };
 
 /**
@@ -116,7 +118,7 @@ export function secantThenBrent(
   for (;;) {
     const gx = g(x);
     evaluations++;
-    if (gx === 0) return { root: x, value: 0, evaluations, slope, extrapolated: false };
+    if (gx === 0) return { root: x, value: 0, evaluations, slope, extrapolated: false, converged: true };
     const low = gx < 0;
     if (low) {
       below = x;
@@ -129,10 +131,13 @@ export function secantThenBrent(
       const secant = (gx - gPrev) / (x - xPrev);
       if (Number.isFinite(secant) && secant !== 0 && secant > 0 === increasing) slope = secant;
     }
-    if (Number.isFinite(gx) && Math.abs(gx / slope) <= tolerance) return { root: x - gx / slope, value: gx, evaluations, slope, extrapolated: true };
+    if (Number.isFinite(gx) && Math.abs(gx / slope) <= tolerance) return { root: x - gx / slope, value: gx, evaluations, slope, extrapolated: true, converged: true };
     const bracketWidth = Math.abs(above - below);
-    if (haveBelow && haveAbove && bracketWidth <= tolerance) return { root: 0.5 * (above + below), value: gx, evaluations, slope, extrapolated: false };
-    if (evaluations >= maxEvaluations) return { root: x, value: gx, evaluations, slope, extrapolated: false };
+    if (haveBelow && haveAbove && bracketWidth <= tolerance) return { root: 0.5 * (above + below), value: gx, evaluations, slope, extrapolated: false, converged: true };
+    if (evaluations >= maxEvaluations) return { root: x, value: gx, evaluations, slope, extrapolated: false, converged: false };
+    // Pinned at a bound with the root beyond it: no root inside [lower, upper].
+    const wantsUp = low === increasing;
+    if ((wantsUp && upper - x <= tolerance) || (!wantsUp && x - lower <= tolerance)) return { root: x, value: gx, evaluations, slope, extrapolated: false, converged: false };
     if (haveBelow && haveAbove) {
       if (bracketWidth > 0.5 * width) stalls++;
       else {

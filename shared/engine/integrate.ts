@@ -32,6 +32,16 @@ export type IntegrationOptions = {
   stops?: readonly number[];
   /** Step size carried between calls; updated on return. */
   stepHint?: { step: number };
+  /** Receives the end of every accepted step (for a later replay). */
+  record?: number[];
+  /**
+   * Take exactly these steps (recorded on a neighbouring problem) without
+   * error control. The result is then a smooth function of the start state
+   * and the parameters, so finite differences of it are free of the
+   * step-selection noise of adaptive integration ("internal numerical
+   * differentiation"). Stops are ignored.
+   */
+  replay?: readonly number[];
 };
 
 export type IntegrationStatus = 'ok' | 'low' | 'high';
@@ -75,6 +85,9 @@ export function integrateLeg(leg: Leg, currentDensity: number, coldTemperature: 
   const fluxScale = options.fluxScale;
   const stops = options.stops ?? [];
   const onPoint = options.onPoint;
+  const record = options.record;
+  const replay = options.replay;
+  let replayIndex = 0;
   let h = options.stepHint?.step ?? leg.length / 16;
   let T = coldTemperature;
   let q = coldFlux;
@@ -117,9 +130,17 @@ export function integrateLeg(leg: Leg, currentDensity: number, coldTemperature: 
     while (stopIndex < stops.length && stops[stopIndex] <= x) stopIndex++;
     rhs(0, x, T, q);
     while (x < s.end) {
-      const target = stopIndex < stops.length && stops[stopIndex] < s.end ? stops[stopIndex] : s.end;
+      let target: number;
+      let landing: boolean;
+      if (replay) {
+        if (replayIndex >= replay.length) throw new Error('integrateLeg: the replayed steps do not cover the leg');
+        target = Math.min(replay[replayIndex++], s.end);
+        landing = true;
+      } else {
+        target = stopIndex < stops.length && stops[stopIndex] < s.end ? stops[stopIndex] : s.end;
+        landing = x + h >= target - 1e-12 * leg.length;
+      }
       const wanted = h;
-      const landing = x + h >= target - 1e-12 * leg.length;
       const step = landing ? target - x : h;
       // Stages 2–7.
       rhs(1, x + C2 * step, T + step * A21 * kT[0], q + step * A21 * kq[0]);
@@ -144,13 +165,15 @@ export function integrateLeg(leg: Leg, currentDensity: number, coldTemperature: 
       const errQ = step * (E1 * kq[0] + E3 * kq[2] + E4 * kq[3] + E5 * kq[4] + E6 * kq[5] + E7 * kq[6]);
       let err = Math.max(Math.abs(errT) / (rtol * Math.max(Math.abs(T), Math.abs(Tn))), Math.abs(errQ) / (rtol * (Math.max(Math.abs(q), Math.abs(qn)) + fluxScale)));
       if (!(err === err) || !(Tn > 0)) err = Infinity; // NaN or a non-physical stage: reject
-      if (err <= 1) {
+      if (replay && !(Tn > 0)) return finish('low', x);
+      if (err <= 1 || replay) {
         const Vn = V + step * (B1 * kV[0] + B3 * kV[2] + B4 * kV[3] + B5 * kV[4] + B6 * kV[5]);
         x = landing ? target : x + step;
         T = Tn;
         q = qn;
         V = Vn;
         steps++;
+        record?.push(x);
         kT[0] = kT[6];
         kq[0] = kq[6];
         kV[0] = kV[6];
@@ -160,7 +183,7 @@ export function integrateLeg(leg: Leg, currentDensity: number, coldTemperature: 
         h = landing && step < wanted ? wanted : step * growth;
         if (T < low * (1 - 1e-12)) return finish('low', x);
         if (T > high * (1 + 1e-12)) return finish('high', x);
-        if (landing && target < s.end) {
+        if (!replay && landing && target < s.end) {
           onPoint?.(x, T, q, V, s);
           stopIndex++;
         }

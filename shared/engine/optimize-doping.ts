@@ -13,7 +13,7 @@
  * are tried; the better wins.
  */
 import { minimizeBox } from './box-bfgs';
-import { newWarmStart, referenceCurrent, scoreDesign, type DesignScore } from './evaluate-design';
+import { implicitGradient, newWarmStart, referenceCurrent, scoreDesign, type DesignPoint, type DesignScore } from './evaluate-design';
 import { currentIsFree, legFor, nodeFractions, type Counter, type DopingProblem } from './doping-problem';
 import { profileAt } from './leg-profile';
 import type { LocalZtBaseline, UniformBaseline } from './baselines';
@@ -99,6 +99,9 @@ function monotoneParametrisation(n: number, lo: number, hi: number, increasing: 
   };
 }
 
+/** Step of the implicit-gradient differences (replayed integrations are smooth, so it can be small). */
+const GRADIENT_STEP = 1e-6;
+
 export type DopingRunOptions = {
   onProgress?: (p: Progress) => void;
   shouldStop?: () => boolean;
@@ -134,18 +137,44 @@ export function optimizeDoping(problem: DopingProblem, uniform: UniformBaseline,
       const v0 = [...p.fromProfile(start.log10), ...(freeCurrent ? [current0 / reference] : [])];
       const lower = [...p.lower, ...(freeCurrent ? [1e-3] : [])];
       const upper = [...p.upper, ...(freeCurrent ? [50] : [])];
+      const design = (v: readonly number[]): DesignPoint => ({
+        leg: legFor(problem, x, p.toProfile(v.slice(0, n))),
+        current: freeCurrent ? v[n] * reference : (problem.current ?? 0),
+      });
+      // The last point scored and its shooting root, for the implicit gradient there.
+      let last: { v: number[]; root: number } | undefined;
       const f = (v: readonly number[]) => {
         counter.evaluations++;
-        const log10 = p.toProfile(v.slice(0, n));
-        const current = freeCurrent ? v[n] * reference : (problem.current ?? 0);
-        const score = scoreDesign(legFor(problem, x, log10), current, problem.conditions, warm, problem.tolerance);
-        consider(log10, score);
+        const point = design(v);
+        const score = scoreDesign(point.leg, point.current, problem.conditions, warm, problem.tolerance);
+        consider(p.toProfile(v.slice(0, n)), score);
+        const root = problem.conditions.objective === 'maxHeatLoad' ? score.heatLoad / problem.area : score.coldSide;
+        last = { v: [...v], root: score.feasible ? root : NaN };
         return score.feasible ? -score.value / scale : score.value === -Infinity ? Infinity : 1 - score.value;
+      };
+      const gradient = (v: readonly number[]): number[] | undefined => {
+        if (!last || !Number.isFinite(last.root) || last.v.some((vi, i) => vi !== v[i])) return undefined;
+        counter.evaluations++;
+        const g = implicitGradient(
+          design(v),
+          last.root,
+          problem.conditions,
+          problem.tolerance,
+          (i) => {
+            const step = v[i] + GRADIENT_STEP <= upper[i] ? GRADIENT_STEP : -GRADIENT_STEP;
+            const moved = [...v];
+            moved[i] += step;
+            return { point: design(moved), step };
+          },
+          v.length,
+        );
+        return g?.map((d) => -d / scale);
       };
       const result = minimizeBox(f, v0, {
         lower,
         upper,
         steps: lower.map(() => 1e-4),
+        gradient,
         gradientTolerance: 1e-6,
         valueTolerance: 1e-10,
         initialStep: 0.1,

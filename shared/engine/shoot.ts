@@ -55,6 +55,8 @@ export type Shot = {
   residual: number;
   /** Bound on the root's error in the unknown's units (the last correction applied). */
   rootError: number;
+  /** False when no root was found inside the material's range (then residual's sign says which way it lies). */
+  converged: boolean;
   shots: number;
   evaluations: number;
 };
@@ -101,7 +103,11 @@ function gapOf(result: IntegrationResult, hotSide: number): number {
  * root and measures the slope; the fine phase then needs one or two Newton
  * steps at full accuracy. A warm start skips the coarse phase.
  */
-function solveUnknown(u: Unknown, hotSide: number, settings: ShotSettings): { root: number; slope: number; rootError: number; last: IntegrationResult; shots: number; evaluations: number } {
+function solveUnknown(
+  u: Unknown,
+  hotSide: number,
+  settings: ShotSettings,
+): { root: number; slope: number; rootError: number; converged: boolean; last: IntegrationResult; shots: number; evaluations: number } {
   let shots = 0;
   let evaluations = 0;
   let last: IntegrationResult | undefined;
@@ -130,7 +136,7 @@ function solveUnknown(u: Unknown, hotSide: number, settings: ShotSettings): { ro
   }
   const fine = secantThenBrent(trial(settings.odeTolerance, settings.stepHint), guess, slope, u.lower, u.upper, settings.tolerance * u.scale);
   const result = last as IntegrationResult;
-  return { root: fine.root, slope: fine.slope, rootError: fine.extrapolated ? Math.abs(fine.value / fine.slope) : 0, last: result, shots, evaluations };
+  return { root: fine.root, slope: fine.slope, rootError: fine.extrapolated ? Math.abs(fine.value / fine.slope) : 0, converged: fine.converged, last: result, shots, evaluations };
 }
 
 function outcome(r: ReturnType<typeof solveUnknown>, hotSide: number, build: (root: number) => Pick<Shot, 'coldSide' | 'coldFlux'>, J: number): ShotOutcome {
@@ -145,6 +151,7 @@ function outcome(r: ReturnType<typeof solveUnknown>, hotSide: number, build: (ro
       slope: r.slope,
       residual: r.last.temperature - hotSide,
       rootError: r.rootError,
+      converged: r.converged,
       shots: r.shots,
       evaluations: r.evaluations,
     },

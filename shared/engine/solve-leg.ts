@@ -103,7 +103,7 @@ export function shootOrThrow(problem: LegProblem, tolerance: number, stepHint: {
   const outcome: ShotOutcome =
     problem.coldSide !== undefined ? shootHeatLoad(leg, J, hotSide, problem.coldSide, settings) : shootColdSide(leg, J, hotSide, (problem.heatLoad ?? 0) / leg.area, settings);
   const family = leg.sections[0].family;
-  if (!outcome.ok || Math.abs(outcome.shot.residual) > 1e-6 * hotSide) {
+  if (!outcome.ok || !outcome.shot.converged) {
     const reached = outcome.ok ? outcome.shot.coldSide : outcome.temperature;
     const where = outcome.ok ? 'at the cold end' : `at x = ${(outcome.x * 1e3).toPrecision(4)} mm`;
     const tableField = family.kind === 'table' ? 'material.rows' : undefined;
