@@ -1,5 +1,6 @@
 import { CaseError } from './case-error';
 import { parseCase, type Mode } from './check-case';
+import { optimizeLeg, solveLeg } from './run-case';
 
 const band = { kind: 'band', carrier: 'p', effectiveMass: 1, mobility300: 350, mobilityExponent: -1.5, latticeKappa300: 1, latticeKappaExponent: -1 };
 const solveCase = { hotSide: 300, length: 1e-3, area: 1e-6, current: 3, material: band, doping: 1e19 };
@@ -98,5 +99,25 @@ describe('parseCase names the offending field', () => {
     expect(t.leg.kind === 'family' && t.leg.bounds).toEqual({ lower: 18, upper: 20 });
     expect(fieldOf({ ...solveCase, material: undefined, doping: undefined, segments }, 'solve')).toBe('(accepted)');
     expect(fieldOf({ ...solveCase, heatLoad: undefined, coldSide: 260 }, 'solve')).toBe('(accepted)');
+  });
+});
+
+describe('optimiser options are checked up front', () => {
+  const fieldOfRun = (run: () => unknown): string => {
+    try {
+      run();
+    } catch (e) {
+      if (e instanceof CaseError) return e.field;
+      throw e;
+    }
+    return '(accepted)';
+  };
+  test.each<[string, () => unknown, string]>([
+    ['tolerance out of range', () => optimizeLeg(parseCase(optimizeCase), { tolerance: 0.5 }), 'tolerance'],
+    ['checkpoint with the wrong number of nodes', () => optimizeLeg(parseCase(optimizeCase), { start: { kind: 'doping', perCm3: [1e19, 1e19], current: 3 } }), 'start.perCm3'],
+    ['segment checkpoint for a doping run', () => optimizeLeg(parseCase(optimizeCase), { start: { kind: 'segments', fractions: [1], current: 3 } }), 'start'],
+    ['profile points out of range', () => solveLeg(parseCase(solveCase, 'solve'), { profilePoints: 1 }), 'profilePoints'],
+  ])('%s → %s', (_name, run, field) => {
+    expect(fieldOfRun(run)).toBe(field);
   });
 });

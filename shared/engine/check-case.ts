@@ -152,8 +152,8 @@ function checkConditions(input: CaseInput, mode: Mode, objective: Objective) {
   }
 }
 
-/** Validate a case (already parsed from JSON) for solve or optimize. */
-export function parseCase(json: unknown, mode: Mode): CheckedCase {
+/** Validate a case (already parsed from JSON) for solve or optimize (the default). */
+export function parseCase(json: unknown, mode: Mode = 'optimize'): CheckedCase {
   if (typeof json !== 'object' || json === null || Array.isArray(json)) throw new CaseError('(case)', 'a case must be a JSON object');
   const parsed = caseSchema.safeParse(json);
   if (!parsed.success) throw firstIssue(parsed.error);

@@ -12,7 +12,7 @@ import { gradedLeg, segmentedLeg, type Leg, type Segment } from './leg-profile';
 import { optimizeDoping } from './optimize-doping';
 import { bestSingleSegment, optimizeSegments } from './optimize-segments';
 import { nodeSensitivities, type NodeSensitivity } from './sensitivity';
-import { solveLegProblem, type LegProfile, type LegSolution, type SolveOptions } from './solve-leg';
+import { checkSolveOptions, solveLegProblem, type LegProfile, type LegSolution, type SolveOptions } from './solve-leg';
 
 /** What `leg solve` prints. */
 export type CaseSolution = Omit<LegSolution, 'shots' | 'evaluations'>;
@@ -124,7 +124,7 @@ const baselineOf = (u: UniformBaseline, z: LocalZtBaseline): BaselineReport => (
 export function optimizeLeg(c: CheckedCase, options: OptimizeOptions = {}): OptimizeResult {
   const now = options.now ?? defaultClock;
   const t0 = now();
-  const tolerance = options.tolerance ?? 1e-9;
+  const { tolerance } = checkSolveOptions({ tolerance: options.tolerance });
   const conditions = conditionsOf(c);
   const seconds = () => (now() - t0) / 1000;
 

@@ -67,7 +67,7 @@ export type ShotSettings = {
   /** Integrator tolerance per step. */
   odeTolerance: number;
   stepHint: { step: number };
-  /** Warm start: a previous root and slope (skips the coarse phase). */
+  /** Warm start: a previous root and slope (the coarse phase is skipped when it is close). */
   guess?: number;
   slope?: number;
 };
@@ -101,7 +101,8 @@ function gapOf(result: IntegrationResult, hotSide: number): number {
 /**
  * Two phases: a coarse shooting (loose integration) lands within ~1e-6 of the
  * root and measures the slope; the fine phase then needs one or two Newton
- * steps at full accuracy. A warm start skips the coarse phase.
+ * steps at full accuracy. A warm start close to the root skips the coarse
+ * phase.
  */
 function solveUnknown(
   u: Unknown,
