@@ -2,8 +2,9 @@
 // test database (server), the Expo client rendered by jest-expo (client) and
 // the browser end-to-end suite (e2e). `npm test` runs them all through
 // tests/run-all.ts, which first stands the stack up.
+// .js too: the ESM-only packages listed below are transpiled to CommonJS for jest.
 const nodeTransform = {
-  '^.+\\.tsx?$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.node.json', diagnostics: false }],
+  '^.+\\.[tj]sx?$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.node.json', diagnostics: false }],
 };
 // A root that does not exist (yet) is an error to jest: keep only real folders.
 const { existsSync } = require('node:fs');

@@ -1,4 +1,5 @@
 import 'reflect-metadata';
+import { createAuth } from './auth/auth-pool';
 import { readEnv } from './config/env';
 import { createDataSource } from './db/data-source';
 import { createApp } from './http/app';
@@ -12,7 +13,8 @@ async function main(): Promise<void> {
   const ds = await createDataSource(env.databaseUrl, 'frostgrade-api').initialize();
   const boss = await startBoss(env.databaseUrl, 'frostgrade-api');
   const mailer = createMailer(env);
-  const app = createApp({ env, ds, boss, mailer, version });
+  const { auth, pool } = createAuth(env);
+  const app = createApp({ env, ds, boss, mailer, auth, version });
   const server = app.listen(env.port, env.host, () => console.log(`[api] listening on http://${env.host}:${env.port}`));
   let stopping = false;
   const stop = async (): Promise<void> => {
@@ -21,6 +23,7 @@ async function main(): Promise<void> {
     server.close();
     await boss.stop({ graceful: true, timeout: 5000 });
     mailer.close();
+    await pool.end();
     await ds.destroy();
     process.exit(0);
   };

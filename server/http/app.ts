@@ -1,39 +1,57 @@
-import express, { type Express } from 'express';
+import express, { type Express, type RequestHandler } from 'express';
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type PgBoss from 'pg-boss';
 import type { DataSource } from 'typeorm';
+import type { Auth } from '../auth/lucia';
 import type { Env } from '../config/env';
 import type { Mailer } from '../mail/mailer';
+import { authRoutes } from '../routes/auth-routes';
 import { familyRoutes } from '../routes/family-routes';
 import { systemRoutes } from '../routes/system-routes';
+import { teamRoutes } from '../routes/team-routes';
+import { sessionReader } from './access';
 import { errorHandler, notFoundApi } from './errors';
-import { teamContext } from './team-context';
+import { originCheck } from './origin-check';
+import { mountRoutes, type RouteSpec } from './route-table';
 
-export type AppDeps = { env: Env; ds: DataSource; boss: PgBoss; mailer: Mailer; version: string; demoTeamSlug?: string };
+export type AppDeps = { env: Env; ds: DataSource; boss: PgBoss; mailer: Mailer; auth: Auth; version: string };
+
+/** Every API route, in one table: what the access matrix test walks. */
+export function apiRoutes(d: AppDeps): RouteSpec[] {
+  const accountDeps = { ds: d.ds, auth: d.auth, mailer: d.mailer, appOrigin: d.env.appOrigin };
+  return [
+    ...systemRoutes({ ds: d.ds, boss: d.boss, mailer: d.mailer, heartbeatSeconds: d.env.heartbeatSeconds, version: d.version, mailCatcher: d.env.mailCatcher }),
+    ...authRoutes(accountDeps),
+    ...teamRoutes(accountDeps),
+    ...familyRoutes(d.ds),
+  ];
+}
+
+/** `npm run dev` serves the client from Expo's dev server on another loopback port. */
+const devCors: RequestHandler = (req, res, next) => {
+  const origin = req.get('origin');
+  if (origin && /^http:\/\/(127\.0\.0\.1|localhost):\d+$/.test(origin)) {
+    res.set({ 'Access-Control-Allow-Origin': origin, Vary: 'Origin', 'Access-Control-Allow-Credentials': 'true' });
+    if (req.method === 'OPTIONS') {
+      res.set({ 'Access-Control-Allow-Methods': 'GET,POST,PUT,DELETE', 'Access-Control-Allow-Headers': 'Content-Type' }).status(204).end();
+      return;
+    }
+  }
+  next();
+};
 
 /** Builds the Express app without listening, so tests drive it through supertest. */
 export function createApp(d: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
-  app.use('/api', express.json({ limit: '1mb' }));
-  // `npm run dev` serves the client from Expo's dev server on another port.
-  if (!d.env.production) {
-    app.use('/api', (req, res, next) => {
-      const origin = req.get('origin');
-      if (origin && /^http:\/\/(127\.0\.0\.1|localhost):\d+$/.test(origin)) {
-        res.set('Access-Control-Allow-Origin', origin).set('Vary', 'Origin').set('Access-Control-Allow-Credentials', 'true');
-      }
-      next();
-    });
-  }
-  const api = express.Router();
-  api.use(systemRoutes({ ds: d.ds, boss: d.boss, mailer: d.mailer, heartbeatSeconds: d.env.heartbeatSeconds, version: d.version, mailCatcher: d.env.mailCatcher }));
-  api.use(teamContext(d.ds, d.demoTeamSlug ?? 'northlight'));
-  api.use(familyRoutes(d.ds));
-  api.use(notFoundApi);
-  app.use('/api', api);
+  if (!d.env.production) app.use('/api', devCors);
+  app.use('/api', express.json({ limit: '2mb' }));
+  app.use('/api', originCheck(d.env.appOrigin, !d.env.production));
+  app.use('/api', sessionReader(d.auth));
+  app.use('/api', mountRoutes(d.ds, apiRoutes(d)));
+  app.use('/api', notFoundApi);
   serveWeb(app, resolve(d.env.webDist));
   app.use(errorHandler(!d.env.production && d.env.profile !== 'test'));
   return app;

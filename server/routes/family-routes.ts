@@ -1,9 +1,10 @@
-import { Router, type Request } from 'express';
+import type { Request, RequestHandler } from 'express';
 import multer from 'multer';
 import type { DataSource } from 'typeorm';
 import { createFamilyRequestSchema, duplicateFamilyRequestSchema, maxUploadBytes, updateFamilyRequestSchema } from '../../shared/api';
 import { HttpError, ValidationError } from '../http/errors';
-import { actorName, requireTeam } from '../http/team-context';
+import { actorName, anyMember, designers, requireTeam } from '../http/access';
+import { route, type RouteSpec } from '../http/route-table';
 import { body, parseOrThrow } from '../http/validate';
 import { exportFamily } from '../services/family-export';
 import { createFamily, duplicateFamily, getFamily, listFamilies, setArchived, updateFamily } from '../services/family-service';
@@ -32,60 +33,54 @@ function tooLarge(req: Request): boolean {
   return Number(req.get('content-length') ?? 0) > maxUploadBytes + 64 * 1024;
 }
 
-export function familyRoutes(ds: DataSource): Router {
-  const r = Router();
-  const team = (req: Request) => requireTeam(req);
+function uploadThen(handle: (req: Request) => Promise<unknown>, status: number): RequestHandler {
+  return (req, res, next) => {
+    if (tooLarge(req)) return next(new HttpError(413, `The file is larger than ${maxUploadBytes / 1024 / 1024} MB.`, [{ field: 'file', message: 'too large' }], 'PayloadTooLarge'));
+    upload(req, res, (err: unknown) => {
+      if (err) return next(err);
+      handle(req).then((out) => res.status(status).json(out), next);
+    });
+  };
+}
 
-  r.get('/families', async (req, res) => {
-    res.json(await listFamilies(ds, team(req), req.query.archived === '1'));
-  });
-  r.post('/families', body(createFamilyRequestSchema), async (req, res) => {
-    res.status(201).json({ family: await createFamily(ds, team(req), res.locals.body, actorName(req)) });
-  });
-  r.post('/families/upload/preview', (req, res, next) => {
-    if (tooLarge(req)) return next(new HttpError(413, `The file is larger than ${maxUploadBytes / 1024 / 1024} MB.`, [{ field: 'file', message: 'too large' }], 'PayloadTooLarge'));
-    upload(req, res, (err: unknown) => {
-      if (err) return next(err);
-      try {
-        res.json(previewUpload(fileOf(req)));
-      } catch (e) {
-        next(e);
-      }
-    });
-  });
-  r.post('/families/upload', (req, res, next) => {
-    if (tooLarge(req)) return next(new HttpError(413, `The file is larger than ${maxUploadBytes / 1024 / 1024} MB.`, [{ field: 'file', message: 'too large' }], 'PayloadTooLarge'));
-    upload(req, res, (err: unknown) => {
-      if (err) return next(err);
+export function familyRoutes(ds: DataSource): RouteSpec[] {
+  const team = (req: Request) => requireTeam(req);
+  return [
+
+    route('get', '/families', anyMember, async (req, res) => {
+      res.json(await listFamilies(ds, team(req), req.query.archived === '1'));
+    }),
+    route('post', '/families', designers, body(createFamilyRequestSchema), async (req, res) => {
+      res.status(201).json({ family: await createFamily(ds, team(req), res.locals.body, actorName(req)) });
+    }),
+    route('post', '/families/upload/preview', designers, uploadThen(async (req) => previewUpload(fileOf(req)), 200)),
+    route('post', '/families/upload', designers, uploadThen(async (req) => {
       const meta = parseOrThrow(uploadMeta, req.body ?? {});
-      saveUpload(ds, team(req), fileOf(req), meta, actorName(req)).then((saved) => res.status(201).json(saved), next);
-    });
-  });
-  r.get('/families/:id', async (req, res) => {
-    res.json(await getFamily(ds, team(req), req.params.id));
-  });
-  r.get('/families/:id/versions/:version', async (req, res) => {
-    const { version } = parseOrThrow(versionQuery, { version: req.params.version });
-    res.json(await getFamily(ds, team(req), req.params.id, version));
-  });
-  r.put('/families/:id', body(updateFamilyRequestSchema), async (req, res) => {
-    res.json({ family: await updateFamily(ds, team(req), req.params.id, res.locals.body, actorName(req)) });
-  });
-  r.post('/families/:id/duplicate', body(duplicateFamilyRequestSchema), async (req, res) => {
-    res.status(201).json({ family: await duplicateFamily(ds, team(req), req.params.id, res.locals.body, actorName(req)) });
-  });
-  r.post('/families/:id/archive', async (req, res) => {
-    res.json({ family: await setArchived(ds, team(req), req.params.id, true) });
-  });
-  r.post('/families/:id/unarchive', async (req, res) => {
-    res.json({ family: await setArchived(ds, team(req), req.params.id, false) });
-  });
-  for (const format of ['csv', 'json'] as const) {
-    r.get(`/families/:id/export.${format}`, async (req, res) => {
+      return saveUpload(ds, team(req), fileOf(req), meta, actorName(req));
+    }, 201)),
+    route('get', '/families/:id', anyMember, async (req, res) => {
+      res.json(await getFamily(ds, team(req), req.params.id));
+    }),
+    route('get', '/families/:id/versions/:version', anyMember, async (req, res) => {
+      const { version } = parseOrThrow(versionQuery, { version: req.params.version });
+      res.json(await getFamily(ds, team(req), req.params.id, version));
+    }),
+    route('put', '/families/:id', designers, body(updateFamilyRequestSchema), async (req, res) => {
+      res.json({ family: await updateFamily(ds, team(req), req.params.id, res.locals.body, actorName(req)) });
+    }),
+    route('post', '/families/:id/duplicate', designers, body(duplicateFamilyRequestSchema), async (req, res) => {
+      res.status(201).json({ family: await duplicateFamily(ds, team(req), req.params.id, res.locals.body, actorName(req)) });
+    }),
+    route('post', '/families/:id/archive', designers, async (req, res) => {
+      res.json({ family: await setArchived(ds, team(req), req.params.id, true) });
+    }),
+    route('post', '/families/:id/unarchive', designers, async (req, res) => {
+      res.json({ family: await setArchived(ds, team(req), req.params.id, false) });
+    }),
+    ...(['csv', 'json'] as const).map((format) => route('get', `/families/:id/export.${format}`, anyMember, async (req, res) => {
       const { version } = parseOrThrow(versionQuery, req.query);
       const out = await exportFamily(ds, team(req), req.params.id, format, version);
       res.type(format === 'csv' ? 'text/csv' : 'application/json').attachment(out.filename).send(out.body);
-    });
-  }
-  return r;
+    })),
+  ];
 }

@@ -4,3 +4,4 @@ export * from './families';
 export * from './health';
 export * from './outbox';
 export * from './family-upload';
+export * from './auth';

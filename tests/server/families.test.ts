@@ -1,10 +1,9 @@
-import request from 'supertest';
 import { apiErrorBodySchema, familiesResponseSchema } from '../../shared/api';
 import { MaterialFamily, Team } from '../../server/db/entities';
 import { demoFamilies, demoTeam, otherTeam } from '../../server/db/seed/demo-data';
 import { seedDemo } from '../../server/db/seed/seed';
 import { insertFamily } from '../../server/services/family-service';
-import { openContext, type TestContext } from './context';
+import { agent, demo, openContext, signedIn, type TestContext } from './context';
 
 let ctx: TestContext;
 beforeAll(async () => { ctx = await openContext(); });
@@ -12,14 +11,14 @@ afterAll(async () => { await ctx.close(); });
 
 describe('GET /api/families', () => {
   it('lists the demo team families from the database in the shared response shape', async () => {
-    const res = await request(ctx.app).get('/api/families');
+    const res = await (await signedIn(ctx, demo.viewer)).get('/api/families');
     expect(res.status).toBe(200);
     const body = familiesResponseSchema.parse(res.body);
     expect(body.team.name).toBe(demoTeam.name);
     // Other test files add families to the same team concurrently: check the demo ones are all there.
-    const demo = body.families.filter((f) => f.isDemo);
-    expect(demo.map((f) => f.name).sort()).toEqual(demoFamilies().map((f) => f.name).sort());
-    expect(demo.find((f) => f.kind === 'table')?.carrier).toBe('p');
+    const seeded = body.families.filter((f) => f.isDemo);
+    expect(seeded.map((f) => f.name).sort()).toEqual(demoFamilies().map((f) => f.name).sort());
+    expect(seeded.find((f) => f.kind === 'table')?.carrier).toBe('p');
   });
 
   it('never shows another team\'s families', async () => {
@@ -29,7 +28,7 @@ describe('GET /api/families', () => {
       name: 'Harbour private alloy', summary: '', source: 'test', definition: { kind: 'constant', seebeck: -180e-6, sigma: 9e4, kappa: 1.4 },
     }, 'test');
     try {
-      const body = familiesResponseSchema.parse((await request(ctx.app).get('/api/families')).body);
+      const body = familiesResponseSchema.parse((await (await signedIn(ctx, demo.viewer)).get('/api/families')).body);
       expect(body.families.map((f) => f.id)).not.toContain(foreign.id);
     } finally {
       await repo.delete(foreign.id);
@@ -38,13 +37,13 @@ describe('GET /api/families', () => {
 
   it('seeding twice adds nothing the second time', async () => {
     const again = await seedDemo(ctx.ds);
-    expect(again).toEqual({ teams: 0, families: 0 });
+    expect(again).toEqual({ teams: 0, users: 0, families: 0 });
   });
 });
 
 describe('API error shape', () => {
   it('answers an unknown route with 404 and { name, message }', async () => {
-    const res = await request(ctx.app).get('/api/no-such-thing');
+    const res = await agent(ctx).get('/api/no-such-thing');
     expect(res.status).toBe(404);
     const body = apiErrorBodySchema.parse(res.body);
     expect(body.name).toBe('NotFound');
@@ -52,13 +51,13 @@ describe('API error shape', () => {
   });
 
   it('names the body when a request carries malformed JSON', async () => {
-    const res = await request(ctx.app).post('/api/families').set('content-type', 'application/json').send('{"name": ');
+    const res = await (await signedIn(ctx, demo.physicist)).post('/api/families').set('content-type', 'application/json').send('{"name": ');
     expect(res.status).toBe(400);
     expect(apiErrorBodySchema.parse(res.body).errors?.[0]?.field).toBe('body');
   });
 
   it('serves the web app for client routes and never leaks a stack trace', async () => {
-    const res = await request(ctx.app).get('/materials');
+    const res = await agent(ctx).get('/materials');
     expect([200, 503]).toContain(res.status);
     expect(res.text).not.toMatch(/at .*\.ts:\d+/);
   });

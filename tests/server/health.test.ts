@@ -20,7 +20,7 @@ describe('GET /api/health', () => {
 
   it('answers 503 and names the failing dependency when the SMTP server is unreachable', async () => {
     const deadMailer = createMailer({ ...ctx.env, smtp: { host: '127.0.0.1', port: 9 } });
-    const app = createApp({ env: ctx.env, ds: ctx.ds, boss: ctx.boss, mailer: deadMailer, version: 'test' });
+    const app = createApp({ env: ctx.env, ds: ctx.ds, boss: ctx.boss, mailer: deadMailer, auth: ctx.auth, version: 'test' });
     const res = await request(app).get('/api/health');
     deadMailer.close();
     expect(res.status).toBe(503);
@@ -31,7 +31,7 @@ describe('GET /api/health', () => {
   });
 
   it('calls the worker down when its newest heartbeat is stale', async () => {
-    const app = createApp({ env: { ...ctx.env, heartbeatSeconds: 0.0001 }, ds: ctx.ds, boss: ctx.boss, mailer: ctx.mailer, version: 'test' });
+    const app = createApp({ env: { ...ctx.env, heartbeatSeconds: 0.0001 }, ds: ctx.ds, boss: ctx.boss, mailer: ctx.mailer, auth: ctx.auth, version: 'test' });
     const body = healthResponseSchema.parse((await request(app).get('/api/health')).body);
     expect(body.checks.worker.ok).toBe(false);
     expect(body.checks.worker.detail).toMatch(/s ago/);

@@ -2,7 +2,7 @@ import request from 'supertest';
 import { outboxResponseSchema } from '../../shared/api';
 import { WorkerHeartbeat } from '../../server/db/entities';
 import { queues } from '../../server/queue/queues';
-import { eventually, openContext, type TestContext } from './context';
+import { demo, eventually, openContext, signedIn, type TestContext } from './context';
 
 let ctx: TestContext;
 beforeAll(async () => { ctx = await openContext(); });
@@ -26,7 +26,7 @@ it('mail sent through nodemailer is caught by the local SMTP catcher and shown i
   const subject = `Probe ${Date.now()}`;
   await ctx.mailer.send({ to: ['grower@northlight.example'], subject, text: 'Zone 3 measured: 2.1e19 cm^-3.' });
   const found = await eventually(async () => {
-    const body = outboxResponseSchema.parse((await request(ctx.app).get('/api/outbox')).body);
+    const body = outboxResponseSchema.parse((await (await signedIn(ctx, demo.admin)).get('/api/outbox')).body);
     return body.messages.find((m) => m.subject === subject);
   });
   expect(found.to).toEqual(['grower@northlight.example']);
@@ -35,7 +35,9 @@ it('mail sent through nodemailer is caught by the local SMTP catcher and shown i
 
 it('hides the outbox where no catcher runs (production)', async () => {
   const { createApp } = await import('../../server/http/app');
-  const app = createApp({ env: { ...ctx.env, mailCatcher: false, production: true }, ds: ctx.ds, boss: ctx.boss, mailer: ctx.mailer, version: 'test' });
-  const res = await request(app).get('/api/outbox');
+  const app = createApp({ env: { ...ctx.env, mailCatcher: false, production: true }, ds: ctx.ds, boss: ctx.boss, mailer: ctx.mailer, auth: ctx.auth, version: 'test' });
+  const [row] = await ctx.ds.query('SELECT id FROM app_user WHERE email = $1', [demo.admin]);
+  const session = await ctx.auth.createSession(row.id, {});
+  const res = await request(app).get('/api/outbox').set('Cookie', ctx.auth.createSessionCookie(session.id).serialize());
   expect(res.status).toBe(404);
 });

@@ -71,3 +71,13 @@ function measuredDemo(): DemoFamily {
 export function demoFamilies(): DemoFamily[] {
   return [...modelFamilies, measuredDemo()];
 }
+
+/** Demo accounts, one per role in the demo lab and one in the second team; all share one password. */
+export const demoPassword = 'graded-legs-demo';
+export const demoUsers = [
+  { email: 'ada@northlight.example', displayName: 'Ada Lindqvist', role: 'admin', team: demoTeam.slug },
+  { email: 'piet@northlight.example', displayName: 'Piet Okafor', role: 'physicist', team: demoTeam.slug },
+  { email: 'greta@northlight.example', displayName: 'Greta Moreau', role: 'grower', team: demoTeam.slug },
+  { email: 'vic@northlight.example', displayName: 'Vic Tanaka', role: 'viewer', team: demoTeam.slug },
+  { email: 'hana@harbour.example', displayName: 'Hana Brooks', role: 'admin', team: otherTeam.slug },
+] as const;

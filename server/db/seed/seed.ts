@@ -1,28 +1,40 @@
+import { randomBytes } from 'node:crypto';
 import type { DataSource } from 'typeorm';
-import { MaterialFamily, Team } from '../entities';
+import { hashPassword } from '../../auth/passwords';
 import { insertFamily } from '../../services/family-service';
-import { demoFamilies, demoTeam, otherTeam } from './demo-data';
+import { AppUser, MaterialFamily, Team } from '../entities';
+import { demoFamilies, demoPassword, demoTeam, demoUsers, otherTeam } from './demo-data';
+
+export type SeedCounts = { teams: number; users: number; families: number };
 
 /** Insert the demo lab if it is missing; running it twice changes nothing. */
-export async function seedDemo(ds: DataSource): Promise<{ teams: number; families: number }> {
+export async function seedDemo(ds: DataSource): Promise<SeedCounts> {
+  const passwordHash = await hashPassword(demoPassword);
   return ds.transaction(async (m) => {
     const teams = m.getRepository(Team);
+    const users = m.getRepository(AppUser);
     const families = m.getRepository(MaterialFamily);
-    let addedTeams = 0;
-    let addedFamilies = 0;
-    const ensureTeam = async (t: { slug: string; name: string }): Promise<Team> => {
-      const found = await teams.findOneBy({ slug: t.slug });
-      if (found) return found;
-      addedTeams += 1;
-      return teams.save(teams.create(t));
-    };
-    const lab = await ensureTeam(demoTeam);
-    await ensureTeam(otherTeam);
+    const added: SeedCounts = { teams: 0, users: 0, families: 0 };
+    const bySlug = new Map<string, Team>();
+    for (const t of [demoTeam, otherTeam]) {
+      let team = await teams.findOneBy({ slug: t.slug });
+      if (!team) {
+        team = await teams.save(teams.create(t));
+        added.teams += 1;
+      }
+      bySlug.set(t.slug, team);
+    }
+    for (const u of demoUsers) {
+      if (await users.existsBy({ email: u.email })) continue;
+      await users.insert({ id: randomBytes(15).toString('base64url'), teamId: bySlug.get(u.team)!.id, email: u.email, displayName: u.displayName, role: u.role, passwordHash });
+      added.users += 1;
+    }
+    const lab = bySlug.get(demoTeam.slug)!;
     for (const f of demoFamilies()) {
       if (await families.existsBy({ teamId: lab.id, name: f.name })) continue;
       await insertFamily(m, lab, { ...f, isDemo: true }, 'demo seed');
-      addedFamilies += 1;
+      added.families += 1;
     }
-    return { teams: addedTeams, families: addedFamilies };
+    return added;
   });
 }

@@ -1,0 +1,28 @@
+import { Column, CreateDateColumn, Entity, PrimaryColumn } from 'typeorm';
+import type { Role } from '../../../shared/api/auth';
+
+/** An account; it belongs to exactly one team, with one role there. */
+@Entity('app_user')
+export class AppUser {
+  /** Text id, as lucia's adapter expects. */
+  @PrimaryColumn({ type: 'text' })
+  id!: string;
+
+  @Column({ type: 'uuid' })
+  teamId!: string;
+
+  @Column({ type: 'text' })
+  email!: string;
+
+  @Column({ type: 'text' })
+  displayName!: string;
+
+  @Column({ type: 'text', select: false })
+  passwordHash!: string;
+
+  @Column({ type: 'text' })
+  role!: Role;
+
+  @CreateDateColumn({ type: 'timestamptz' })
+  createdAt!: Date;
+}

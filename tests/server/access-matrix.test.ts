@@ -1,0 +1,117 @@
+import { randomUUID } from 'node:crypto';
+import request from 'supertest';
+import { roles, type Role } from '../../shared/api';
+import { apiRoutes } from '../../server/http/app';
+import type { RouteSpec } from '../../server/http/route-table';
+import { agent, demo, openContext, signedIn, type TestContext } from './context';
+
+let ctx: TestContext;
+let specs: RouteSpec[];
+beforeAll(async () => {
+  ctx = await openContext();
+  specs = apiRoutes({ env: ctx.env, ds: ctx.ds, boss: ctx.boss, mailer: ctx.mailer, auth: ctx.auth, version: 'test' });
+});
+afterAll(async () => { await ctx.close(); });
+
+const all = roles;
+const designers: Role[] = ['admin', 'physicist'];
+const admins: Role[] = ['admin'];
+
+/**
+ * The access policy, written out by hand from DESIGN.md's role table. The
+ * route table must match it exactly: a route added without a line here, or
+ * with other roles, fails this test.
+ */
+const policy: Record<string, 'public' | Role[]> = {
+  'GET /health': 'public',
+  'GET /outbox': admins,
+  'POST /auth/sign-up': 'public',
+  'POST /auth/sign-in': 'public',
+  'POST /auth/sign-out': all.slice(),
+  'GET /auth/me': all.slice(),
+  'POST /auth/reset-request': 'public',
+  'POST /auth/reset': 'public',
+  'GET /invitations/:token': 'public',
+  'POST /invitations/accept': 'public',
+  'GET /team': all.slice(),
+  'POST /team/invitations': admins,
+  'DELETE /team/invitations/:id': admins,
+  'PUT /team/members/:id/role': admins,
+  'DELETE /team/members/:id': admins,
+  'GET /families': all.slice(),
+  'POST /families': designers,
+  'POST /families/upload/preview': designers,
+  'POST /families/upload': designers,
+  'GET /families/:id': all.slice(),
+  'GET /families/:id/versions/:version': all.slice(),
+  'PUT /families/:id': designers,
+  'POST /families/:id/duplicate': designers,
+  'POST /families/:id/archive': designers,
+  'POST /families/:id/unarchive': designers,
+  'GET /families/:id/export.csv': all.slice(),
+  'GET /families/:id/export.json': all.slice(),
+};
+
+const key = (s: RouteSpec): string => `${s.method.toUpperCase()} ${s.path}`;
+
+/** Ids that exist in no team: a call that gets past the gate answers 4xx from its handler, never 401/403. */
+function nowhere(path: string): string {
+  return `/api${path.replace(':token', 'x'.repeat(43)).replace(':version', '1').replace(':id', randomUUID())}`;
+}
+
+/** Valid bodies, so that a 404 for another team's object cannot hide behind a 400 for the body. */
+const validBody: Record<string, object> = {
+  'PUT /families/:id': { summary: 'changed by an outsider' },
+  'POST /families/:id/duplicate': { name: 'Copied by an outsider' },
+  'PUT /team/members/:id/role': { role: 'admin' },
+};
+
+function call(client: ReturnType<typeof request.agent>, s: RouteSpec, path: string) {
+  return s.method === 'get' ? client.get(path) : client[s.method](path).send(validBody[key(s)] ?? {});
+}
+
+it('every route in the table has exactly the access the policy gives it', () => {
+  const table = Object.fromEntries(specs.map((s) => [key(s), s.access === 'public' ? 'public' : [...s.access].sort()]));
+  const expected = Object.fromEntries(Object.entries(policy).map(([k, v]) => [k, v === 'public' ? 'public' : [...v].sort()]));
+  expect(table).toEqual(expected);
+});
+
+describe.each(['anonymous', ...roles] as const)('as %s', (who) => {
+  it('each route answers as the policy says', async () => {
+    for (const s of specs) {
+      const client = who === 'anonymous' ? agent(ctx) : await signedIn(ctx, demo[who]);
+      const res = await call(client, s, nowhere(s.path));
+      const allowed = s.access === 'public' || (who !== 'anonymous' && s.access.includes(who));
+      const expected = allowed ? 'not 401/403' : who === 'anonymous' ? 401 : 403;
+      const got = allowed ? ([401, 403].includes(res.status) ? res.status : 'not 401/403') : res.status;
+      expect(`${key(s)} → ${got}`).toBe(`${key(s)} → ${expected}`);
+    }
+  });
+});
+
+it('a member of another team gets 404 for every object of this team, and nothing changes', async () => {
+  const lab = await signedIn(ctx, demo.admin);
+  const family = (await lab.get('/api/families')).body.families[0];
+  const [viewer] = await ctx.ds.query('SELECT id FROM app_user WHERE email = $1', [demo.viewer]);
+  const ids: Record<string, string> = { '/families/': family.id, '/team/members/': viewer.id, '/team/invitations/': randomUUID() };
+  for (const s of specs.filter((x) => x.path.includes(':id'))) {
+    const prefix = Object.keys(ids).find((p) => s.path.startsWith(p))!;
+    const outsider = await signedIn(ctx, demo.otherTeamAdmin);
+    const res = await call(outsider, s, `/api${s.path.replace(':id', ids[prefix]!).replace(':version', '1')}`);
+    expect(`${key(s)} → ${res.status}`).toBe(`${key(s)} → 404`);
+  }
+  const after = await lab.get(`/api/families/${family.id}`);
+  expect(after.body.family).toMatchObject({ version: family.version, archived: false, name: family.name });
+  expect((await ctx.ds.query('SELECT role FROM app_user WHERE id = $1', [viewer.id]))[0].role).toBe('viewer');
+});
+
+it('refuses state-changing requests without the app\'s Origin, even with a valid session', async () => {
+  const [row] = await ctx.ds.query('SELECT id FROM app_user WHERE email = $1', [demo.physicist]);
+  const cookie = ctx.auth.createSessionCookie((await ctx.auth.createSession(row.id, {})).id).serialize();
+  const body = { name: 'Cross-site', source: 'x', definition: { kind: 'constant', seebeck: 2e-4, sigma: 1e5, kappa: 1.5 } };
+  const none = await request(ctx.app).post('/api/families').set('Cookie', cookie).send(body);
+  expect(none.status).toBe(403);
+  const evil = await request(ctx.app).post('/api/families').set('Cookie', cookie).set('Origin', 'https://evil.example').send(body);
+  expect(evil.status).toBe(403);
+  expect(evil.body.message).toMatch(/evil\.example/);
+});
