@@ -8,6 +8,7 @@
  *   recipe, and it is the wrong target for cooling.
  */
 import { minimizeBox } from './box-bfgs';
+import { CaseError } from './case-error';
 import { newWarmStart, referenceCurrent, scoreDesign, type DesignScore, type WarmStart } from './evaluate-design';
 import { currentIsFree, legFor, type Counter, type DopingProblem } from './doping-problem';
 import { ztOptimalLog10 } from './family-helpers';
@@ -26,6 +27,15 @@ export type LocalZtBaseline = {
   iterations: number;
   converged: boolean;
 };
+
+/** The case cannot be run as given: name the field the user can change. */
+function noSteadyState(problem: DopingProblem, what: string): CaseError {
+  const table = problem.family.kind === 'table';
+  return new CaseError(
+    table ? 'material.rows' : problem.current !== undefined ? 'current' : 'bounds',
+    `${what} steady state ${table ? "inside the table's temperature range" : 'for these conditions'}: ${table ? 'extend the table' : 'check the conditions and bounds'}`,
+  );
+}
 
 /** Score a leg, optimising the current when it is free. */
 export function scoreWithBestCurrent(problem: DopingProblem, leg: Leg, counter: Counter, warm: WarmStart): DesignScore {
@@ -61,7 +71,7 @@ export function bestUniform(problem: DopingProblem, counter: Counter): UniformBa
     const score = scoreWithBestCurrent(scout, leg(y), counter, scoutWarm);
     if (score.feasible && (!best || score.value > best.score.value)) best = { log10: y, score };
   }
-  if (!best) throw new Error('no uniform doping within the bounds gives a steady state');
+  if (!best) throw noSteadyState(problem, 'no uniform doping within the bounds has');
   best = { log10: best.log10, score: scoreWithBestCurrent(problem, leg(best.log10), counter, warm) };
   if (points === 1) return best;
   const spacing = (upper - lower) / (points - 1);
@@ -136,11 +146,11 @@ export function localBestZt(problem: DopingProblem, uniform: UniformBaseline, co
   let settled = false;
   for (; passes < LOCAL_ZT_PASSES && !settled; passes++) {
     const r = pass(scout);
-    if (!r) throw new Error('the local-best-zT leg has no steady state');
+    if (!r) throw noSteadyState(problem, 'the local-best-zT leg has no');
     settled = r.moved <= SCOUT_SETTLED;
   }
   // Final pass at the problem's accuracy: this is the leg reported.
   const final = pass(problem);
-  if (!final) throw new Error('the local-best-zT leg has no steady state');
+  if (!final) throw noSteadyState(problem, 'the local-best-zT leg has no');
   return { x, log10: final.log10, score: final.score, iterations: passes + 1, converged: settled && final.moved <= LOCAL_ZT_SETTLED };
 }

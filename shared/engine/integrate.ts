@@ -32,6 +32,12 @@ export type IntegrationOptions = {
   stops?: readonly number[];
   /** Step size carried between calls; updated on return. */
   stepHint?: { step: number };
+  /**
+   * Relative slack on the family's temperature range before a trial counts
+   * as having left it.
+   * @default 1e-12
+   */
+  rangeSlack?: number;
   /** Receives the end of every accepted step (for a later replay). */
   record?: number[];
   /**
@@ -86,6 +92,7 @@ export function integrateLeg(leg: Leg, currentDensity: number, coldTemperature: 
   const stops = options.stops ?? [];
   const onPoint = options.onPoint;
   const record = options.record;
+  const slack = options.rangeSlack ?? 1e-12;
   const replay = options.replay;
   let replayIndex = 0;
   let h = options.stepHint?.step ?? leg.length / 16;
@@ -181,8 +188,8 @@ export function integrateLeg(leg: Leg, currentDensity: number, coldTemperature: 
         // After a step shortened to land on a point, resume with the step we
         // wanted: growing it by the short step's (small) error overshoots.
         h = landing && step < wanted ? wanted : step * growth;
-        if (T < low * (1 - 1e-12)) return finish('low', x);
-        if (T > high * (1 + 1e-12)) return finish('high', x);
+        if (T < low * (1 - slack)) return finish('low', x);
+        if (T > high * (1 + slack)) return finish('high', x);
         if (!replay && landing && target < s.end) {
           onPoint?.(x, T, q, V, s);
           stopIndex++;

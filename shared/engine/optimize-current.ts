@@ -27,9 +27,16 @@ export function optimizeCurrent(leg: Leg, conditions: Conditions, tolerance: num
   };
   let upper = 3 * reference;
   let m = brentMinimize(negative, 0, upper, CURRENT_TOLERANCE * reference);
-  while (m.x > 0.97 * upper && upper < 1e3 * reference) {
+  while (best && m.x > 0.97 * upper && upper < 1e3 * reference) {
     upper *= 3;
     m = brentMinimize(negative, m.x * 0.5, upper, CURRENT_TOLERANCE * reference);
+  }
+  // Nothing feasible seen (e.g. every current tried drives a table family
+  // below its lowest temperature): look closer to zero current, where the
+  // leg is closest to isothermal, and optimise below the first feasible one.
+  for (let k = 1; !best && k <= 30; k++) {
+    const current = upper * Math.pow(0.5, k);
+    if (negative(current) < Number.MAX_VALUE) m = brentMinimize(negative, 0, 2 * current, CURRENT_TOLERANCE * reference);
   }
   if (!best) return { score: scoreDesign(leg, m.x, conditions, warm, tolerance), evaluations: evaluations + 1 };
   return { score: best, evaluations };

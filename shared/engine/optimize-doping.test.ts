@@ -191,3 +191,20 @@ describe('other objectives on the band family', () => {
     expect(r.cop as number).toBeGreaterThan(b.localBestZt.objective);
   });
 });
+
+describe('table families at the edge of their range', () => {
+  test('an optimum pinned at the table’s lowest temperature is reported with a warning, not as the leg’s limit', () => {
+    const rows = [];
+    const p: Properties = { seebeck: 0, sigma: 0, kappa: 0 };
+    for (const perCm3 of [3e18, 1e19, 3e19]) {
+      for (const temperature of [200, 250, 300]) {
+        family.properties(Math.log10(perCm3), temperature, p);
+        rows.push({ perCm3, temperature, ...p });
+      }
+    }
+    // Th = 260 K: the free optimum would be near 190 K, below the table.
+    const r = optimizeLeg(parseCase({ hotSide: 260, length: 1e-3, area: 1e-6, material: { kind: 'table', rows }, controlPoints: 3 }, 'optimize'));
+    expect(r.coldSide).toBeCloseTo(200, 4);
+    expect(r.warnings.join(' ')).toMatch(/lowest temperature \(200 K\)/);
+  });
+});

@@ -73,6 +73,8 @@ export type OptimizeResult = CaseSolution & {
   /** True when shouldStop ended the run early. */
   stopped: boolean;
   state: OptimizerState | null;
+  /** Things a person should know about this optimum (e.g. it is pinned at a table's edge). */
+  warnings: string[];
 };
 
 const defaultClock = (): number => (typeof performance !== 'undefined' ? performance.now() : Date.now());
@@ -95,6 +97,24 @@ export function solveLeg(c: CheckedCase, options: SolveOptions = {}): CaseSoluti
   return strip(solveLegProblem({ leg, hotSide: c.hotSide, current: c.current, heatLoad: c.heatLoad, coldSide: c.heatLoad === undefined ? c.coldSide : undefined }, options));
 }
 
+/**
+ * A table family bounds the temperatures the optimiser may use; an optimum
+ * touching that bound is the table's limit, not the leg's.
+ */
+function rangeWarnings(c: CheckedCase, solution: CaseSolution): string[] {
+  if (c.leg.kind !== 'family' || c.leg.family.kind !== 'table') return [];
+  const { minTemperature, maxTemperature } = c.leg.family;
+  const temperatures = solution.profile.temperature;
+  const warnings: string[] = [];
+  if (Math.min(...temperatures) <= minTemperature + 1e-3) {
+    warnings.push(`the optimum reaches the table's lowest temperature (${minTemperature} K): the leg could go colder than the measured range; extend the table to lower temperatures`);
+  }
+  if (Math.max(...temperatures) >= maxTemperature - 1e-3) {
+    warnings.push(`the optimum reaches the table's highest temperature (${maxTemperature} K); extend the table to higher temperatures`);
+  }
+  return warnings;
+}
+
 function conditionsOf(c: CheckedCase): Conditions {
   return { objective: c.objective, hotSide: c.hotSide, heatLoad: c.heatLoad ?? 0, coldSide: c.coldSide };
 }
@@ -105,8 +125,14 @@ function finalSolution(c: CheckedCase, leg: Leg, score: DesignScore, tolerance: 
     c.objective === 'maxHeatLoad'
       ? { leg, hotSide: c.hotSide, current: score.current, coldSide: c.coldSide }
       : { leg, hotSide: c.hotSide, current: score.current, heatLoad: score.heatLoad };
-  return strip(solveLegProblem(problem, { tolerance }));
+  // An optimum pinned at a table's lowest temperature sits on the edge of
+  // what the optimiser accepted; re-solving it from scratch may land a hair
+  // beyond, so allow a relative sliver of 1e-7 (the spline's end cubic
+  // extends smoothly there). The result then carries a warning.
+  return strip(solveLegProblem(problem, { tolerance, rangeSlack: FINAL_RANGE_SLACK }));
 }
+
+const FINAL_RANGE_SLACK = 1e-7;
 
 const baselineOf = (u: UniformBaseline, z: LocalZtBaseline): BaselineReport => ({
   uniform: { perCm3: Math.pow(10, u.log10), current: u.score.current, deltaT: u.score.deltaT, objective: u.score.value },
@@ -154,6 +180,7 @@ export function optimizeLeg(c: CheckedCase, options: OptimizeOptions = {}): Opti
       seconds: seconds(),
       stopped: opt.stopped,
       state: { kind: 'segments', fractions: opt.fractions, current: opt.score.current },
+      warnings: [],
     };
   }
 
@@ -227,6 +254,7 @@ export function optimizeLeg(c: CheckedCase, options: OptimizeOptions = {}): Opti
     seconds: seconds(),
     stopped: opt.stopped,
     state: { ...doping(opt.log10), current: opt.score.current },
+    warnings: rangeWarnings(c, solution),
   };
 }
 

@@ -67,6 +67,8 @@ export type ShotSettings = {
   /** Integrator tolerance per step. */
   odeTolerance: number;
   stepHint: { step: number };
+  /** Relative slack on the material's temperature range (see IntegrationOptions). */
+  rangeSlack?: number;
   /** Warm start: a previous root and slope (the coarse phase is skipped when it is close). */
   guess?: number;
   slope?: number;
@@ -183,10 +185,10 @@ export function shootColdSide(leg: Leg, currentDensity: number, hotSide: number,
   const fluxScale = legFluxScale(leg, hotSide, J, atHot);
   const r = solveUnknown(
     {
-      run: (tc, tolerance, stepHint) => integrateLeg(leg, J, tc, coldFlux, { tolerance, fluxScale, stepHint }),
+      run: (tc, tolerance, stepHint) => integrateLeg(leg, J, tc, coldFlux, { tolerance, fluxScale, stepHint, rangeSlack: settings.rangeSlack }),
       guess: tc,
       slope: 1 + a > 0 ? 1 + a : 1,
-      lower: Math.max(family.minTemperature, 1e-3),
+      lower: Math.max(family.minTemperature, 1e-3) * (1 - (settings.rangeSlack ?? 0)),
       upper: Number.isFinite(family.maxTemperature) ? family.maxTemperature : 50 * hotSide,
       scale: hotSide,
     },
@@ -208,7 +210,7 @@ export function shootHeatLoad(leg: Leg, currentDensity: number, hotSide: number,
   const bound = 1e3 * fluxScale + Math.abs(guess);
   const r = solveUnknown(
     {
-      run: (flux, tolerance, stepHint) => integrateLeg(leg, J, coldSide, flux, { tolerance, fluxScale, stepHint }),
+      run: (flux, tolerance, stepHint) => integrateLeg(leg, J, coldSide, flux, { tolerance, fluxScale, stepHint, rangeSlack: settings.rangeSlack }),
       guess,
       slope: -L / avg.kappa,
       lower: -bound,

@@ -80,6 +80,9 @@ export type LegSolution = {
   evaluations: number;
 };
 
+/** Internal: the optimiser's final solve allows a sliver beyond a table's range (see run-case.ts). */
+export type RangeOptions = { rangeSlack?: number };
+
 export type CheckedSolveOptions = Required<SolveOptions>;
 
 export function checkSolveOptions(options: SolveOptions = {}): CheckedSolveOptions {
@@ -96,10 +99,10 @@ export function odeToleranceFor(tolerance: number): number {
 }
 
 /** Shoot, throwing a CaseError that says why when there is no steady state. */
-export function shootOrThrow(problem: LegProblem, tolerance: number, stepHint: { step: number }): Shot {
+export function shootOrThrow(problem: LegProblem, tolerance: number, stepHint: { step: number }, rangeSlack?: number): Shot {
   const { leg, hotSide } = problem;
   const J = (leg.sign * problem.current) / leg.area;
-  const settings = { tolerance, odeTolerance: odeToleranceFor(tolerance), stepHint };
+  const settings = { tolerance, odeTolerance: odeToleranceFor(tolerance), stepHint, rangeSlack };
   const outcome: ShotOutcome =
     problem.coldSide !== undefined ? shootHeatLoad(leg, J, hotSide, problem.coldSide, settings) : shootColdSide(leg, J, hotSide, (problem.heatLoad ?? 0) / leg.area, settings);
   const family = leg.sections[0].family;
@@ -131,14 +134,15 @@ function log10At(section: LegSection, x: number): number {
   return section.log10Start + w * (section.log10End - section.log10Start);
 }
 
-export function solveLegProblem(problem: LegProblem, options: SolveOptions = {}): LegSolution {
-  const o = checkSolveOptions(options);
+export function solveLegProblem(problem: LegProblem, options: SolveOptions & RangeOptions = {}): LegSolution {
+  const o = checkSolveOptions({ tolerance: options.tolerance, profilePoints: options.profilePoints, estimateError: options.estimateError });
+  const rangeSlack = options.rangeSlack;
   if ((problem.coldSide === undefined) === (problem.heatLoad === undefined)) {
     throw new CaseError('coldSide', 'give either the heat load or the cold-side temperature, not both and not neither');
   }
   const { leg, hotSide, current } = problem;
   const stepHint = { step: leg.length / 16 };
-  const shot = shootOrThrow(problem, o.tolerance, stepHint);
+  const shot = shootOrThrow(problem, o.tolerance, stepHint, rangeSlack);
   const J = shot.currentDensity;
 
   // Recording pass at the root.
@@ -151,6 +155,7 @@ export function solveLegProblem(problem: LegProblem, options: SolveOptions = {})
     fluxScale,
     stepHint,
     stops,
+    rangeSlack,
     onPoint: (x, temperature, _flux, _voltage, section) => {
       const log10 = log10At(section, x);
       section.family.properties(log10, temperature, scratch);
@@ -178,7 +183,7 @@ export function solveLegProblem(problem: LegProblem, options: SolveOptions = {})
   if (o.estimateError) {
     // A 10× tighter integration has ~10× less error; the difference from ours
     // estimates our integration error in T(L).
-    const fine = integrateLeg(leg, J, shot.coldSide, shot.coldFlux, { tolerance: odeTolerance / 10, fluxScale, stepHint: { step: stepHint.step } });
+    const fine = integrateLeg(leg, J, shot.coldSide, shot.coldFlux, { tolerance: odeTolerance / 10, fluxScale, stepHint: { step: stepHint.step }, rangeSlack });
     evaluations += fine.evaluations;
     gapError = Math.max(gapError, Math.abs(fine.temperature - record.temperature));
   }
