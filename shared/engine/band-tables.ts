@@ -104,9 +104,11 @@ export function factorsByQuadrature(u: number, etaGuess?: number): BandFactors {
   for (let i = 0; i < 60; i++) {
     // d F½/dη = ½·F₋½; Newton on ln F½ converges from far away too.
     const step = (Math.log(f[0]) - u) / ((0.5 * f[1]) / f[0]);
+    // Converged: the integrals at the current η are then within ~1e-11 of
+    // those at the root, not worth another quadrature.
+    if (Math.abs(step) < 1e-11 * Math.max(1, Math.abs(eta))) break;
     eta -= step;
     f = fermiIntegralsByQuadrature(eta, [0.5, -0.5, 1, 2]);
-    if (Math.abs(step) < 1e-14 * Math.max(1, Math.abs(eta))) break;
   }
   return factorsFromIntegrals(eta, fermiZero(eta), f[0], f[2], f[3]);
 }
@@ -131,8 +133,9 @@ function buildTable(): BandTable {
     columns[1][i] = f.lorenz;
     columns[2][i] = f.mobility;
     columns[3][i] = f.eta;
-    // Continuation: dη/du ≈ (η_i − η_{i−1})/h, good to O(h²) for the next Newton start.
-    guess = i > 0 ? 2 * f.eta - columns[3][i - 1] : f.eta + U_STEP;
+    // Continuation: quadratic extrapolation from the last three points, good
+    // to O(h³) ≈ 1e-5, so Newton needs one or two steps.
+    guess = i > 1 ? 3 * f.eta - 3 * columns[3][i - 1] + columns[3][i - 2] : i > 0 ? 2 * f.eta - columns[3][i - 1] : f.eta + U_STEP;
   }
   const cells = points - 1;
   const coefficients = new Float64Array(cells * 16);
