@@ -2,7 +2,10 @@ import 'reflect-metadata';
 import { createAuth } from './auth/auth-pool';
 import { readEnv } from './config/env';
 import { createDataSource } from './db/data-source';
+import { createServer } from 'node:http';
 import { createApp } from './http/app';
+import { attachRealtime } from './realtime/socket-server';
+import { watchRules } from './realtime/watch-rules';
 import { createMailer } from './mail/mailer';
 import { startBoss } from './queue/boss';
 import { version } from './version';
@@ -15,12 +18,14 @@ async function main(): Promise<void> {
   const mailer = createMailer(env);
   const { auth, pool } = createAuth(env);
   const app = createApp({ env, ds, boss, mailer, auth, version });
-  const server = app.listen(env.port, env.host, () => console.log(`[api] listening on http://${env.host}:${env.port}`));
+  const server = createServer(app);
+  const realtime = await attachRealtime(server, { auth, databaseUrl: env.databaseUrl, appOrigin: env.appOrigin, allowLoopback: !env.production }, watchRules(ds));
+  server.listen(env.port, env.host, () => console.log(`[api] listening on http://${env.host}:${env.port}`));
   let stopping = false;
   const stop = async (): Promise<void> => {
     if (stopping) return;
     stopping = true;
-    server.close();
+    await realtime.close();
     await boss.stop({ graceful: true, timeout: 5000 });
     mailer.close();
     await pool.end();

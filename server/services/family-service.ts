@@ -5,6 +5,7 @@ import type { MaterialInput } from '../../shared/engine';
 import type { z } from 'zod';
 import { MaterialFamily, MaterialFamilyVersion, Team } from '../db/entities';
 import { HttpError, ValidationError } from '../http/errors';
+import { publishEvent } from '../realtime/events';
 import { checkDefinition } from './family-definition';
 import { detail, findFamily, findVersion, summarise } from './family-store';
 
@@ -50,16 +51,25 @@ export async function insertFamily(m: EntityManager, team: Team, input: NewFamil
   return f;
 }
 
+/** Tells the team's open browsers (and watchers of the family) that it changed. */
+export async function announceFamily(ds: DataSource, team: Team, f: FamilySummary): Promise<FamilySummary> {
+  const payload = { familyId: f.id, version: f.version, archived: f.archived };
+  await publishEvent(ds, { teamId: team.id, event: 'family:changed', payload });
+  await publishEvent(ds, { teamId: team.id, room: `family:${f.id}`, event: 'family:changed', payload });
+  return f;
+}
+
 export async function createFamily(ds: DataSource, team: Team, input: CreateInput, by: string): Promise<FamilySummary> {
-  return ds.transaction(async (m) => {
+  const created = await ds.transaction(async (m) => {
     const f = await insertFamily(m, team, input, by);
     return summarise(f, await findVersion(m, f));
   });
+  return announceFamily(ds, team, created);
 }
 
 /** Name changes in place; any change of content writes the next immutable version. */
 export async function updateFamily(ds: DataSource, team: Team, id: unknown, input: UpdateInput, by: string): Promise<FamilySummary> {
-  return ds.transaction(async (m) => {
+  return announceFamily(ds, team, await ds.transaction(async (m) => {
     const f = await findFamily(m, team, id, true);
     const current = await findVersion(m, f);
     if (input.name !== undefined && input.name !== f.name) {
@@ -84,11 +94,11 @@ export async function updateFamily(ds: DataSource, team: Team, id: unknown, inpu
     }
     const saved = await m.getRepository(MaterialFamily).save(f);
     return summarise(saved, await findVersion(m, saved));
-  });
+  }));
 }
 
 export async function duplicateFamily(ds: DataSource, team: Team, id: unknown, input: DuplicateInput, by: string): Promise<FamilySummary> {
-  return ds.transaction(async (m) => {
+  return announceFamily(ds, team, await ds.transaction(async (m) => {
     const f = await findFamily(m, team, id);
     const v = await findVersion(m, f);
     const copy = await insertFamily(m, team, {
@@ -98,14 +108,14 @@ export async function duplicateFamily(ds: DataSource, team: Team, id: unknown, i
       definition: v.definition as MaterialInput,
     }, by);
     return summarise(copy, await findVersion(m, copy));
-  });
+  }));
 }
 
 export async function setArchived(ds: DataSource, team: Team, id: unknown, archived: boolean): Promise<FamilySummary> {
-  return ds.transaction(async (m) => {
+  return announceFamily(ds, team, await ds.transaction(async (m) => {
     const f = await findFamily(m, team, id, true);
     f.archived = archived;
     const saved = await m.getRepository(MaterialFamily).save(f);
     return summarise(saved, await findVersion(m, saved));
-  });
+  }));
 }

@@ -3,7 +3,7 @@ import type { UploadPreview, UploadSaved } from '../../shared/api';
 import { parseTableCsv } from '../../shared/families/parse-table-csv';
 import { Team } from '../db/entities';
 import { ValidationError } from '../http/errors';
-import { insertFamily } from './family-service';
+import { announceFamily, insertFamily } from './family-service';
 import { findVersion, summarise } from './family-store';
 
 /** Decodes an uploaded file as UTF-8 text, refusing binaries instead of parsing noise. */
@@ -26,8 +26,10 @@ export async function saveUpload(ds: DataSource, team: Team, buffer: Buffer, met
     })));
   }
   const definition = { kind: 'table' as const, rows: preview.rows.map(({ line: _line, ...r }) => r) };
-  return ds.transaction(async (m) => {
+  const saved = await ds.transaction(async (m) => {
     const f = await insertFamily(m, team, { ...meta, definition }, by);
     return { family: summarise(f, await findVersion(m, f)), preview };
   });
+  await announceFamily(ds, team, saved.family);
+  return saved;
 }
