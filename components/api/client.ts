@@ -61,15 +61,11 @@ function errorFromBody(status: number, body: unknown): ApiError {
   });
 }
 
-async function send(path: string, signal: AbortSignal | undefined): Promise<Response> {
+async function send(path: string, init: RequestInit): Promise<Response> {
   try {
-    return await fetch(`${apiBaseUrl()}${path}`, {
-      headers: { Accept: 'application/json' },
-      credentials: 'include',
-      signal,
-    });
+    return await fetch(`${apiBaseUrl()}${path}`, { credentials: 'include', ...init });
   } catch (cause) {
-    if (signal?.aborted) throw cause;
+    if (init.signal?.aborted) throw cause;
     throw new ApiError({
       status: 0,
       name: 'NetworkError',
@@ -78,15 +74,15 @@ async function send(path: string, signal: AbortSignal | undefined): Promise<Resp
   }
 }
 
-/** GET a JSON endpoint and validate the answer against its shared schema. */
-export async function apiGet<S extends z.ZodType>(
+/** Reads a response: an ApiError unless accepted, else the body checked against its schema. */
+async function readAnswer<S extends z.ZodType>(
   path: string,
+  response: Response,
   schema: S,
-  options: GetOptions = {},
+  acceptStatus: readonly number[] = [],
 ): Promise<z.output<S>> {
-  const response = await send(path, options.signal);
   const body = parseJson(await response.text());
-  const accepted = response.ok || (options.acceptStatus ?? []).includes(response.status);
+  const accepted = response.ok || acceptStatus.includes(response.status);
   if (!accepted) throw errorFromBody(response.status, body);
   const parsed = schema.safeParse(body);
   if (!parsed.success) {
@@ -97,4 +93,58 @@ export async function apiGet<S extends z.ZodType>(
     });
   }
   return parsed.data;
+}
+
+/** GET a JSON endpoint and validate the answer against its shared schema. */
+export async function apiGet<S extends z.ZodType>(
+  path: string,
+  schema: S,
+  options: GetOptions = {},
+): Promise<z.output<S>> {
+  const response = await send(path, {
+    headers: { Accept: 'application/json' },
+    signal: options.signal,
+  });
+  return readAnswer(path, response, schema, options.acceptStatus);
+}
+
+export type SendBody = { json: unknown } | { form: FormData } | { none: true };
+
+function encode(body: SendBody): { headers: Record<string, string>; body?: BodyInit } {
+  if ('json' in body) {
+    return {
+      headers: { Accept: 'application/json', 'Content-Type': 'application/json' },
+      body: JSON.stringify(body.json),
+    };
+  }
+  // The browser sets the multipart boundary itself: no Content-Type here.
+  if ('form' in body) return { headers: { Accept: 'application/json' }, body: body.form };
+  return { headers: { Accept: 'application/json' } };
+}
+
+/**
+ * POST/PUT JSON or a multipart form, and validate the answer. Error bodies
+ * become an ApiError whose `fieldErrors` name the offending fields.
+ */
+export async function apiSend<S extends z.ZodType>(
+  method: 'POST' | 'PUT',
+  path: string,
+  body: SendBody,
+  schema: S,
+): Promise<z.output<S>> {
+  const response = await send(path, { method, ...encode(body) });
+  return readAnswer(path, response, schema);
+}
+
+/**
+ * POST/PUT/DELETE whose success carries nothing to read (204, or a 202 the
+ * caller ignores): resolves on 2xx, throws an ApiError otherwise.
+ */
+export async function apiCommand(
+  method: 'POST' | 'PUT' | 'DELETE',
+  path: string,
+  body: SendBody,
+): Promise<void> {
+  const response = await send(path, { method, ...encode(body) });
+  if (!response.ok) throw errorFromBody(response.status, parseJson(await response.text()));
 }
