@@ -1,7 +1,7 @@
 import 'reflect-metadata';
 import { join } from 'node:path';
 import { readEnv } from '../config/env';
-import { demoTeam } from '../db/seed/demo-data';
+import { demoPassword, demoTeam, demoUsers } from '../db/seed/demo-data';
 import { prepareDatabase } from './database';
 import { log } from './log';
 import { stopCluster } from './postgres';
@@ -49,7 +49,8 @@ async function main(): Promise<void> {
   log('frostgrade', [
     `ready in ${((Date.now() - t0) / 1000).toFixed(1)} s`,
     `  open      ${url}`,
-    `  team      ${demoTeam.name} (demo data; sign-in arrives with accounts)`,
+    `  demo lab  ${demoTeam.name}; every demo account's password is ${demoPassword}`,
+    ...demoUsers.map((u) => `            ${u.email.padEnd(26)} ${u.role}${u.team === demoTeam.slug ? '' : ' (second team)'}`),
     `  mail      SMTP catcher on ${env.smtp.host}:${env.smtp.port}, messages in the app's Outbox`,
     `  database  ${env.databaseUrl}`,
     '  Ctrl-C stops everything.',
