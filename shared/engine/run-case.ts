@@ -8,7 +8,7 @@ import { CaseError } from './case-error';
 import type { CheckedCase } from './check-case';
 import type { Conditions, DesignScore, Objective } from './evaluate-design';
 import { nodeFractions, type Counter, type DopingProblem } from './doping-problem';
-import { gradedLeg, segmentedLeg, type Leg, type Segment } from './leg-profile';
+import { gradedLeg, profileAt, segmentedLeg, type Leg, type Segment } from './leg-profile';
 import { optimizeDoping } from './optimize-doping';
 import { bestSingleSegment, optimizeSegments } from './optimize-segments';
 import { nodeSensitivities, type NodeSensitivity } from './sensitivity';
@@ -151,46 +151,54 @@ export function optimizeLeg(c: CheckedCase, options: OptimizeOptions = {}): Opti
   const now = options.now ?? defaultClock;
   const t0 = now();
   const { tolerance } = checkSolveOptions({ tolerance: options.tolerance });
-  const conditions = conditionsOf(c);
   const seconds = () => (now() - t0) / 1000;
+  const result = c.leg.kind === 'segments' || c.leg.material.kind === 'constant' ? optimizeSegmented(c, options, tolerance) : optimizeDoped(c, options, tolerance);
+  return { ...result, seconds: seconds() };
+}
 
-  if (c.leg.kind === 'segments' || c.leg.material.kind === 'constant') {
-    const material = c.leg.kind === 'family' && c.leg.material.kind === 'constant' ? c.leg.material : undefined;
-    const segments: Segment[] = c.leg.kind === 'segments' ? c.leg.segments : [{ fraction: 1, seebeck: material?.seebeck ?? 0, sigma: material?.sigma ?? 1, kappa: material?.kappa ?? 1 }];
-    const problem = { segments, length: c.length, area: c.area, conditions, freeFractions: c.leg.kind === 'segments' && c.leg.freeFractions, current: c.current, tolerance };
-    if (options.start && options.start.kind !== 'segments') throw new CaseError('start', 'a doping checkpoint cannot resume a segmented leg');
-    if (options.start && options.start.fractions.length !== segments.length) throw new CaseError('start.fractions', `needs one fraction per segment (${segments.length})`);
-    const phase = problem.freeFractions ? 'fractions' : 'current';
-    const opt = optimizeSegments(problem, {
-      shouldStop: options.shouldStop,
-      start: options.start?.kind === 'segments' ? options.start : undefined,
-      onProgress: (p) => options.onProgress?.({ phase, iteration: p.iteration, objective: p.objective, best: p.best, state: { kind: 'segments', ...p.state } }),
-    });
-    if (!opt.score.feasible) throw new CaseError(c.objective === 'maxCop' ? 'heatLoad' : 'hotSide', 'no current gives a steady state for these conditions');
-    const single = segments.length > 1 && c.leg.kind === 'segments' ? bestSingleSegment(problem) : undefined;
-    const fitted = segments.map((s, k) => ({ ...s, fraction: opt.fractions[k] }));
-    const solution = finalSolution(c, segmentedLeg(c.length, c.area, fitted), opt.score, tolerance);
-    return {
-      ...solution,
-      objective: { name: c.objective, value: opt.score.value },
-      ...(c.leg.kind === 'segments' ? { segments: fitted } : {}),
-      baselines: single ? { uniform: { segment: single.segment, current: single.score.current, deltaT: single.score.deltaT, objective: single.score.value }, localBestZt: null } : null,
-      sensitivity: [],
-      evaluations: opt.evaluations + (single?.evaluations ?? 0) + 1,
-      seconds: seconds(),
-      stopped: opt.stopped,
-      state: { kind: 'segments', fractions: opt.fractions, current: opt.score.current },
-      warnings: [],
-    };
-  }
+const checkpoint = (log10: readonly number[], current: number): OptimizerState => ({ kind: 'doping', perCm3: log10.map((v) => Math.pow(10, v)), current });
 
+/** Segments (or a constant material, one segment): fractions and/or current. */
+function optimizeSegmented(c: CheckedCase, options: OptimizeOptions, tolerance: number): Omit<OptimizeResult, 'seconds'> {
+  const material = c.leg.kind === 'family' && c.leg.material.kind === 'constant' ? c.leg.material : undefined;
+  const segments: Segment[] = c.leg.kind === 'segments' ? c.leg.segments : [{ fraction: 1, seebeck: material?.seebeck ?? 0, sigma: material?.sigma ?? 1, kappa: material?.kappa ?? 1 }];
+  const problem = { segments, length: c.length, area: c.area, conditions: conditionsOf(c), freeFractions: c.leg.kind === 'segments' && c.leg.freeFractions, current: c.current, tolerance };
+  if (options.start && options.start.kind !== 'segments') throw new CaseError('start', 'a doping checkpoint cannot resume a segmented leg');
+  if (options.start && options.start.fractions.length !== segments.length) throw new CaseError('start.fractions', `needs one fraction per segment (${segments.length})`);
+  const phase = problem.freeFractions ? 'fractions' : 'current';
+  const opt = optimizeSegments(problem, {
+    shouldStop: options.shouldStop,
+    start: options.start?.kind === 'segments' ? options.start : undefined,
+    onProgress: (p) => options.onProgress?.({ phase, iteration: p.iteration, objective: p.objective, best: p.best, state: { kind: 'segments', ...p.state } }),
+  });
+  if (!opt.score.feasible) throw new CaseError(c.objective === 'maxCop' ? 'heatLoad' : 'hotSide', 'no current gives a steady state for these conditions');
+  const single = segments.length > 1 && c.leg.kind === 'segments' ? bestSingleSegment(problem) : undefined;
+  const fitted = segments.map((s, k) => ({ ...s, fraction: opt.fractions[k] }));
+  const solution = finalSolution(c, segmentedLeg(c.length, c.area, fitted), opt.score, tolerance);
+  return {
+    ...solution,
+    objective: { name: c.objective, value: opt.score.value },
+    ...(c.leg.kind === 'segments' ? { segments: fitted } : {}),
+    baselines: single ? { uniform: { segment: single.segment, current: single.score.current, deltaT: single.score.deltaT, objective: single.score.value }, localBestZt: null } : null,
+    sensitivity: [],
+    evaluations: opt.evaluations + (single?.evaluations ?? 0) + 1,
+    stopped: opt.stopped,
+    state: { kind: 'segments', fractions: opt.fractions, current: opt.score.current },
+    warnings: [],
+  };
+}
+
+/** A doping-controlled family: baselines, the node profile (and current), sensitivity. */
+function optimizeDoped(c: CheckedCase, options: OptimizeOptions, tolerance: number): Omit<OptimizeResult, 'seconds'> {
+  if (c.leg.kind !== 'family') throw new Error('optimizeDoped needs a family leg');
   const leg = c.leg;
   const bounds = leg.bounds as { lower: number; upper: number };
+  const clamp = (v: number) => Math.min(bounds.upper, Math.max(bounds.lower, v));
   const problem: DopingProblem = {
     family: leg.family,
     length: c.length,
     area: c.area,
-    conditions,
+    conditions: conditionsOf(c),
     lower: bounds.lower,
     upper: bounds.upper,
     controlPoints: leg.controlPoints,
@@ -199,47 +207,38 @@ export function optimizeLeg(c: CheckedCase, options: OptimizeOptions = {}): Opti
     tolerance,
   };
   const x = nodeFractions(problem);
-  let start: { log10: number[]; current: number } | undefined;
+  // Starting points besides the baselines: a checkpoint, else a doping given in the case.
+  let start: { log10: number[]; current?: number } | undefined;
   if (options.start) {
     if (options.start.kind !== 'doping') throw new CaseError('start', 'a segment checkpoint cannot resume a doping optimisation');
     if (options.start.perCm3.length !== x.length) throw new CaseError('start.perCm3', `needs one doping per control point (${x.length})`);
-    start = { log10: options.start.perCm3.map((v) => Math.min(bounds.upper, Math.max(bounds.lower, Math.log10(v)))), current: options.start.current };
+    start = { log10: options.start.perCm3.map((v) => clamp(Math.log10(v))), current: options.start.current };
   } else if (leg.doping) {
-    // A doping given in an optimize case is a starting point too.
     const given = leg.doping;
-    const log10 = x.map((f) => {
-      for (let k = 0; k + 1 < given.x.length; k++) {
-        if (f <= given.x[k + 1]) return given.log10[k] + ((f - given.x[k]) / (given.x[k + 1] - given.x[k])) * (given.log10[k + 1] - given.log10[k]);
-      }
-      return given.log10[given.log10.length - 1];
-    });
-    start = { log10: log10.map((v) => Math.min(bounds.upper, Math.max(bounds.lower, v))), current: c.current ?? NaN };
+    start = { log10: x.map((f) => clamp(profileAt(given.x, given.log10, f))), current: c.current };
   }
 
   const counter: Counter = { evaluations: 0 };
-  const doping = (log10: number[]) => ({ kind: 'doping' as const, perCm3: log10.map((v) => Math.pow(10, v)), current: 0 });
   const uniform = bestUniform(problem, counter);
-  options.onProgress?.({ phase: 'uniform', iteration: 0, objective: uniform.score.value, best: uniform.score.value, state: { ...doping(x.map(() => uniform.log10)), current: uniform.score.current } });
+  const flat = checkpoint(x.map(() => uniform.log10), uniform.score.current);
+  options.onProgress?.({ phase: 'uniform', iteration: 0, objective: uniform.score.value, best: uniform.score.value, state: flat });
   const local = localBestZt(problem, uniform, counter);
-  const bestBaseline = local.score.value > uniform.score.value ? local.score.value : uniform.score.value;
-  options.onProgress?.({ phase: 'localBestZt', iteration: 0, objective: local.score.value, best: bestBaseline, state: { ...doping(x.map(() => uniform.log10)), current: uniform.score.current } });
+  options.onProgress?.({ phase: 'localBestZt', iteration: 0, objective: local.score.value, best: Math.max(local.score.value, uniform.score.value), state: flat });
 
-  if (start && !Number.isFinite(start.current)) start.current = uniform.score.current;
   const opt = optimizeDoping(problem, uniform, local, counter, {
-    start,
+    start: start && { log10: start.log10, current: start.current ?? uniform.score.current },
     shouldStop: options.shouldStop,
-    onProgress: (p) =>
-      options.onProgress?.({ phase: 'profile', iteration: p.iteration, objective: p.objective, best: p.best, state: { ...doping(p.state.log10), current: p.state.current } }),
+    onProgress: (p) => options.onProgress?.({ phase: 'profile', iteration: p.iteration, objective: p.objective, best: p.best, state: checkpoint(p.state.log10, p.state.current) }),
   });
-  const designLeg = gradedLeg(c.length, c.area, leg.family, x, opt.log10);
-  const solution = finalSolution(c, designLeg, opt.score, tolerance);
+  const build = (log10: readonly number[]) => gradedLeg(c.length, c.area, leg.family, x, log10);
+  const solution = finalSolution(c, build(opt.log10), opt.score, tolerance);
   const sensitivity = nodeSensitivities({
     x,
     log10: opt.log10,
     current: solution.current,
     heatLoad: solution.heatLoad,
     hotSide: c.hotSide,
-    build: (log10) => gradedLeg(c.length, c.area, leg.family, x, log10),
+    build,
     minLog10: leg.family.minLog10Doping,
     maxLog10: leg.family.maxLog10Doping,
     tolerance,
@@ -251,9 +250,8 @@ export function optimizeLeg(c: CheckedCase, options: OptimizeOptions = {}): Opti
     baselines: baselineOf(uniform, local),
     sensitivity: sensitivity.nodes,
     evaluations: counter.evaluations + sensitivity.evaluations + 1,
-    seconds: seconds(),
     stopped: opt.stopped,
-    state: { ...doping(opt.log10), current: opt.score.current },
+    state: checkpoint(opt.log10, opt.score.current),
     warnings: rangeWarnings(c, solution),
   };
 }
