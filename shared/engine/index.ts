@@ -4,8 +4,14 @@
  * cm²/(V·s) at the case boundary only).
  *
  *   const c = parseCase(json, 'optimize');          // throws CaseError{field, message}
- *   const result = optimizeLeg(c, { onProgress, shouldStop, start });
+ *   const result = optimizeLeg(c, {
+ *     onProgress: (p) => report(p),                  // after each baseline and iteration; p.state is a checkpoint
+ *     shouldStop: () => job.signal.aborted,          // checked between iterations; the best so far is returned
+ *     start: checkpoint,                             // resume from a saved p.state / result.state
+ *   });
  *   const solution = solveLeg(parseCase(json, 'solve'));
+ *
+ * Physics, numerics and the case format: PHYSICS.md beside this file.
  */
 export { CaseError } from './case-error';
 export { parseCase, familyFromMaterial, fieldPath, DEFAULT_CONTROL_POINTS, MIN_PER_CM3, MAX_PER_CM3 } from './check-case';
