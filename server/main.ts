@@ -14,7 +14,7 @@ import { version } from './version';
 async function main(): Promise<void> {
   const env = readEnv();
   const ds = await createDataSource(env.databaseUrl, 'frostgrade-api').initialize();
-  const boss = await startBoss(env.databaseUrl, 'frostgrade-api');
+  const boss = await startBoss(env.databaseUrl, 'frostgrade-api', [env.runQueue]);
   const mailer = createMailer(env);
   const { auth, pool } = createAuth(env);
   const app = createApp({ env, ds, boss, mailer, auth, version });

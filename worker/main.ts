@@ -3,29 +3,48 @@ import { randomUUID } from 'node:crypto';
 import { hostname } from 'node:os';
 import { readEnv } from '../server/config/env';
 import { createDataSource } from '../server/db/data-source';
+import { createMailer } from '../server/mail/mailer';
 import { startBoss } from '../server/queue/boss';
 import { queues } from '../server/queue/queues';
 import { startHeartbeat } from './heartbeat';
+import { runJob } from './run-job';
+import { startRunSupervisor } from './run-supervisor';
 
 /**
- * A worker process. Start more of them (here or on other machines against the
- * same PostgreSQL) to work more jobs at once.
+ * A worker process: one run at a time (a run keeps one core busy). Start
+ * more of them, here or on other machines against the same PostgreSQL, to
+ * work more runs at once.
  */
 async function main(): Promise<void> {
   const env = readEnv();
   const workerId = `${hostname()}:${process.pid}:${randomUUID().slice(0, 8)}`;
   const ds = await createDataSource(env.databaseUrl, 'frostgrade-worker').initialize();
-  const boss = await startBoss(env.databaseUrl, 'frostgrade-worker');
+  const boss = await startBoss(env.databaseUrl, 'frostgrade-worker', [env.runQueue]);
+  const mailer = createMailer(env);
   const heartbeat = startHeartbeat(ds, workerId, env.heartbeatSeconds);
   await heartbeat.beat();
+  let shuttingDown = false;
   await boss.work<{ sentAt?: string }>(queues.probe, { pollingIntervalSeconds: 0.5 }, async ([job]) => {
     await heartbeat.beat(1);
     return { workerId, receivedAt: new Date().toISOString(), sentAt: job?.data.sentAt ?? null };
   });
-  console.log(`[worker] ${workerId} ready`);
+  await boss.work<{ runId: string }>(env.runQueue, { pollingIntervalSeconds: 0.5, batchSize: 1 }, async ([job]) => {
+    if (!job) return null;
+    const outcome = await runJob({ ds, mailer, appOrigin: env.appOrigin, workerId, isShuttingDown: () => shuttingDown }, job.data.runId);
+    await heartbeat.beat(1);
+    console.log(`[worker] run ${job.data.runId}: ${outcome}`);
+    return { workerId, outcome };
+  });
+  const supervisor = startRunSupervisor(ds, boss, env.runStaleSeconds);
+  console.log(`[worker] ${workerId} ready (queue ${env.runQueue})`);
   const stop = async (): Promise<void> => {
+    if (shuttingDown) return;
+    shuttingDown = true;
+    supervisor.stop();
     heartbeat.stop();
-    await boss.stop({ graceful: true, timeout: 10000 });
+    // A running job sees `shuttingDown` at its next beat, checkpoints and goes back to the queue.
+    await boss.stop({ graceful: true, timeout: 15000 });
+    mailer.close();
     await ds.destroy();
     process.exit(0);
   };

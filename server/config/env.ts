@@ -30,6 +30,8 @@ const schema = z.object({
   MAIL_CATCHER: z.enum(['0', '1']).optional(),
   WEB_DIST: z.string().default('dist'),
   WORKER_HEARTBEAT_SECONDS: z.coerce.number().min(1).max(300).default(5),
+  RUN_QUEUE: z.string().regex(/^[a-z0-9-]+$/).default('leg-run'),
+  RUN_STALE_SECONDS: z.coerce.number().min(3).max(3600).default(15),
 });
 
 export type Env = {
@@ -47,6 +49,10 @@ export type Env = {
   mailCatcher: boolean;
   webDist: string;
   heartbeatSeconds: number;
+  /** pg-boss queue the API sends runs to and workers take them from. */
+  runQueue: string;
+  /** A running run whose worker has not beaten for this long is handed to another worker. */
+  runStaleSeconds: number;
 };
 
 export function readEnv(source: Record<string, string | undefined> = process.env): Env {
@@ -74,5 +80,7 @@ export function readEnv(source: Record<string, string | undefined> = process.env
     mailCatcher: production ? false : e.MAIL_CATCHER !== '0',
     webDist: e.WEB_DIST,
     heartbeatSeconds: e.WORKER_HEARTBEAT_SECONDS,
+    runQueue: e.RUN_QUEUE,
+    runStaleSeconds: e.RUN_STALE_SECONDS,
   };
 }

@@ -7,6 +7,7 @@ import type { Auth } from '../auth/lucia';
 import type { Env } from '../config/env';
 import type { Mailer } from '../mail/mailer';
 import { authRoutes } from '../routes/auth-routes';
+import { designRoutes } from '../routes/design-routes';
 import { familyRoutes } from '../routes/family-routes';
 import { systemRoutes } from '../routes/system-routes';
 import { teamRoutes } from '../routes/team-routes';
@@ -25,6 +26,7 @@ export function apiRoutes(d: AppDeps): RouteSpec[] {
     ...authRoutes(accountDeps),
     ...teamRoutes(accountDeps),
     ...familyRoutes(d.ds),
+    ...designRoutes({ ds: d.ds, boss: d.boss, runQueue: d.env.runQueue }),
   ];
 }
 

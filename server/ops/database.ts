@@ -20,7 +20,7 @@ export async function prepareDatabase(env: Env, opts: { fresh: boolean }): Promi
     await ds.destroy();
   }
   // Install pg-boss's schema and our queues once, before several processes race to.
-  const boss = await startBoss(env.databaseUrl, 'frostgrade-setup');
+  const boss = await startBoss(env.databaseUrl, 'frostgrade-setup', [env.runQueue]);
   await boss.stop({ graceful: false, wait: true });
   return cluster;
 }

@@ -26,7 +26,8 @@ export function startServices(services: Service[], env: NodeJS.ProcessEnv, onCra
   const children = services.map((s) => {
     const child = s.entry === 'npx'
       ? spawn('npx', s.args ?? [], { cwd: root, env: { ...env, ...s.env }, stdio: ['ignore', 'pipe', 'pipe'] })
-      : spawn(join(root, 'node_modules', '.bin', 'tsx'), [s.entry, ...(s.args ?? [])], { cwd: root, env: { ...env, ...s.env }, stdio: ['ignore', 'pipe', 'pipe'] });
+      // node with tsx's loader rather than the tsx wrapper: one process per service, signals go straight to it.
+      : spawn(process.execPath, ['--require', 'tsx/cjs', s.entry, ...(s.args ?? [])], { cwd: root, env: { ...env, ...s.env }, stdio: ['ignore', 'pipe', 'pipe'] });
     const relay = (chunk: Buffer): void => {
       for (const line of chunk.toString().split('\n')) if (line.trim()) process.stdout.write(line.startsWith('[') ? `${line}\n` : `[${s.name}] ${line}\n`);
     };

@@ -11,7 +11,7 @@ function isDeadlock(err: unknown): boolean {
  * kind of process is up. Processes starting together can deadlock on pg-boss's
  * own schema set-up; the set-up step runs it first, and a deadlock is retried.
  */
-export async function startBoss(databaseUrl: string, applicationName: string): Promise<PgBoss> {
+export async function startBoss(databaseUrl: string, applicationName: string, extraQueues: string[] = []): Promise<PgBoss> {
   for (let attempt = 1; ; attempt += 1) {
     const boss = new PgBoss({ connectionString: databaseUrl, schema: 'pgboss', application_name: applicationName, max: 4 });
     boss.on('error', (err: Error) => console.error(`[${applicationName}] pg-boss: ${err.message}`));
@@ -20,6 +20,7 @@ export async function startBoss(databaseUrl: string, applicationName: string): P
       for (const name of Object.values(queues)) {
         if (!(await boss.getQueue(name))) await boss.createQueue(name, { name, retryLimit: 0, expireInSeconds: 60 });
       }
+      for (const name of extraQueues) await ensureRunQueue(boss, name);
       return boss;
     } catch (err) {
       await boss.stop({ graceful: false }).catch(() => undefined);
@@ -27,4 +28,13 @@ export async function startBoss(databaseUrl: string, applicationName: string): P
       await new Promise((r) => setTimeout(r, 200 * attempt));
     }
   }
+}
+
+/**
+ * Runs are supervised by Frostgrade itself (run heartbeats, checkpoints), not
+ * by pg-boss retries: a retry by pg-boss could start a second copy of a run
+ * that is still alive. So no retries, and an expiry far beyond any run.
+ */
+export async function ensureRunQueue(boss: PgBoss, name: string): Promise<void> {
+  if (!(await boss.getQueue(name))) await boss.createQueue(name, { name, retryLimit: 0, expireInSeconds: 23 * 3600 });
 }

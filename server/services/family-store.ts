@@ -37,9 +37,11 @@ export function summarise(f: MaterialFamily, v: MaterialFamilyVersion): FamilySu
   };
 }
 
-/** Runs that used each version; there are no runs before the runs feature, so every count is 0 until then. */
-async function runCounts(_m: EntityManager, _versionIds: string[]): Promise<Map<string, number>> {
-  return new Map();
+/** Runs that used each version: a version with runs is what those runs were computed from. */
+async function runCounts(m: EntityManager, versionIds: string[]): Promise<Map<string, number>> {
+  if (versionIds.length === 0) return new Map();
+  const rows: Array<{ id: string; n: number }> = await m.query('SELECT family_version_id AS id, count(*)::int AS n FROM run WHERE family_version_id = ANY($1) GROUP BY 1', [versionIds]);
+  return new Map(rows.map((r) => [r.id, r.n]));
 }
 
 export async function detail(m: EntityManager, f: MaterialFamily, version?: number): Promise<FamilyDetailResponse> {

@@ -5,3 +5,5 @@ export * from './health';
 export * from './outbox';
 export * from './family-upload';
 export * from './auth';
+export * from './designs';
+export * from './runs';

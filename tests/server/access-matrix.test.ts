@@ -16,6 +16,7 @@ afterAll(async () => { await ctx.close(); });
 const all = roles;
 const designers: Role[] = ['admin', 'physicist'];
 const admins: Role[] = ['admin'];
+const runReaders: Role[] = ['admin', 'physicist', 'viewer'];
 
 /**
  * The access policy, written out by hand from DESIGN.md's role table. The
@@ -50,6 +51,20 @@ const policy: Record<string, 'public' | Role[]> = {
   'POST /families/:id/unarchive': designers,
   'GET /families/:id/export.csv': all.slice(),
   'GET /families/:id/export.json': all.slice(),
+  'GET /designs': runReaders,
+  'POST /designs': designers,
+  'GET /designs/:id': runReaders,
+  'PUT /designs/:id': designers,
+  'POST /designs/:id/follow': runReaders,
+  'DELETE /designs/:id/follow': runReaders,
+  'POST /designs/:id/runs': designers,
+  'POST /designs/:id/sweeps': designers,
+  'GET /runs': runReaders,
+  'GET /runs/:id': runReaders,
+  'POST /runs/:id/cancel': designers,
+  'GET /runs/:id/export.csv': runReaders,
+  'GET /runs/:id/export.json': runReaders,
+  'GET /sweeps/:id': runReaders,
 };
 
 const key = (s: RouteSpec): string => `${s.method.toUpperCase()} ${s.path}`;
@@ -64,6 +79,8 @@ const validBody: Record<string, object> = {
   'PUT /families/:id': { summary: 'changed by an outsider' },
   'POST /families/:id/duplicate': { name: 'Copied by an outsider' },
   'PUT /team/members/:id/role': { role: 'admin' },
+  'PUT /designs/:id': { name: 'x', familyId: '00000000-0000-4000-8000-000000000000', lengthMm: 1, areaMm2: 1, hotSide: 300, minPerCm3: 1e18, maxPerCm3: 1e20 },
+  'POST /designs/:id/sweeps': { parameter: 'hotSide', values: [290, 300] },
 };
 
 function call(client: ReturnType<typeof request.agent>, s: RouteSpec, path: string) {
@@ -93,7 +110,11 @@ it('a member of another team gets 404 for every object of this team, and nothing
   const lab = await signedIn(ctx, demo.admin);
   const family = (await lab.get('/api/families')).body.families[0];
   const [viewer] = await ctx.ds.query('SELECT id FROM app_user WHERE email = $1', [demo.viewer]);
-  const ids: Record<string, string> = { '/families/': family.id, '/team/members/': viewer.id, '/team/invitations/': randomUUID() };
+  const designRes = await lab.post('/api/designs').send({ name: `Matrix ${Date.now()}`, familyId: family.id, lengthMm: 1.5, areaMm2: 1, hotSide: 300, minPerCm3: 1e18, maxPerCm3: 1e20, controlPoints: 4, starts: 1 });
+  const designId = designRes.body.design.id as string;
+  const runId = (await lab.post(`/api/designs/${designId}/runs`)).body.run.id as string;
+  const sweepId = (await lab.post(`/api/designs/${designId}/sweeps`).send({ parameter: 'hotSide', values: [295, 300] })).body.sweep.id as string;
+  const ids: Record<string, string> = { '/families/': family.id, '/team/members/': viewer.id, '/team/invitations/': randomUUID(), '/designs/': designId, '/runs/': runId, '/sweeps/': sweepId };
   for (const s of specs.filter((x) => x.path.includes(':id'))) {
     const prefix = Object.keys(ids).find((p) => s.path.startsWith(p))!;
     const outsider = await signedIn(ctx, demo.otherTeamAdmin);

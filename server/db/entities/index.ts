@@ -6,3 +6,6 @@ export { WorkerHeartbeat } from './worker-heartbeat';
 export { AppUser } from './app-user';
 export { Invitation } from './invitation';
 export { PasswordReset } from './password-reset';
+export { Design } from './design';
+export { Run } from './run';
+export { Sweep } from './sweep';

@@ -1,0 +1,37 @@
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+
+export type RunStateName = 'queued' | 'running' | 'succeeded' | 'failed' | 'cancelled';
+
+/**
+ * One optimisation: the frozen design and engine case, the family version it
+ * used, and what the worker reports (progress, checkpoint, result). The
+ * worker that claimed it (worker_id) is the only one that may finish it.
+ */
+@Entity('run')
+export class Run {
+  @PrimaryGeneratedColumn('uuid') id!: string;
+  @Column({ type: 'uuid' }) teamId!: string;
+  @Column({ type: 'uuid' }) designId!: string;
+  @Column({ type: 'jsonb' }) designSnapshot!: Record<string, unknown>;
+  @Column({ type: 'uuid' }) familyVersionId!: string;
+  @Column({ type: 'uuid', nullable: true }) sweepId!: string | null;
+  @Column({ type: 'double precision', nullable: true }) sweepValue!: number | null;
+  @Column({ type: 'jsonb', name: 'case_json' }) caseJson!: Record<string, unknown>;
+  @Column({ type: 'text' }) objective!: string;
+  @Column({ type: 'text', default: 'queued' }) state!: RunStateName;
+  @Column({ type: 'text' }) queue!: string;
+  @Column({ type: 'text' }) launchedBy!: string;
+  @CreateDateColumn({ type: 'timestamptz' }) createdAt!: Date;
+  @Column({ type: 'timestamptz', nullable: true }) startedAt!: Date | null;
+  @Column({ type: 'timestamptz', nullable: true }) finishedAt!: Date | null;
+  @Column({ type: 'text', nullable: true }) workerId!: string | null;
+  @Column({ type: 'timestamptz', nullable: true }) heartbeatAt!: Date | null;
+  @Column({ type: 'integer', default: 0 }) attempts!: number;
+  @Column({ type: 'boolean', default: false }) cancelRequested!: boolean;
+  @Column({ type: 'jsonb', nullable: true }) progress!: Record<string, unknown> | null;
+  @Column({ type: 'jsonb', nullable: true }) checkpoint!: Record<string, unknown> | null;
+  @Column({ type: 'timestamptz', nullable: true }) checkpointAt!: Date | null;
+  @Column({ type: 'jsonb', nullable: true }) result!: Record<string, unknown> | null;
+  @Column({ type: 'text', nullable: true }) error!: string | null;
+  @Column({ type: 'text' }) engineVersion!: string;
+}

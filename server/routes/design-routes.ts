@@ -1,0 +1,58 @@
+import type { Role } from '../../shared/api';
+import { designInputSchema, sweepRequestSchema } from '../../shared/api';
+import { designers, requireTeam, requireUser } from '../http/access';
+import { route, type RouteSpec } from '../http/route-table';
+import { body } from '../http/validate';
+import { describe, findDesign, listDesigns, saveDesign, setFollowing } from '../services/design-service';
+import { exportRun } from '../services/run-export';
+import { cancelRun, launchRun, launchSweep, listRuns, runDetail, sweepDetail, type RunDeps } from '../services/run-service';
+
+/** Designs and runs are the physicists' work; growers see released profiles only (growth orders). */
+export const runReaders: readonly Role[] = ['admin', 'physicist', 'viewer'];
+
+export function designRoutes(d: RunDeps): RouteSpec[] {
+  const { ds } = d;
+  return [
+    route('get', '/designs', runReaders, async (req, res) => {
+      res.json({ designs: await listDesigns(ds, requireTeam(req), requireUser(req).id) });
+    }),
+    route('post', '/designs', designers, body(designInputSchema), async (req, res) => {
+      res.status(201).json({ design: await saveDesign(ds, requireTeam(req), requireUser(req), res.locals.body) });
+    }),
+    route('get', '/designs/:id', runReaders, async (req, res) => {
+      const design = await findDesign(ds.manager, requireTeam(req), req.params.id);
+      res.json({ design: await describe(ds.manager, design, requireUser(req).id) });
+    }),
+    route('put', '/designs/:id', designers, body(designInputSchema), async (req, res) => {
+      res.json({ design: await saveDesign(ds, requireTeam(req), requireUser(req), res.locals.body, req.params.id) });
+    }),
+    route('post', '/designs/:id/follow', runReaders, async (req, res) => {
+      res.json({ design: await setFollowing(ds, requireTeam(req), requireUser(req).id, req.params.id, true) });
+    }),
+    route('delete', '/designs/:id/follow', runReaders, async (req, res) => {
+      res.json({ design: await setFollowing(ds, requireTeam(req), requireUser(req).id, req.params.id, false) });
+    }),
+    route('post', '/designs/:id/runs', designers, async (req, res) => {
+      res.status(201).json({ run: await launchRun(d, requireTeam(req), requireUser(req), req.params.id) });
+    }),
+    route('post', '/designs/:id/sweeps', designers, body(sweepRequestSchema), async (req, res) => {
+      res.status(201).json({ sweep: await launchSweep(d, requireTeam(req), requireUser(req), req.params.id, res.locals.body) });
+    }),
+    route('get', '/runs', runReaders, async (req, res) => {
+      res.json({ runs: await listRuns(ds, requireTeam(req), { designId: req.query.designId as string | undefined, sweepId: req.query.sweepId as string | undefined }) });
+    }),
+    route('get', '/runs/:id', runReaders, async (req, res) => {
+      res.json(await runDetail(ds, requireTeam(req), req.params.id, requireUser(req).id));
+    }),
+    route('post', '/runs/:id/cancel', designers, async (req, res) => {
+      res.json({ run: await cancelRun(d, requireTeam(req), req.params.id) });
+    }),
+    ...(['csv', 'json'] as const).map((format) => route('get', `/runs/:id/export.${format}`, runReaders, async (req, res) => {
+      const out = await exportRun(ds, requireTeam(req), req.params.id, format);
+      res.type(format === 'csv' ? 'text/csv' : 'application/json').attachment(out.filename).send(out.body);
+    })),
+    route('get', '/sweeps/:id', runReaders, async (req, res) => {
+      res.json({ sweep: await sweepDetail(ds, requireTeam(req), req.params.id) });
+    }),
+  ];
+}

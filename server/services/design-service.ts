@@ -1,0 +1,102 @@
+import type { DataSource, EntityManager } from 'typeorm';
+import type { z } from 'zod';
+import type { Design as DesignDto, designInputSchema } from '../../shared/api';
+import { CaseError, parseCase, type MaterialInput } from '../../shared/engine';
+import { designToCase } from '../../shared/runs/design-case';
+import { Design, MaterialFamily, Team } from '../db/entities';
+import { NotFoundError, ValidationError } from '../http/errors';
+import { isUuid } from '../http/validate';
+import { findFamily, findVersion } from './family-store';
+
+type DesignInput = z.output<typeof designInputSchema>;
+
+export async function findDesign(m: EntityManager, team: Team, id: unknown): Promise<Design> {
+  if (!isUuid(id)) throw new NotFoundError('design');
+  const d = await m.getRepository(Design).findOneBy({ id, teamId: team.id });
+  if (!d) throw new NotFoundError('design');
+  return d;
+}
+
+async function followingSet(m: EntityManager, userId: string, designIds: string[]): Promise<Set<string>> {
+  if (designIds.length === 0) return new Set();
+  const rows: Array<{ design_id: string }> = await m.query('SELECT design_id FROM design_follower WHERE user_id = $1 AND design_id = ANY($2)', [userId, designIds]);
+  return new Set(rows.map((r) => r.design_id));
+}
+
+export function toDto(d: Design, family: MaterialFamily, following: boolean): DesignDto {
+  return {
+    id: d.id, name: d.name, notes: d.notes, familyId: d.familyId, familyName: family.name, familyVersion: d.familyVersion, carrier: family.carrier,
+    lengthMm: d.lengthMm, areaMm2: d.areaMm2, hotSide: d.hotSide, objective: d.objective, heatLoad: d.heatLoad, coldSide: d.coldSide,
+    minPerCm3: d.minPerCm3, maxPerCm3: d.maxPerCm3, controlPoints: d.controlPoints, monotone: d.monotone, starts: d.starts, minZoneMm: d.minZoneMm,
+    createdBy: d.createdBy, createdAt: d.createdAt.toISOString(), updatedAt: d.updatedAt.toISOString(), following,
+  };
+}
+
+export async function describe(m: EntityManager, d: Design, userId: string): Promise<DesignDto> {
+  const family = await m.getRepository(MaterialFamily).findOneByOrFail({ id: d.familyId });
+  return toDto(d, family, (await followingSet(m, userId, [d.id])).has(d.id));
+}
+
+export async function listDesigns(ds: DataSource, team: Team, userId: string): Promise<DesignDto[]> {
+  const designs = await ds.getRepository(Design).find({ where: { teamId: team.id }, order: { updatedAt: 'DESC' } });
+  const families = new Map((await ds.getRepository(MaterialFamily).findBy({ teamId: team.id })).map((f) => [f.id, f]));
+  const following = await followingSet(ds.manager, userId, designs.map((d) => d.id));
+  return designs.map((d) => toDto(d, families.get(d.familyId)!, following.has(d.id)));
+}
+
+/**
+ * The family (of the caller's team) and version a design uses, and the
+ * engine's verdict on the whole case, so a design that cannot run is refused
+ * when it is saved rather than when a worker picks it up.
+ */
+async function checkAgainstEngine(m: EntityManager, team: Team, input: DesignInput): Promise<{ version: number }> {
+  let family: MaterialFamily;
+  try {
+    family = await findFamily(m, team, input.familyId);
+  } catch {
+    throw new ValidationError([{ field: 'familyId', message: 'no such material family in this team' }]);
+  }
+  const version = await findVersion(m, family, input.familyVersion ?? family.currentVersion).catch(() => {
+    throw new ValidationError([{ field: 'familyVersion', message: `the family has no version ${input.familyVersion}` }]);
+  });
+  try {
+    parseCase(designToCase({ ...input, coldSide: input.coldSide ?? null }, version.definition as MaterialInput), 'optimize');
+  } catch (err) {
+    if (err instanceof CaseError) throw new ValidationError([{ field: engineFieldToDesign(err.field), message: err.message }]);
+    throw err;
+  }
+  return { version: version.version };
+}
+
+/** Engine case fields back to the form's fields, so the error lands beside the right input. */
+function engineFieldToDesign(field: string): string {
+  const map: Record<string, string> = { length: 'lengthMm', area: 'areaMm2', 'bounds.minPerCm3': 'minPerCm3', 'bounds.maxPerCm3': 'maxPerCm3', bounds: 'maxPerCm3' };
+  if (field.startsWith('material')) return 'familyId';
+  return map[field] ?? field;
+}
+
+export async function saveDesign(ds: DataSource, team: Team, user: { id: string; displayName: string }, input: DesignInput, id?: unknown): Promise<DesignDto> {
+  return ds.transaction(async (m) => {
+    // An unknown design answers 404 before its body is judged.
+    const existing = id === undefined ? undefined : await findDesign(m, team, id);
+    const { version } = await checkAgainstEngine(m, team, input);
+    const repo = m.getRepository(Design);
+    const { familyVersion: _v, ...fields } = input;
+    const d = existing
+      ? Object.assign(existing, { ...fields, coldSide: input.coldSide ?? null, familyVersion: version })
+      : repo.create({ ...fields, coldSide: input.coldSide ?? null, familyVersion: version, teamId: team.id, createdBy: user.displayName });
+    const saved = await repo.save(d);
+    // Whoever creates a design follows it: they hear when its runs end.
+    if (id === undefined) await m.query('INSERT INTO design_follower (design_id, user_id) VALUES ($1, $2) ON CONFLICT DO NOTHING', [saved.id, user.id]);
+    return describe(m, saved, user.id);
+  });
+}
+
+export async function setFollowing(ds: DataSource, team: Team, userId: string, id: unknown, follow: boolean): Promise<DesignDto> {
+  return ds.transaction(async (m) => {
+    const d = await findDesign(m, team, id);
+    if (follow) await m.query('INSERT INTO design_follower (design_id, user_id) VALUES ($1, $2) ON CONFLICT DO NOTHING', [d.id, userId]);
+    else await m.query('DELETE FROM design_follower WHERE design_id = $1 AND user_id = $2', [d.id, userId]);
+    return describe(m, d, userId);
+  });
+}

@@ -1,0 +1,49 @@
+import { parseCase } from '../engine';
+import { globalSearch, type SearchCheckpoint } from './global-search';
+
+/** The benchmark family (p-type, m* = 1, μ300 = 350 cm²/(V·s), κL300 = 1 W/(m·K)); invented leg geometry. */
+const caseJson = {
+  hotSide: 300, length: 1.5e-3, area: 1e-6,
+  material: { kind: 'band', carrier: 'p', effectiveMass: 1, mobility300: 350, mobilityExponent: -1.5, latticeKappa300: 1, latticeKappaExponent: -1 },
+  bounds: { minPerCm3: 1e18, maxPerCm3: 1e20 }, controlPoints: 6,
+};
+
+describe('globalSearch', () => {
+  it('never does worse than a single start and never worse than the best uniform leg', () => {
+    const c = parseCase(caseJson, 'optimize');
+    const one = globalSearch(c, { starts: 1, seed: 'a' });
+    const many = globalSearch(c, { starts: 4, seed: 'a' });
+    expect(many.result.objective.value).toBeGreaterThanOrEqual(one.result.objective.value - 1e-9);
+    const uniform = many.result.baselines && 'perCm3' in many.result.baselines.uniform ? many.result.baselines.uniform.deltaT : NaN;
+    expect(many.result.deltaT).toBeGreaterThanOrEqual(uniform);
+    expect(many.startsDone).toBe(4);
+  });
+
+  it('resumes from a checkpoint to the same answer as an uninterrupted search', () => {
+    const c = parseCase(caseJson, 'optimize');
+    const checkpoints: SearchCheckpoint[] = [];
+    const full = globalSearch(c, { starts: 3, seed: 'run-42', onCheckpoint: (cp) => checkpoints.push(JSON.parse(JSON.stringify(cp))) });
+    expect(checkpoints.map((cp) => cp.nextStart)).toEqual([1, 2, 3]);
+    const resumed = globalSearch(c, { starts: 3, seed: 'run-42', resume: checkpoints[1] });
+    expect(resumed.result.objective.value).toBeCloseTo(full.result.objective.value, 9);
+    expect(resumed.bestStart).toBe(full.bestStart);
+  });
+
+  it('stops when asked and keeps the best so far', () => {
+    const c = parseCase(caseJson, 'optimize');
+    let calls = 0;
+    const r = globalSearch(c, { starts: 5, seed: 'x', shouldStop: () => { calls += 1; return calls > 40; } });
+    expect(r.stopped).toBe(true);
+    expect(r.startsDone).toBeLessThan(5);
+    expect(Number.isFinite(r.result.deltaT)).toBe(true);
+  });
+
+  it('reports a progress estimate that rises to the end', () => {
+    const c = parseCase(caseJson, 'optimize');
+    const seen: number[] = [];
+    globalSearch(c, { starts: 2, seed: 'p', onProgress: (p) => seen.push(p.fractionDone) });
+    expect(seen.length).toBeGreaterThan(3);
+    expect(Math.max(...seen)).toBeLessThanOrEqual(1);
+    expect(seen[seen.length - 1]!).toBeGreaterThan(0.5);
+  });
+});

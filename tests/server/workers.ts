@@ -1,0 +1,39 @@
+import { spawn, type ChildProcess } from 'node:child_process';
+import { join } from 'node:path';
+
+const root = join(__dirname, '..', '..');
+
+export type SpawnedWorker = { child: ChildProcess; pid: number; output: string[] };
+
+/** Starts a real worker process on a private queue, so a test controls which workers see its runs. */
+export function spawnWorker(queue: string, staleSeconds = 3): Promise<SpawnedWorker> {
+  // node itself with tsx's loader, so the child's pid is the worker's (it appears in worker_id).
+  const child = spawn(process.execPath, ['--require', 'tsx/cjs', 'worker/main.ts'], {
+    cwd: root,
+    env: { ...process.env, FROSTGRADE_PROFILE: 'test', NODE_ENV: 'test', RUN_QUEUE: queue, RUN_STALE_SECONDS: String(staleSeconds) },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
+  const output: string[] = [];
+  return new Promise((resolve, reject) => {
+    const timer = setTimeout(() => reject(new Error(`worker did not start: ${output.join('')}`)), 30000);
+    const onData = (b: Buffer): void => {
+      output.push(b.toString());
+      if (b.toString().includes('ready')) {
+        clearTimeout(timer);
+        resolve({ child, pid: child.pid!, output });
+      }
+    };
+    child.stdout.on('data', onData);
+    child.stderr.on('data', (b: Buffer) => output.push(b.toString()));
+    child.once('exit', (code) => reject(new Error(`worker exited with ${code}: ${output.join('')}`)));
+  });
+}
+
+export async function stopWorker(w: SpawnedWorker): Promise<void> {
+  if (w.child.exitCode !== null || w.child.signalCode !== null) return;
+  await new Promise<void>((resolve) => {
+    w.child.once('exit', () => resolve());
+    w.child.kill('SIGTERM');
+    setTimeout(() => w.child.kill('SIGKILL'), 20000).unref();
+  });
+}

@@ -1,0 +1,36 @@
+/**
+ * Runs one optimisation in a worker thread. The engine is synchronous and
+ * CPU-bound; in its own thread it leaves the worker's event loop free for
+ * heartbeats, database writes and cancellation. The stop flag is shared
+ * memory: the main thread sets it and the engine sees it between iterations.
+ */
+import { parentPort, workerData } from 'node:worker_threads';
+import { CaseError, parseCase } from '../shared/engine';
+import { globalSearch, type SearchCheckpoint } from '../shared/runs/global-search';
+import type { ThreadInput, ThreadMessage } from './engine-protocol';
+
+const input = workerData as ThreadInput;
+const stop = new Int32Array(input.stopFlag);
+const post = (m: ThreadMessage): void => parentPort!.postMessage(m);
+
+let lastPost = 0;
+try {
+  const c = parseCase(input.case, 'optimize');
+  const out = globalSearch(c, {
+    starts: input.starts,
+    seed: input.seed,
+    resume: input.resume as SearchCheckpoint | null,
+    shouldStop: () => Atomics.load(stop, 0) === 1,
+    // The main thread throttles again; this only keeps the message queue short.
+    onProgress: (p) => {
+      const now = Date.now();
+      if (now - lastPost < 50) return;
+      lastPost = now;
+      post({ type: 'progress', progress: p });
+    },
+    onCheckpoint: (cp) => post({ type: 'checkpoint', checkpoint: cp }),
+  });
+  post({ type: 'done', result: out.result, stopped: out.stopped, startsDone: out.startsDone, bestStart: out.bestStart });
+} catch (err) {
+  post({ type: 'error', message: err instanceof Error ? err.message : String(err), field: err instanceof CaseError ? err.field : undefined });
+}
