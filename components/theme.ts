@@ -38,6 +38,8 @@ export const colors = {
   background: palette.frost100,
   surface: palette.frost50,
   surfaceSunken: palette.frost200,
+  /** Inside text inputs: a touch brighter than cards. */
+  field: palette.white,
   border: palette.frost300,
   text: palette.slate900,
   textMuted: palette.slate600,
@@ -61,6 +63,18 @@ export const colors = {
   chromeTextActive: palette.white,
   chromeBorder: palette.night800,
 } as const;
+
+/**
+ * How chart series are told apart: colour, line style and marker together,
+ * so a legend still reads in grey scale. Ordered cold to hot: series are
+ * assigned in ascending temperature.
+ */
+export const chartMarks = [
+  { color: palette.glacier600, dash: 'solid', marker: 'circle' },
+  { color: palette.slate600, dash: 'dashed', marker: 'square' },
+  { color: palette.ember600, dash: 'dotted', marker: 'star' },
+  { color: palette.pine600, dash: 'dashdot', marker: 'circle' },
+] as const;
 
 /** End points of the cold-to-hot gradient used by the graded-strip motif. */
 export const gradeStops = { cold: palette.ice300, hot: palette.ember500 } as const;

@@ -4,8 +4,14 @@ import { colors, radii, spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';
 import { defaultPlotHeight, type LinePlotProps } from './line-plot-types';
 
+export type ChartFrameProps = Pick<LinePlotProps, 'xLabel' | 'yLabel' | 'description'> & {
+  children: ReactNode;
+  /** Under the x caption, e.g. a legend. */
+  footer?: ReactNode;
+};
+
 /** Axis captions around the canvas, in the app's own type, plus a11y text. */
-export function ChartFrame({ xLabel, yLabel, description, children }: LinePlotProps & { children: ReactNode }) {
+export function ChartFrame({ xLabel, yLabel, description, children, footer }: ChartFrameProps) {
   return (
     <View style={styles.frame} role="img" aria-label={description} testID="line-plot">
       <AppText variant="caption" tone="muted">
@@ -15,6 +21,7 @@ export function ChartFrame({ xLabel, yLabel, description, children }: LinePlotPr
       <AppText variant="caption" tone="muted" style={styles.xLabel}>
         {xLabel}
       </AppText>
+      {footer}
     </View>
   );
 }
