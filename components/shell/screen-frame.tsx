@@ -3,6 +3,7 @@ import { RefreshControl, ScrollView, StyleSheet, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 import { colors, layout, spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';
+import { BackLink, type BackTarget } from './back-link';
 import { BrandMark } from './brand-mark';
 import { useIsWide } from './use-is-wide';
 
@@ -11,6 +12,8 @@ export type ScreenFrameProps = {
   subtitle?: string;
   /** Shown at the right of the title, e.g. a refresh button. */
   accessory?: ReactNode;
+  /** A link up to the parent page, above the title. */
+  back?: BackTarget;
   refreshing?: boolean;
   onRefresh?: () => void;
   children: ReactNode;
@@ -21,7 +24,7 @@ export type ScreenFrameProps = {
  * with the title; on a wide screen the rail carries the brand instead.
  */
 export function ScreenFrame(props: ScreenFrameProps) {
-  const { title, subtitle, accessory, refreshing = false, onRefresh, children } = props;
+  const { title, subtitle, accessory, back, refreshing = false, onRefresh, children } = props;
   const wide = useIsWide();
   const insets = useSafeAreaInsets();
   return (
@@ -39,6 +42,7 @@ export function ScreenFrame(props: ScreenFrameProps) {
         }
       >
         <View style={styles.column}>
+          {back ? <BackLink {...back} /> : null}
           <View style={styles.header}>
             <View style={styles.headings}>
               <AppText variant="title" role="heading" aria-level={1}>

@@ -15,7 +15,7 @@ export type TabSpec = {
  * line here plus its one-line route file in `app/(tabs)/`.
  */
 export const tabs: readonly TabSpec[] = [
-  { name: 'index', href: '/', label: 'Materials', icon: 'materials' },
+  { name: '(materials)', href: '/', label: 'Materials', icon: 'materials' },
   { name: 'outbox', href: '/outbox', label: 'Outbox', icon: 'outbox' },
   { name: 'system', href: '/system', label: 'System', icon: 'system' },
 ];

@@ -1,6 +1,16 @@
 import { StyleSheet, View } from 'react-native';
 
-export type GlyphName = 'check' | 'cross' | 'plus' | 'minus' | 'ring' | 'chevron-down' | 'chevron-right';
+export type GlyphName =
+  | 'check'
+  | 'cross'
+  | 'plus'
+  | 'minus'
+  | 'ring'
+  | 'bang'
+  | 'lock'
+  | 'chevron-down'
+  | 'chevron-right'
+  | 'chevron-left';
 
 export type GlyphProps = {
   name: GlyphName;
@@ -48,6 +58,22 @@ function renderGlyph(name: GlyphName, color: string) {
       return <View style={[styles.bar, { backgroundColor: color }]} />;
     case 'ring':
       return <View style={[styles.ring, { borderColor: color }]} />;
+    case 'bang':
+      return (
+        <>
+          <View style={[styles.bangStem, { backgroundColor: color }]} />
+          <View style={[styles.bangDot, { backgroundColor: color }]} />
+        </>
+      );
+    case 'lock':
+      return (
+        <>
+          <View style={[styles.shackle, { borderColor: color }]} />
+          <View style={[styles.lockBody, { backgroundColor: color }]} />
+        </>
+      );
+    case 'chevron-left':
+      return <View style={[styles.chevron, styles.pointLeft, { borderColor: color }]} />;
     case 'chevron-down':
       return <View style={[styles.chevron, styles.pointDown, { borderColor: color }]} />;
     case 'chevron-right':
@@ -75,4 +101,18 @@ const styles = StyleSheet.create({
   chevron: { width: 7, height: 7, borderRightWidth: stroke, borderBottomWidth: stroke },
   pointDown: { marginTop: -3, transform: [{ rotate: '45deg' }] },
   pointRight: { marginLeft: -3, transform: [{ rotate: '-45deg' }] },
+  pointLeft: { marginLeft: 3, transform: [{ rotate: '135deg' }] },
+  bangStem: { position: 'absolute', top: 2, width: stroke, height: 8, borderRadius: 1 },
+  bangDot: { position: 'absolute', bottom: 2, width: stroke + 0.5, height: stroke + 0.5, borderRadius: 2 },
+  shackle: {
+    position: 'absolute',
+    top: 1,
+    width: 8,
+    height: 9,
+    borderWidth: stroke,
+    borderBottomWidth: 0,
+    borderTopLeftRadius: 4,
+    borderTopRightRadius: 4,
+  },
+  lockBody: { position: 'absolute', bottom: 1, width: 12, height: 8, borderRadius: 1.5 },
 });

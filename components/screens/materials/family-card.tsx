@@ -1,29 +1,57 @@
-import { StyleSheet, View } from 'react-native';
+import { Pressable, type PressableStateCallbackType, StyleSheet, View } from 'react-native';
+import { Link } from 'expo-router';
 import type { FamilySummary } from '@/shared/api/families';
 import { formatDay } from '@/components/format/date';
 import { colors, radii, spacing } from '@/components/theme';
 import { Badge } from '@/components/ui/badge';
+import { Glyph } from '@/components/ui/glyph';
 import { AppText } from '@/components/ui/text';
 import { CarrierTag } from './carrier-tag';
 import { kindLabels } from './family-labels';
 
-/** One material family: what it is, which carrier, and where it came from. */
+/** react-native-web also reports hover, which React Native's types omit. */
+type WebPressState = PressableStateCallbackType & { hovered?: boolean };
+
+/** One material family: what it is, which carrier, where it came from; opens its page. */
 export function FamilyCard({ family }: { family: FamilySummary }) {
   return (
-    <View style={styles.card} testID={`family-card-${family.id}`} role="article" aria-label={family.name}>
+    <Link href={`/materials/${family.id}`} asChild>
+      {/* Link merges its own style into the child's, so the child's style is static and the
+          hover outline lives on an inner view. */}
+      <Pressable testID={`family-card-${family.id}`} aria-label={family.name} style={styles.pressable}>
+        {({ pressed, hovered }: WebPressState) => <CardBody family={family} highlighted={pressed || hovered === true} />}
+      </Pressable>
+    </Link>
+  );
+}
+
+function CardBody({ family, highlighted }: { family: FamilySummary; highlighted: boolean }) {
+  return (
+    <View style={[styles.card, highlighted && styles.hovered]}>
       <View style={styles.tags}>
         <Badge label={kindLabels[family.kind]} tone="cold" />
+        <Badge label={`v${family.version}`} />
+        {family.archived ? <Badge label="Archived" /> : null}
         {family.isDemo ? <Badge label="Demo data" tone="heat" /> : null}
       </View>
-      <AppText variant="heading">{family.name}</AppText>
+      <View style={styles.titleRow}>
+        <AppText variant="heading" style={styles.title}>
+          {family.name}
+        </AppText>
+        <Glyph name="chevron-right" color={colors.textFaint} />
+      </View>
       <CarrierTag carrier={family.carrier} />
-      {family.summary ? <AppText tone="muted">{family.summary}</AppText> : null}
+      {family.summary ? (
+        <AppText tone="muted" numberOfLines={3}>
+          {family.summary}
+        </AppText>
+      ) : null}
       <View style={styles.provenance}>
         <ProvenanceLine term="Source" value={family.source} />
-        <ProvenanceLine
-          term="Added"
-          value={`${formatDay(family.createdAt)} by ${family.createdBy}`}
-        />
+        <ProvenanceLine term="Added" value={`${formatDay(family.createdAt)} by ${family.createdBy}`} />
+        {family.version > 1 ? (
+          <ProvenanceLine term="Changed" value={`${formatDay(family.updatedAt)} · version ${family.version}`} />
+        ) : null}
       </View>
     </View>
   );
@@ -43,6 +71,7 @@ function ProvenanceLine({ term, value }: { term: string; value: string }) {
 }
 
 const styles = StyleSheet.create({
+  pressable: { flex: 1 },
   card: {
     flex: 1,
     backgroundColor: colors.surface,
@@ -52,7 +81,10 @@ const styles = StyleSheet.create({
     padding: spacing.lg,
     gap: spacing.sm,
   },
+  hovered: { borderColor: colors.primary },
   tags: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm, marginBottom: spacing.xs },
+  titleRow: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm },
+  title: { flex: 1 },
   provenance: {
     marginTop: 'auto',
     paddingTop: spacing.sm,
@@ -61,6 +93,6 @@ const styles = StyleSheet.create({
     gap: spacing.xs,
   },
   line: { flexDirection: 'row', gap: spacing.sm, alignItems: 'baseline' },
-  term: { width: 56 },
+  term: { width: 64 },
   value: { flex: 1 },
 });

@@ -1,0 +1,1 @@
+export { MaterialsStack as default } from '@/components/shell/materials-stack';

@@ -1,0 +1,1 @@
+export { EditFamilyScreen as default } from '@/components/screens/materials/form/edit-family-screen';

@@ -1,0 +1,1 @@
+export { FamilyDetailScreen as default } from '@/components/screens/materials/detail/family-detail-screen';

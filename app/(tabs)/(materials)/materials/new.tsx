@@ -1,0 +1,1 @@
+export { NewFamilyScreen as default } from '@/components/screens/materials/form/new-family-screen';

@@ -1,0 +1,1 @@
+export { UploadFamilyScreen as default } from '@/components/screens/materials/upload/upload-family-screen';

@@ -1,0 +1,109 @@
+import type { z } from 'zod';
+import { createFamilyRequestSchema, type FamilyVersion } from '@/shared/api/families';
+import type { FieldError } from '@/shared/api/errors';
+import type { MaterialInput } from '@/shared/engine';
+import { bandParameters, type BandNumberKey } from '../band-parameters';
+
+/** What the form holds: text as typed, so a half-typed "1e" is not lost. */
+export type FamilyFormValues = {
+  name: string;
+  summary: string;
+  source: string;
+  carrier: 'p' | 'n';
+  numbers: Record<BandNumberKey, string>;
+};
+
+/** Field path (as the API names it, e.g. `definition.effectiveMass`) → message. */
+export type FieldErrors = Partial<Record<string, string>>;
+
+export type ValidRequest = z.output<typeof createFamilyRequestSchema>;
+export type Validation = { ok: true; request: ValidRequest } | { ok: false; errors: FieldErrors };
+
+export function emptyBandValues(): FamilyFormValues {
+  return {
+    name: '',
+    summary: '',
+    source: '',
+    carrier: 'p',
+    numbers: {
+      effectiveMass: '',
+      mobility300: '',
+      mobilityExponent: '-1.5',
+      latticeKappa300: '',
+      latticeKappaExponent: '-1',
+    },
+  };
+}
+
+/** The form filled from a stored version (band numbers only for band models). */
+export function valuesFromVersion(name: string, version: Pick<FamilyVersion, 'definition' | 'summary' | 'source'>): FamilyFormValues {
+  const values = { ...emptyBandValues(), name, summary: version.summary, source: version.source };
+  const definition = version.definition;
+  if (definition.kind !== 'band') return values;
+  const numbers = { ...values.numbers };
+  for (const p of bandParameters) numbers[p.key] = String(definition[p.key]);
+  return { ...values, carrier: definition.carrier, numbers };
+}
+
+/** "" → missing (the schema says "is required"); anything else a number, NaN if it is not one. */
+function parseNumber(text: string): number | undefined {
+  const trimmed = text.trim().replace(/\u2212/g, '-');
+  if (trimmed === '') return undefined;
+  return Number(trimmed.replace(',', '.'));
+}
+
+function bandDefinition(values: FamilyFormValues): Record<string, unknown> {
+  const definition: Record<string, unknown> = { kind: 'band', carrier: values.carrier };
+  for (const p of bandParameters) definition[p.key] = parseNumber(values.numbers[p.key]);
+  return definition;
+}
+
+const labels: Record<string, string> = {
+  name: 'Name',
+  summary: 'Summary',
+  source: 'Source',
+  'definition.carrier': 'Carrier type',
+  ...Object.fromEntries(bandParameters.map((p) => [`definition.${p.key}`, p.label])),
+};
+
+/** The schema's messages start with the field's code name; people read its label instead. */
+export function humanize(field: string, message: string): string {
+  const key = field.split('.').pop() ?? field;
+  const label = labels[field];
+  if (!label || !message.startsWith(key)) return message;
+  return `${label}${message.slice(key.length)}`;
+}
+
+/**
+ * Checks the form with the same schema the server uses. `fixedDefinition`
+ * (measured or constant families) is sent unchanged: only the texts are edited.
+ */
+export function validate(values: FamilyFormValues, fixedDefinition?: MaterialInput): Validation {
+  const body = {
+    name: values.name,
+    summary: values.summary,
+    source: values.source,
+    definition: fixedDefinition ?? bandDefinition(values),
+  };
+  const parsed = createFamilyRequestSchema.safeParse(body);
+  if (parsed.success) return { ok: true, request: parsed.data };
+  const errors: FieldErrors = {};
+  for (const issue of parsed.error.issues) {
+    const field = issue.path.map(String).join('.');
+    errors[field] ??= humanize(field, issue.message);
+  }
+  return { ok: false, errors };
+}
+
+/** Fields the form shows; API errors on anything else are listed above the buttons. */
+export const formFields = new Set(Object.keys(labels));
+
+export function splitApiErrors(fieldErrors: FieldError[]): { byField: FieldErrors; other: string[] } {
+  const byField: FieldErrors = {};
+  const other: string[] = [];
+  for (const e of fieldErrors) {
+    if (formFields.has(e.field)) byField[e.field] ??= humanize(e.field, e.message);
+    else other.push(e.field ? `${e.field}: ${e.message}` : e.message);
+  }
+  return { byField, other };
+}

@@ -1,0 +1,97 @@
+import { useState, type ReactNode } from 'react';
+import { StyleSheet, View } from 'react-native';
+import type { MaterialInput } from '@/shared/engine';
+import { ApiError } from '@/components/api/client';
+import { spacing } from '@/components/theme';
+import { Button } from '@/components/ui/button';
+import { Section } from '@/components/ui/form-section';
+import { Notice } from '@/components/ui/notice';
+import { AppText } from '@/components/ui/text';
+import { BandFields } from './band-fields';
+import {
+  splitApiErrors,
+  validate,
+  type FamilyFormValues,
+  type FieldErrors,
+  type ValidRequest,
+} from './family-form-model';
+import { ProvenanceFields } from './provenance-fields';
+
+export type FamilyFormProps = {
+  initial: FamilyFormValues;
+  /** Measured and constant families: their definition is kept, only the texts change. */
+  fixedDefinition?: MaterialInput;
+  submitLabel: string;
+  /** Above the buttons, e.g. what saving does to versions. */
+  notice?: ReactNode;
+  pending: boolean;
+  /** The last failed save (field errors land beside their fields). */
+  error: Error | null;
+  onSubmit: (request: ValidRequest) => void;
+  onCancel: () => void;
+};
+
+function serverErrors(error: Error | null): { byField: FieldErrors; other: string[]; message?: string } {
+  if (!error) return { byField: {}, other: [] };
+  if (!(error instanceof ApiError)) return { byField: {}, other: [], message: error.message };
+  return { ...splitApiErrors(error.fieldErrors), message: error.message };
+}
+
+/** Create or edit a family: checked here with the server's schema, then sent. */
+export function FamilyForm(props: FamilyFormProps) {
+  const { initial, fixedDefinition, submitLabel, notice, pending, error, onSubmit, onCancel } = props;
+  const [values, setValues] = useState(initial);
+  const [tried, setTried] = useState(false);
+  // After a first attempt, errors follow the typing; the server's until the next save.
+  const local = tried ? validate(values, fixedDefinition) : null;
+  const fromServer = serverErrors(error);
+  const errors: FieldErrors = { ...fromServer.byField, ...(local && !local.ok ? local.errors : {}) };
+  const submit = () => {
+    setTried(true);
+    const result = validate(values, fixedDefinition);
+    if (result.ok) onSubmit(result.request);
+  };
+  const problemCount = Object.keys(errors).length;
+  return (
+    <View style={styles.form}>
+      {fixedDefinition ? null : (
+        <Section title="Band model" hint="Single parabolic band with acoustic-phonon scattering.">
+          <BandFields
+            values={values}
+            errors={errors}
+            onCarrier={(carrier) => setValues((v) => ({ ...v, carrier }))}
+            onNumber={(key, text) => setValues((v) => ({ ...v, numbers: { ...v.numbers, [key]: text } }))}
+          />
+        </Section>
+      )}
+      <Section title="Name and provenance">
+        <ProvenanceFields values={values} errors={errors} onChange={(field, text) => setValues((v) => ({ ...v, [field]: text }))} />
+      </Section>
+      {notice}
+      {fromServer.message ? (
+        <Notice tone="danger" title="Not saved" testID="form-server-error">
+          <AppText>{fromServer.message}</AppText>
+          {fromServer.other.map((line) => (
+            <AppText key={line} variant="mono">
+              {line}
+            </AppText>
+          ))}
+        </Notice>
+      ) : null}
+      {problemCount > 0 && !fromServer.message ? (
+        <AppText tone="danger" role="alert">
+          {`${problemCount} ${problemCount === 1 ? 'field needs' : 'fields need'} attention before saving.`}
+        </AppText>
+      ) : null}
+      <View style={styles.buttons}>
+        <Button label={pending ? 'Saving…' : submitLabel} onPress={submit} disabled={pending} />
+        <Button label="Cancel" variant="quiet" onPress={onCancel} disabled={pending} />
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: spacing.lg, maxWidth: 720, width: '100%' },
+  buttons: { flexDirection: 'row', gap: spacing.md, flexWrap: 'wrap' },
+});

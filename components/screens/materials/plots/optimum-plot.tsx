@@ -1,0 +1,53 @@
+import { useMemo } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { propertiesAt, type MaterialFamily } from '@/shared/engine';
+import { optimumVsTemperature } from '@/components/charts/family-curves';
+import { SeriesPlot } from '@/components/charts/series-plot';
+import { formatNumber, formatScientific, powerOfTen, withUnit } from '@/components/format/number';
+import { chartMarks, spacing } from '@/components/theme';
+import { AppText } from '@/components/ui/text';
+import { PlotCard } from './plot-card';
+
+export type OptimumPlotProps = {
+  family: MaterialFamily;
+  temperatures: { low: number; high: number };
+  range: { min: number; max: number };
+};
+
+/** The doping that maximises zT at each temperature, and the figures at the ends. */
+export function OptimumPlot({ family, temperatures, range }: OptimumPlotProps) {
+  const curve = useMemo(() => optimumVsTemperature(family, temperatures, range), [family, temperatures, range]);
+  // Plot in units of one decade so the axis reads "1.2", "1.4" (× 10¹⁹ cm⁻³).
+  const exponent = Math.floor(Math.log10(curve[Math.floor(curve.length / 2)].y));
+  const scale = Math.pow(10, exponent);
+  const series = [
+    {
+      key: 'optimum',
+      label: 'zT-optimal doping',
+      mark: chartMarks[0],
+      line: curve.map((p) => ({ x: p.x, y: p.y / scale })),
+    },
+  ];
+  const ends = [curve[0], curve[curve.length - 1]];
+  return (
+    <PlotCard title="zT-optimal doping" testID="plot-optimum">
+      <SeriesPlot
+        series={series}
+        xLabel="Temperature T (K)"
+        yLabel={`Optimal n (units of ${powerOfTen(exponent)} cm⁻³)`}
+        description={`Doping that maximises zT, from ${temperatures.low} K to ${temperatures.high} K`}
+      />
+      <View style={styles.ends}>
+        {ends.map((p) => (
+          <AppText key={p.x} variant="caption" tone="muted">
+            {`At ${formatNumber(p.x)} K: best zT ${formatNumber(propertiesAt(family, p.y, p.x).zT, 2)} at n = ${withUnit(formatScientific(p.y, 2), 'cm⁻³')}`}
+          </AppText>
+        ))}
+      </View>
+    </PlotCard>
+  );
+}
+
+const styles = StyleSheet.create({
+  ends: { gap: spacing.xxs },
+});

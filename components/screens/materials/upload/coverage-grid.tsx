@@ -1,0 +1,88 @@
+import { ScrollView, StyleSheet, View } from 'react-native';
+import type { UploadPreview } from '@/shared/api/family-upload';
+import { formatNumber, formatScientific } from '@/components/format/number';
+import { colors, radii, spacing } from '@/components/theme';
+import { Glyph } from '@/components/ui/glyph';
+import { AppText } from '@/components/ui/text';
+
+const rowHeaderWidth = 112;
+const cellWidth = 52;
+
+type Coverage = UploadPreview['coverage'];
+
+export function missingCount(coverage: Coverage): number {
+  return coverage.present.reduce((sum, row) => sum + row.filter((p) => !p).length, 0);
+}
+
+/** Doping (rows) × temperature (columns): a tick where measured, a cross where missing, in words for screen readers. */
+export function CoverageGrid({ coverage }: { coverage: Coverage }) {
+  const { dopings, temperatures, present } = coverage;
+  if (dopings.length === 0 || temperatures.length === 0) {
+    return <AppText tone="muted">No complete row to place on the grid.</AppText>;
+  }
+  const missing = missingCount(coverage);
+  return (
+    <View style={styles.wrap} testID="coverage-grid">
+      <AppText tone={missing > 0 ? 'heat' : 'muted'}>
+        {`${dopings.length} dopings × ${temperatures.length} temperatures: ${dopings.length * temperatures.length - missing} measured, ${missing} missing.`}
+      </AppText>
+      <ScrollView horizontal contentContainerStyle={styles.scroll}>
+        <View role="table" aria-label="Grid coverage">
+          <View style={styles.row} role="row">
+            <AppText variant="monoStrong" tone="faint" style={styles.corner} role="columnheader">
+              {'n (cm⁻³) \\ T (K)'}
+            </AppText>
+            {temperatures.map((t) => (
+              <AppText key={t} variant="monoStrong" tone="muted" style={styles.colHeader} role="columnheader">
+                {formatNumber(t, 4)}
+              </AppText>
+            ))}
+          </View>
+          {dopings.map((n, i) => (
+            <View key={n} style={styles.row} role="row">
+              <AppText variant="mono" style={styles.rowHeader} role="rowheader">
+                {formatScientific(n, 3)}
+              </AppText>
+              {temperatures.map((t, j) => {
+                const ok = present[i]?.[j] === true;
+                return (
+                  <View
+                    key={t}
+                    style={[styles.cell, ok ? styles.present : styles.missing]}
+                    role="cell"
+                    aria-label={`${formatScientific(n, 3)} cm⁻³ at ${t} K: ${ok ? 'measured' : 'missing'}`}
+                  >
+                    <Glyph name={ok ? 'check' : 'cross'} color={ok ? colors.ok : colors.danger} />
+                  </View>
+                );
+              })}
+            </View>
+          ))}
+        </View>
+      </ScrollView>
+      <View style={styles.key}>
+        <Glyph name="check" color={colors.ok} />
+        <AppText variant="caption" tone="muted">
+          measured
+        </AppText>
+        <Glyph name="cross" color={colors.danger} />
+        <AppText variant="caption" tone="muted">
+          missing
+        </AppText>
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: spacing.sm },
+  scroll: { paddingBottom: spacing.xs },
+  row: { flexDirection: 'row', alignItems: 'center', gap: spacing.xxs, marginBottom: spacing.xxs },
+  corner: { width: rowHeaderWidth },
+  colHeader: { width: cellWidth, textAlign: 'center' },
+  rowHeader: { width: rowHeaderWidth },
+  cell: { width: cellWidth, height: 28, borderRadius: radii.sm, alignItems: 'center', justifyContent: 'center' },
+  present: { backgroundColor: colors.okSoft },
+  missing: { backgroundColor: colors.dangerSoft, borderWidth: 1, borderColor: colors.danger, borderStyle: 'dashed' },
+  key: { flexDirection: 'row', alignItems: 'center', gap: spacing.xs },
+});
