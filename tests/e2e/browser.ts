@@ -1,7 +1,7 @@
 import { mkdtempSync, mkdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { chromium, type BrowserContext, type Locator, type Page } from 'playwright-core';
 
 /** Where the app under test is served (API and web build at one origin). */
 export const baseUrl = (process.env.FROSTGRADE_E2E_URL ?? 'http://127.0.0.1:8341').replace(/\/+$/, '');
@@ -80,4 +80,46 @@ export async function waitForVisibleText(page: Page, text: string, timeout = 30_
     state: 'visible',
     timeout,
   });
+}
+
+/** Pixels of the plotted line's warm colour in an element, decoded by the browser. */
+export async function countWarmPixels(page: Page, element: Locator): Promise<number> {
+  const png = (await element.screenshot()).toString('base64');
+  return page.evaluate(async (data) => {
+    const image = new Image();
+    image.src = `data:image/png;base64,${data}`;
+    await image.decode();
+    const canvas = document.createElement('canvas');
+    canvas.width = image.width;
+    canvas.height = image.height;
+    const context = canvas.getContext('2d');
+    if (!context) throw new Error('no 2d context');
+    context.drawImage(image, 0, 0);
+    const { data: rgba } = context.getImageData(0, 0, image.width, image.height);
+    let warm = 0;
+    for (let i = 0; i < rgba.length; i += 4) {
+      const [r, g, b] = [rgba[i], rgba[i + 1], rgba[i + 2]];
+      if (r > 150 && r - b > 90 && g < 140) warm += 1;
+    }
+    return warm;
+  }, png);
+}
+
+/**
+ * Waits until a chart has drawn at least `minWarm` pixels of the warm series
+ * colour on its canvas (or its error boundary speaks), and returns the count.
+ */
+export async function waitForDrawnChart(page: Page, plot: Locator, minWarm: number, timeout = 60_000): Promise<number> {
+  await plot.locator('canvas, [role="alert"]').first().waitFor({ state: 'visible', timeout });
+  const failure = plot.getByRole('alert');
+  if ((await failure.count()) > 0) throw new Error(`chart failed to load: ${await failure.innerText()}`);
+  const canvas = plot.locator('canvas').first();
+  await canvas.scrollIntoViewIfNeeded();
+  let warm = 0;
+  const deadline = Date.now() + timeout;
+  while (warm < minWarm && Date.now() < deadline) {
+    warm = await countWarmPixels(page, canvas);
+    if (warm < minWarm) await page.waitForTimeout(250);
+  }
+  return warm;
 }
