@@ -123,11 +123,12 @@ function encode(body: SendBody): { headers: Record<string, string>; body?: BodyI
 }
 
 /**
- * POST/PUT JSON or a multipart form, and validate the answer. Error bodies
- * become an ApiError whose `fieldErrors` name the offending fields.
+ * POST/PUT JSON or a multipart form (or a DELETE that answers with a body),
+ * and validate the answer. Error bodies become an ApiError whose
+ * `fieldErrors` name the offending fields.
  */
 export async function apiSend<S extends z.ZodType>(
-  method: 'POST' | 'PUT',
+  method: 'POST' | 'PUT' | 'DELETE',
   path: string,
   body: SendBody,
   schema: S,
