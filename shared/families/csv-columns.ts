@@ -5,7 +5,7 @@
  * units we accept. Conversions go to the engine's units (cm⁻³, K, V/K, S/m,
  * W/(m·K)); resistivity becomes conductivity.
  */
-export type Quantity = 'perCm3' | 'temperature' | 'seebeck' | 'sigma' | 'resistivity' | 'kappa';
+export type Quantity = 'perCm3' | 'temperature' | 'seebeck' | 'sigma' | 'resistivity' | 'kappa' | 'position';
 
 type Unit = { unit: string; label: string; convert: (v: number) => number; describe: string };
 
@@ -33,6 +33,10 @@ const units: Record<Quantity, Unit[]> = {
     { unit: 'ohm_cm', label: 'Ω·cm', convert: (v) => 1 / (v * 1e-2), describe: 'σ = 1 / (ρ × 1e-2) (Ω·cm → S/m)' },
     { unit: 'ohm_m', label: 'Ω·m', convert: (v) => 1 / v, describe: 'σ = 1 / ρ (Ω·m → S/m)' },
   ],
+  position: [
+    { unit: 'mm', label: 'mm', convert: (v) => v, describe: '× 1' },
+    { unit: 'um', label: 'µm', convert: (v) => v * 1e-3, describe: '× 1e-3 (µm → mm)' },
+  ],
   kappa: [
     { unit: 'w_per_m_k', label: 'W/(m·K)', convert: (v) => v, describe: '× 1' },
     { unit: 'w_per_mk', label: 'W/(m·K)', convert: (v) => v, describe: '× 1' },
@@ -45,6 +49,7 @@ const names: Array<[string, Quantity]> = [
   ['electrical_conductivity', 'sigma'],
   ['thermal_conductivity', 'kappa'],
   ['temperature', 'temperature'],
+  ['position', 'position'],
   ['resistivity', 'resistivity'],
   ['conductivity', 'sigma'],
   ['seebeck', 'seebeck'],
@@ -53,6 +58,7 @@ const names: Array<[string, Quantity]> = [
   ['kappa', 'kappa'],
   ['rho', 'resistivity'],
   ['n', 'perCm3'],
+  ['x', 'position'],
 ];
 
 export type Column = { header: string; quantity: Quantity; unit: string; toEngine: string; convert: (v: number) => number };

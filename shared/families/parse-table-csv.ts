@@ -27,18 +27,21 @@ function detectDelimiter(headerLine: string): { delimiter: string } | { error: s
   return { error: 'the header has a single column; expected comma-separated columns such as n_per_cm3,temperature_K,seebeck_uV_per_K,sigma_S_per_cm,kappa_W_per_m_K' };
 }
 
-function readColumns(header: string[]): { columns: Array<Column & { index: number }>; errors: UploadIssue[]; warnings: UploadIssue[] } {
-  const columns: Array<Column & { index: number }> = [];
+type TableQuantity = Exclude<Quantity, 'position'>;
+type TableColumn = Column & { quantity: TableQuantity; index: number };
+
+function readColumns(header: string[]): { columns: TableColumn[]; errors: UploadIssue[]; warnings: UploadIssue[] } {
+  const columns: TableColumn[] = [];
   const errors: UploadIssue[] = [];
   const warnings: UploadIssue[] = [];
   header.forEach((h, index) => {
     const v = readHeader(h);
     if (v.kind === 'error') errors.push({ line: 1, column: h, message: v.message });
-    else if (v.kind === 'ignored') warnings.push({ line: 1, column: h, message: `column "${h}" is not a quantity Frostgrade reads; it is ignored` });
+    else if (v.kind === 'ignored' || v.column.quantity === 'position') warnings.push({ line: 1, column: h, message: `column "${h}" is not a quantity a material table holds; it is ignored` });
     else if (columns.some((c) => c.quantity === v.column.quantity)) errors.push({ line: 1, column: h, message: `a second column for the same quantity as "${columns.find((c) => c.quantity === v.column.quantity)!.header}"` });
-    else columns.push({ ...v.column, index });
+    else columns.push({ ...v.column, quantity: v.column.quantity, index });
   });
-  const has = (q: Quantity): boolean => columns.some((c) => c.quantity === q);
+  const has = (q: TableQuantity): boolean => columns.some((c) => c.quantity === q);
   const need: Array<[boolean, string]> = [
     [has('perCm3'), 'carrier concentration (e.g. n_per_cm3)'],
     [has('temperature'), 'temperature (e.g. temperature_K)'],
@@ -94,15 +97,15 @@ export function parseTableCsv(input: string): UploadPreview {
   return { ok: errors.length === 0, rowCount: body.length, columns: columns.map(strip), rows, carrier, coverage: grid.coverage, warnings, errors };
 }
 
-function strip(c: Column): { header: string; quantity: Quantity; unit: string; toEngine: string } {
+function strip(c: TableColumn): { header: string; quantity: TableQuantity; unit: string; toEngine: string } {
   return { header: c.header, quantity: c.quantity, unit: c.unit, toEngine: c.toEngine };
 }
 
-const engineField: Record<Quantity, keyof Omit<UploadRow, 'line'>> = {
+const engineField: Record<TableQuantity, keyof Omit<UploadRow, 'line'>> = {
   perCm3: 'perCm3', temperature: 'temperature', seebeck: 'seebeck', sigma: 'sigma', resistivity: 'sigma', kappa: 'kappa',
 };
 
-function readRow(record: string[], line: number, columns: Array<Column & { index: number }>, delimiter: string, errors: UploadIssue[]): UploadRow | null {
+function readRow(record: string[], line: number, columns: TableColumn[], delimiter: string, errors: UploadIssue[]): UploadRow | null {
   const row: UploadRow = { line, perCm3: 0, temperature: 0, seebeck: 0, sigma: 0, kappa: 0 };
   let good = true;
   for (const c of columns) {

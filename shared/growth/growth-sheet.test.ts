@@ -1,0 +1,74 @@
+import { familyFromMaterial, optimizeLeg, parseCase, propertiesAt } from '../engine';
+import { buildGrowthSheet } from './growth-sheet';
+import { reportMeasurements } from './measurement-report';
+import { parseMeasurementsCsv } from './parse-measurements';
+
+/** The demo p-type band family (typical values, from memory) on an invented 1.5 mm leg; grower's minimum zone 0.2 mm. */
+const material = { kind: 'band', carrier: 'p', effectiveMass: 1, mobility300: 350, mobilityExponent: -1.5, latticeKappa300: 1, latticeKappaExponent: -1 } as const;
+const caseJson = { hotSide: 300, length: 1.5e-3, area: 1e-6, material, bounds: { minPerCm3: 1e18, maxPerCm3: 1e20 }, controlPoints: 8 };
+const run = optimizeLeg(parseCase(caseJson, 'optimize'));
+const sheet = buildGrowthSheet(caseJson, { ...run.doping!, value: run.objective.value, deltaT: run.deltaT }, { lengthMm: 1.5, minZoneMm: 0.2, maxZones: 4, lossBudget: 1, measureTemperature: 300 });
+
+describe('growth sheet', () => {
+  it('lists K = 1…4 with ΔT rising towards the continuous profile, zones in mm from the cold end', () => {
+    expect(sheet.steps.map((s) => s.zones)).toEqual([1, 2, 3, 4]);
+    sheet.steps.forEach((s, i) => {
+      if (i > 0) expect(s.deltaT).toBeGreaterThanOrEqual(sheet.steps[i - 1]!.deltaT - 1e-9);
+      expect(s.deltaT).toBeLessThanOrEqual(sheet.continuous.deltaT + 1e-6);
+      expect(s.rows[0]!.startMm).toBe(0);
+      expect(s.rows[s.rows.length - 1]!.endMm).toBeCloseTo(1.5, 9);
+      for (const r of s.rows) expect(r.endMm - r.startMm).toBeGreaterThanOrEqual(0.2 - 1e-9);
+    });
+  });
+
+  it('gives the room-temperature readings the family predicts at the target and across the band', () => {
+    const family = familyFromMaterial(material);
+    for (const r of sheet.steps[2]!.rows) {
+      const at = propertiesAt(family, r.perCm3, 300);
+      expect(r.seebeckUvK).toBeCloseTo(at.seebeck * 1e6, 6);
+      expect(r.sigmaSCm).toBeCloseTo(at.sigma / 100, 6);
+      expect(r.seebeckBandUvK[0]).toBeLessThanOrEqual(r.seebeckUvK);
+      expect(r.seebeckBandUvK[1]).toBeGreaterThanOrEqual(r.seebeckUvK);
+      expect(r.sigmaBandSCm[0]).toBeLessThanOrEqual(r.sigmaSCm);
+    }
+  });
+});
+
+describe('as-grown measurements against the sheet', () => {
+  const family = familyFromMaterial(material);
+  const step = sheet.steps[2]!;
+  /** Room-temperature S and σ every 0.05 mm of a piece grown with the given zone dopings. */
+  function csvFor(dopings: number[]): string {
+    const lines = ['position_mm,seebeck_uV_per_K,sigma_S_per_cm'];
+    for (let mm = 0.025; mm < 1.5; mm += 0.05) {
+      const k = step.rows.findIndex((r) => mm >= r.startMm && mm < r.endMm);
+      const at = propertiesAt(family, dopings[k]!, 300);
+      lines.push(`${mm.toFixed(3)},${(at.seebeck * 1e6).toFixed(3)},${(at.sigma / 100).toFixed(4)}`);
+    }
+    return lines.join('\n');
+  }
+
+  it('a piece grown to target is inferred back, judged within tolerance, and predicted close to the target', () => {
+    const parsed = parseMeasurementsCsv(csvFor(step.rows.map((r) => r.perCm3)), 1.5);
+    expect(parsed.ok).toBe(true);
+    const report = reportMeasurements(caseJson, sheet, 3, parsed.points, 300);
+    expect(report.verdicts.map((v) => v.verdict)).toEqual(['within', 'within', 'within']);
+    expect(report.points.every((q) => !q.disagree)).toBe(true);
+    // Interpolating between points 0.05 mm apart smooths each step a little: within 0.5 K of the zoned target.
+    expect(Math.abs(report.asGrown.atDesignCurrent.deltaT - step.deltaT)).toBeLessThan(0.5);
+  });
+
+  it('flags a zone grown outside its band, and the predicted ΔT drops', () => {
+    const off = step.rows.map((r, k) => (k === 0 ? r.highPerCm3 * 2 : r.perCm3));
+    const report = reportMeasurements(caseJson, sheet, 3, parseMeasurementsCsv(csvFor(off), 1.5).points, 300);
+    expect(report.verdicts[0]!.verdict).toBe('high');
+    expect(report.asGrown.atDesignCurrent.deltaT).toBeLessThan(step.deltaT - 0.5);
+  });
+
+  it('names bad measurement files by line and column', () => {
+    expect(parseMeasurementsCsv('seebeck_uV_per_K\n200', 1.5).errors[0]!.message).toMatch(/position_mm/);
+    expect(parseMeasurementsCsv('position_mm,seebeck_uV_per_K\n0.5,abc', 1.5).errors[0]).toMatchObject({ line: 2, column: 'seebeck_uV_per_K' });
+    expect(parseMeasurementsCsv('position_mm,seebeck_uV_per_K\n2.5,200', 1.5).errors[0]!.message).toMatch(/outside the leg/);
+    expect(parseMeasurementsCsv('position_mm,seebeck\n0.5,200', 1.5).errors[0]!.message).toMatch(/no unit/);
+  });
+});
