@@ -1,9 +1,11 @@
 import type { chartMarks } from '@/components/theme';
 import type { PlotPoint } from './line-plot-types';
 
-export type SeriesMark = (typeof chartMarks)[number];
-export type LineDash = SeriesMark['dash'];
-export type MarkerShape = SeriesMark['marker'];
+type ThemeMark = (typeof chartMarks)[number];
+export type LineDash = ThemeMark['dash'];
+export type MarkerShape = ThemeMark['marker'];
+/** How one series is drawn; `theme.chartMarks` holds the app's set. */
+export type SeriesMark = { color: string; dash: LineDash; marker: MarkerShape };
 export type AxisScale = 'linear' | 'log';
 
 /** One curve: a line (model or interpolation) and optionally the measured points behind it. */

@@ -123,3 +123,26 @@ export async function waitForDrawnChart(page: Page, plot: Locator, minWarm: numb
   }
   return warm;
 }
+
+/** Password of every demo account (README, "Demo accounts"). */
+export const demoPassword = 'graded-legs-demo';
+
+/**
+ * Signs the whole browser session in as a demo member through the API, so
+ * every page of the session (and `session.context.request`) carries the
+ * session cookie. Writes must carry the app's Origin.
+ */
+export async function signInAs(session: BrowserSession, email: string, password = demoPassword): Promise<void> {
+  const response = await session.context.request.post(`${baseUrl}/api/auth/sign-in`, {
+    data: { email, password },
+    headers: { Origin: baseUrl },
+  });
+  if (!response.ok()) throw new Error(`sign-in as ${email} answered ${response.status()}: ${await response.text()}`);
+}
+
+/** GET a JSON endpoint with the session's cookies. */
+export async function getJsonAs(session: BrowserSession, path: string): Promise<unknown> {
+  const response = await session.context.request.get(`${baseUrl}${path}`, { headers: { Accept: 'application/json' } });
+  if (!response.ok()) throw new Error(`GET ${path} answered ${response.status()}`);
+  return response.json();
+}

@@ -1,4 +1,4 @@
-import { baseUrl, countWarmPixels, openBrowser, saveScreenshot, type BrowserSession } from './browser';
+import { baseUrl, countWarmPixels, openBrowser, saveScreenshot, signInAs, type BrowserSession } from './browser';
 
 jest.setTimeout(120_000);
 
@@ -7,6 +7,7 @@ describe('charts on the web', () => {
 
   beforeAll(async () => {
     session = await openBrowser();
+    await signInAs(session, 'vic@northlight.example');
   });
 
   afterAll(async () => {

@@ -2,9 +2,10 @@ import type { Page } from 'playwright-core';
 import { familiesResponseSchema } from '../../shared/api/families';
 import {
   baseUrl,
-  getJson,
+  getJsonAs,
   openBrowser,
   saveScreenshot,
+  signInAs,
   waitForDrawnChart,
   waitForVisibleText,
   type BrowserSession,
@@ -64,6 +65,8 @@ describe('uploading a measured family in a real browser', () => {
 
   beforeAll(async () => {
     session = await openBrowser();
+    // A physicist may create families (README, "Demo accounts").
+    await signInAs(session, 'piet@northlight.example');
   });
 
   afterAll(async () => {
@@ -101,7 +104,7 @@ describe('uploading a measured family in a real browser', () => {
     await waitForVisibleText(page, familyName);
     await saveScreenshot(page, 'materials-after-upload-desktop');
 
-    const listed = familiesResponseSchema.parse(await getJson('/api/families'));
+    const listed = familiesResponseSchema.parse(await getJsonAs(session, '/api/families'));
     const saved = listed.families.find((f) => f.name === familyName);
     expect(saved).toMatchObject({ kind: 'table', carrier: 'p', version: 1, archived: false });
     await page.close();
@@ -128,7 +131,7 @@ describe('uploading a measured family in a real browser', () => {
   });
 
   it('shows the saved family at phone width', async () => {
-    const listed = familiesResponseSchema.parse(await getJson('/api/families'));
+    const listed = familiesResponseSchema.parse(await getJsonAs(session, '/api/families'));
     const saved = listed.families.find((f) => f.name === familyName);
     expect(saved).toBeDefined();
     const page = await session.newPage('phone');

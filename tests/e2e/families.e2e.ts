@@ -2,9 +2,10 @@ import type { Page } from 'playwright-core';
 import { familiesResponseSchema } from '../../shared/api/families';
 import {
   baseUrl,
-  getJson,
+  getJsonAs,
   openBrowser,
   saveScreenshot,
+  signInAs,
   viewports,
   waitForVisibleText,
   type BrowserSession,
@@ -26,9 +27,11 @@ describe('materials home in a real browser', () => {
   let familyNames: string[];
 
   beforeAll(async () => {
-    const families = familiesResponseSchema.parse(await getJson('/api/families'));
-    familyNames = families.families.map((family) => family.name);
     session = await openBrowser();
+    // An admin sees every tab, the Outbox included (README, "Demo accounts").
+    await signInAs(session, 'ada@northlight.example');
+    const families = familiesResponseSchema.parse(await getJsonAs(session, '/api/families'));
+    familyNames = families.families.map((family) => family.name);
   });
 
   afterAll(async () => {
