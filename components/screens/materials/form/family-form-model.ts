@@ -66,6 +66,11 @@ const labels: Record<string, string> = {
   ...Object.fromEntries(bandParameters.map((p) => [`definition.${p.key}`, p.label])),
 };
 
+/** The label a field has on screen ("Effective mass"), or its path when it has none. */
+export function fieldLabel(field: string): string {
+  return labels[field] ?? field;
+}
+
 /** The schema's messages start with the field's code name; people read its label instead. */
 export function humanize(field: string, message: string): string {
   const key = field.split('.').pop() ?? field;

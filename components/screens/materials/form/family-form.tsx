@@ -9,6 +9,7 @@ import { Notice } from '@/components/ui/notice';
 import { AppText } from '@/components/ui/text';
 import { BandFields } from './band-fields';
 import {
+  fieldLabel,
   splitApiErrors,
   validate,
   type FamilyFormValues,
@@ -51,7 +52,7 @@ export function FamilyForm(props: FamilyFormProps) {
     const result = validate(values, fixedDefinition);
     if (result.ok) onSubmit(result.request);
   };
-  const problemCount = Object.keys(errors).length;
+  const problems = Object.keys(errors).map(fieldLabel);
   return (
     <View style={styles.form}>
       {fixedDefinition ? null : (
@@ -78,9 +79,9 @@ export function FamilyForm(props: FamilyFormProps) {
           ))}
         </Notice>
       ) : null}
-      {problemCount > 0 && !fromServer.message ? (
-        <AppText tone="danger" role="alert">
-          {`${problemCount} ${problemCount === 1 ? 'field needs' : 'fields need'} attention before saving.`}
+      {problems.length > 0 && !fromServer.message ? (
+        <AppText tone="danger" role="alert" testID="form-problems">
+          {`Fix before saving: ${problems.join(', ')}.`}
         </AppText>
       ) : null}
       <View style={styles.buttons}>

@@ -38,7 +38,9 @@ describe('NewFamilyScreen', () => {
     expect(screen.getByTestId('error-name')).toHaveTextContent('Name is required');
     expect(screen.getByTestId('error-source')).toHaveTextContent(/Source is required/);
     expect(screen.queryByTestId('error-mobilityExponent')).toBeNull();
-    expect(screen.getByText('5 fields need attention before saving.')).toBeOnTheScreen();
+    expect(screen.getByTestId('form-problems')).toHaveTextContent(
+      'Fix before saving: Name, Source, Effective mass, Mobility at 300 K, Lattice thermal conductivity at 300 K.',
+    );
     expect(calls).toEqual([]);
 
     // Errors follow the typing once shown.
