@@ -1,15 +1,18 @@
 import { StyleSheet, View } from 'react-native';
 
-export type TabIconName = 'materials' | 'outbox' | 'system';
+export type TabIconName = 'materials' | 'designs' | 'runs' | 'outbox' | 'system';
 
 /**
- * Navigation icons drawn with views: stacked zones (materials), an envelope
+ * Navigation icons drawn with views: stacked zones (materials), a graded
+ * leg between plates (designs), a start triangle (runs), an envelope
  * (outbox) and a gauge (system). 24 × 24 px, one colour.
  */
 export function TabIcon({ name, color }: { name: TabIconName; color: string }) {
   return (
     <View style={styles.box} aria-hidden>
       {name === 'materials' ? <Layers color={color} /> : null}
+      {name === 'designs' ? <Leg color={color} /> : null}
+      {name === 'runs' ? <Play color={color} /> : null}
       {name === 'outbox' ? <Envelope color={color} /> : null}
       {name === 'system' ? <Gauge color={color} /> : null}
     </View>
@@ -22,6 +25,29 @@ function Layers({ color }: { color: string }) {
       <View style={[styles.layer, styles.layerTop, { backgroundColor: color }]} />
       <View style={[styles.layer, styles.layerMid, { backgroundColor: color }]} />
       <View style={[styles.layer, { backgroundColor: color }]} />
+    </View>
+  );
+}
+
+/** A leg between its cold and hot plates, zones stepping down the leg. */
+function Leg({ color }: { color: string }) {
+  return (
+    <View style={styles.legIcon}>
+      <View style={[styles.plate, { backgroundColor: color }]} />
+      <View style={[styles.legZone, styles.zoneFaint, { backgroundColor: color }]} />
+      <View style={[styles.legZone, styles.zoneMid, { backgroundColor: color }]} />
+      <View style={[styles.legZone, { backgroundColor: color }]} />
+      <View style={[styles.plate, { backgroundColor: color }]} />
+    </View>
+  );
+}
+
+/** A run: a start triangle beside a progress line. */
+function Play({ color }: { color: string }) {
+  return (
+    <View style={styles.play}>
+      <View style={[styles.triangle, { borderLeftColor: color }]} />
+      <View style={[styles.track, { backgroundColor: color }]} />
     </View>
   );
 }
@@ -49,6 +75,22 @@ const styles = StyleSheet.create({
   layer: { height: 4, width: 20, borderRadius: 1 },
   layerMid: { width: 16, opacity: 0.8 },
   layerTop: { width: 12, opacity: 0.6 },
+  legIcon: { width: 20, alignItems: 'center', gap: 1 },
+  plate: { width: 20, height: 3, borderRadius: 1 },
+  legZone: { width: 8, height: 4 },
+  zoneFaint: { opacity: 0.45 },
+  zoneMid: { opacity: 0.7 },
+  play: { width: 22, flexDirection: 'row', alignItems: 'center', gap: 2 },
+  triangle: {
+    width: 0,
+    height: 0,
+    borderLeftWidth: 11,
+    borderTopWidth: 8,
+    borderBottomWidth: 8,
+    borderTopColor: 'transparent',
+    borderBottomColor: 'transparent',
+  },
+  track: { flex: 1, height: 3, borderRadius: 1 },
   envelope: {
     width: 20,
     height: 15,

@@ -16,6 +16,8 @@ export type TabSpec = {
  */
 export const tabs: readonly TabSpec[] = [
   { name: '(materials)', href: '/', label: 'Materials', icon: 'materials' },
+  { name: '(designs)', href: '/designs', label: 'Designs', icon: 'designs' },
+  { name: '(runs)', href: '/runs', label: 'Runs', icon: 'runs' },
   { name: 'outbox', href: '/outbox', label: 'Outbox', icon: 'outbox' },
   { name: 'system', href: '/system', label: 'System', icon: 'system' },
 ];

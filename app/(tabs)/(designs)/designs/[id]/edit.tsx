@@ -1,0 +1,1 @@
+export { EditDesignScreen as default } from '@/components/screens/designs/edit-design-screen';

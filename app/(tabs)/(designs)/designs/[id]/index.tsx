@@ -1,0 +1,1 @@
+export { DesignDetailScreen as default } from '@/components/screens/designs/design-detail-screen';

@@ -1,0 +1,1 @@
+export { DesignsScreen as default } from '@/components/screens/designs/designs-screen';

@@ -1,0 +1,1 @@
+export { NewDesignScreen as default } from '@/components/screens/designs/new-design-screen';

@@ -1,0 +1,1 @@
+export { CompareScreen as default } from '@/components/screens/runs/compare-screen';

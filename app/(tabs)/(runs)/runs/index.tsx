@@ -1,0 +1,1 @@
+export { RunsScreen as default } from '@/components/screens/runs/runs-screen';

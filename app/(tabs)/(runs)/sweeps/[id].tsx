@@ -1,0 +1,1 @@
+export { SweepScreen as default } from '@/components/screens/runs/sweep-screen';

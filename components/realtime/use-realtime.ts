@@ -1,0 +1,75 @@
+import { useEffect, useRef, useState } from 'react';
+import type { Socket } from 'socket.io-client';
+import { runProgressSchema, type RunProgress } from '@/shared/api/runs';
+import { runStateEventSchema, type RunStateEvent } from './events';
+import { openSocket } from './socket';
+
+/** Whether live events are arriving: shown beside live numbers, in words. */
+export type ConnectionState = 'off' | 'connecting' | 'live' | 'offline';
+
+export type RealtimeOptions = {
+  /** Object rooms to watch (`run:<id>`); the team's room is always joined. */
+  rooms: readonly string[];
+  /** No socket at all while false (e.g. every run on the page has finished). */
+  enabled: boolean;
+  onProgress?: (progress: RunProgress) => void;
+  onState?: (event: RunStateEvent) => void;
+};
+
+/**
+ * One socket for the life of the component: connected in an effect,
+ * `removeAllListeners()` and `disconnect()` on unmount. Rooms are watched on
+ * every (re)connect and when the list changes; events are checked against
+ * the shared schemas before they reach the handlers.
+ */
+export function useRealtime({ rooms, enabled, onProgress, onState }: RealtimeOptions): ConnectionState {
+  const [state, setState] = useState<ConnectionState>(enabled ? 'connecting' : 'off');
+  const socketRef = useRef<Socket | null>(null);
+  const roomsRef = useRef<readonly string[]>(rooms);
+  const handlers = useRef({ onProgress, onState });
+  useEffect(() => {
+    handlers.current = { onProgress, onState };
+  }, [onProgress, onState]);
+
+  useEffect(() => {
+    if (!enabled) {
+      setState('off');
+      return undefined;
+    }
+    const socket = openSocket();
+    socketRef.current = socket;
+    setState('connecting');
+    socket.on('connect', () => {
+      setState('live');
+      for (const room of roomsRef.current) socket.emit('watch', room, () => undefined);
+    });
+    socket.on('disconnect', () => setState('offline'));
+    socket.on('connect_error', () => setState('offline'));
+    socket.on('run:progress', (raw: unknown) => {
+      const parsed = runProgressSchema.safeParse(raw);
+      if (parsed.success) handlers.current.onProgress?.(parsed.data);
+    });
+    socket.on('run:state', (raw: unknown) => {
+      const parsed = runStateEventSchema.safeParse(raw);
+      if (parsed.success) handlers.current.onState?.(parsed.data);
+    });
+    return () => {
+      socketRef.current = null;
+      socket.removeAllListeners();
+      socket.disconnect();
+    };
+  }, [enabled]);
+
+  const key = rooms.join('|');
+  useEffect(() => {
+    const next = key ? key.split('|') : [];
+    const previous = roomsRef.current;
+    roomsRef.current = next;
+    const socket = socketRef.current;
+    if (!socket?.connected) return;
+    for (const room of next) if (!previous.includes(room)) socket.emit('watch', room, () => undefined);
+    for (const room of previous) if (!next.includes(room)) socket.emit('unwatch', room);
+  }, [key]);
+
+  return state;
+}

@@ -1,0 +1,82 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { ApiError } from '@/components/api/client';
+import { spacing } from '@/components/theme';
+import { Button } from '@/components/ui/button';
+import { Notice } from '@/components/ui/notice';
+import { AppText } from '@/components/ui/text';
+import type { DesignNumberKey } from './design-fields';
+import { splitApiErrors, validateDesign, type DesignFormValues, type FieldErrors, type ValidDesign } from './design-form-model';
+import { GrowerSection, LegSection, OperatingSection, SearchSection } from './design-form-sections';
+import { QuickEstimate } from './quick-estimate';
+
+export type DesignFormProps = {
+  initial: DesignFormValues;
+  submitLabel: string;
+  pending: boolean;
+  /** The last failed save: field errors land beside their fields. */
+  error: Error | null;
+  onSubmit: (input: ValidDesign) => void;
+  onCancel: () => void;
+};
+
+function serverErrors(error: Error | null): { byField: FieldErrors; other: string[]; message?: string } {
+  if (!error) return { byField: {}, other: [] };
+  if (!(error instanceof ApiError)) return { byField: {}, other: [], message: error.message };
+  return { ...splitApiErrors(error.fieldErrors), message: error.message };
+}
+
+/**
+ * Create or edit a leg design: checked here with the server's schema as
+ * the physicist types (after a first attempt), the server's own verdict
+ * (e.g. the engine refusing a bound outside a table) shown beside the field.
+ */
+export function DesignForm({ initial, submitLabel, pending, error, onSubmit, onCancel }: DesignFormProps) {
+  const [values, setValues] = useState(initial);
+  const [tried, setTried] = useState(false);
+  const local = tried ? validateDesign(values) : null;
+  const fromServer = serverErrors(error);
+  const errors: FieldErrors = { ...fromServer.byField, ...(local && !local.ok ? local.errors : {}) };
+  const onNumber = (field: DesignNumberKey, text: string) => setValues((v) => ({ ...v, numbers: { ...v.numbers, [field]: text } }));
+  const onChange = (patch: Partial<DesignFormValues>) => setValues((v) => ({ ...v, ...patch }));
+  const submit = () => {
+    setTried(true);
+    const result = validateDesign(values);
+    if (result.ok) onSubmit(result.input);
+  };
+  const section = { values, errors, onNumber, onChange };
+  const problemCount = Object.keys(errors).length;
+  return (
+    <View style={styles.form}>
+      <LegSection {...section} />
+      <OperatingSection {...section} />
+      <GrowerSection {...section} />
+      <SearchSection {...section} />
+      <QuickEstimate values={values} onInvalid={() => setTried(true)} />
+      {fromServer.message ? (
+        <Notice tone="danger" title="Not saved" testID="form-server-error">
+          <AppText>{fromServer.message}</AppText>
+          {fromServer.other.map((line) => (
+            <AppText key={line} variant="mono">
+              {line}
+            </AppText>
+          ))}
+        </Notice>
+      ) : null}
+      {problemCount > 0 && !fromServer.message ? (
+        <AppText tone="danger" role="alert" testID="form-problem-count">
+          {`${problemCount} ${problemCount === 1 ? 'field needs' : 'fields need'} attention before saving.`}
+        </AppText>
+      ) : null}
+      <View style={styles.buttons}>
+        <Button label={pending ? 'Saving…' : submitLabel} onPress={submit} disabled={pending} />
+        <Button label="Cancel" variant="quiet" onPress={onCancel} disabled={pending} />
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: spacing.lg, maxWidth: 760, width: '100%' },
+  buttons: { flexDirection: 'row', gap: spacing.md, flexWrap: 'wrap' },
+});

@@ -1,0 +1,78 @@
+import { StyleSheet, View } from 'react-native';
+import type { FamilySummary } from '@/shared/api/families';
+import { useFamilies } from '@/components/api/families';
+import { colors, spacing } from '@/components/theme';
+import { Chip } from '@/components/ui/chip';
+import { Glyph } from '@/components/ui/glyph';
+import { AppText } from '@/components/ui/text';
+import { designFieldInfo } from './design-fields';
+
+export type FamilyPickerProps = {
+  familyId: string;
+  /** The version the design keeps (editing), or undefined for "current when saved". */
+  familyVersion?: number;
+  error?: string;
+  onChange: (familyId: string, familyVersion?: number) => void;
+};
+
+const carrierWord = (f: FamilySummary) => (f.carrier === 'p' ? 'p-type' : f.carrier === 'n' ? 'n-type' : 'carrier not fixed');
+
+/** Doping-controlled families only: constant properties have nothing to grade. */
+const gradable = (f: FamilySummary) => f.kind !== 'constant';
+
+function VersionLine({ family, familyVersion, onChange }: { family: FamilySummary; familyVersion?: number; onChange: FamilyPickerProps['onChange'] }) {
+  const kept = familyVersion ?? family.version;
+  const newer = familyVersion !== undefined && familyVersion < family.version;
+  return (
+    <View style={styles.versionRow}>
+      <AppText variant="caption" tone="muted">
+        {`${carrierWord(family)} · version ${kept}${newer ? ` (version ${family.version} is newer)` : ' (current)'}`}
+      </AppText>
+      {newer ? <Chip label={`Use version ${family.version}`} selected={false} onPress={() => onChange(family.id, undefined)} /> : null}
+    </View>
+  );
+}
+
+/** One radio chip per gradable family of the team, with its carrier and version in words. */
+export function FamilyPicker({ familyId, familyVersion, error, onChange }: FamilyPickerProps) {
+  const query = useFamilies('active');
+  const families = (query.data?.families ?? []).filter(gradable);
+  const chosen = families.find((f) => f.id === familyId);
+  const info = designFieldInfo.familyId;
+  return (
+    <View style={styles.field}>
+      <AppText variant="label" nativeID="familyId-label">
+        {info.label}
+        <AppText variant="label" tone="muted">
+          {' · required'}
+        </AppText>
+      </AppText>
+      <AppText variant="caption" tone="muted">
+        {info.help}
+      </AppText>
+      {query.isPending ? <AppText tone="muted">Loading the team’s families…</AppText> : null}
+      {query.isError ? <AppText tone="danger">{`Could not load families: ${query.error.message}`}</AppText> : null}
+      <View style={styles.chips} role="radiogroup" aria-labelledby="familyId-label" testID="family-picker">
+        {families.map((f) => (
+          <Chip key={f.id} role="radio" label={`${f.name} (${f.carrier ?? '–'})`} selected={f.id === familyId} onPress={() => onChange(f.id)} />
+        ))}
+      </View>
+      {chosen ? <VersionLine family={chosen} familyVersion={familyVersion} onChange={onChange} /> : null}
+      {error ? (
+        <View style={styles.error} role="alert" testID="error-familyId">
+          <Glyph name="cross" color={colors.danger} />
+          <AppText variant="caption" tone="danger">
+            {error}
+          </AppText>
+        </View>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  field: { gap: spacing.xs },
+  chips: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
+  versionRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: spacing.sm },
+  error: { flexDirection: 'row', alignItems: 'flex-start', gap: spacing.xs },
+});

@@ -1,0 +1,48 @@
+import type { RunDetail, RunProgress } from '@/shared/api/runs';
+import type { PlotPoint } from '@/components/charts/line-plot-types';
+import type { PlotSeries } from '@/components/charts/series-plot-types';
+import type { TracePoint } from '@/components/realtime/use-run-progress';
+import { chartMarks } from '@/components/theme';
+
+/** The stored trace, then the live reports that came after it (by elapsed time). */
+export function mergeTrace(stored: readonly TracePoint[], live: readonly TracePoint[]): TracePoint[] {
+  const last = stored.length > 0 ? stored[stored.length - 1].seconds : -Infinity;
+  return [...stored, ...live.filter((p) => p.seconds > last)];
+}
+
+/** At most `max` points, evenly picked, the last always kept: charts stay quick on long runs. */
+export function thin<T>(points: readonly T[], max: number): T[] {
+  if (points.length <= max) return [...points];
+  const step = points.length / max;
+  const out: T[] = [];
+  for (let k = 0; k < max - 1; k++) out.push(points[Math.floor(k * step)]);
+  out.push(points[points.length - 1]);
+  return out;
+}
+
+const maxChartPoints = 400;
+
+/** Best so far as a line and each report's objective as markers, against elapsed time. */
+export function objectiveSeries(trace: readonly TracePoint[]): PlotSeries[] {
+  const shown = thin(trace, maxChartPoints);
+  return [
+    { key: 'best', label: 'Best so far', mark: chartMarks[0], line: shown.map((p) => ({ x: p.seconds, y: p.best })) },
+    { key: 'latest', label: 'Point being tried', mark: chartMarks[2], line: [], points: shown.map((p) => ({ x: p.seconds, y: p.objective })) },
+  ];
+}
+
+/** The profile the optimiser holds now, between the grower's doping bounds. */
+export function liveDopingSeries(progress: RunProgress | null, design: RunDetail['design']): PlotSeries[] {
+  const L = design.lengthMm;
+  const bound = (n: number): PlotPoint[] => [{ x: 0, y: n }, { x: L, y: n }];
+  const series: PlotSeries[] = [
+    { key: 'max', label: 'Highest doping allowed', mark: chartMarks[1], line: bound(design.maxPerCm3) },
+    { key: 'min', label: 'Lowest doping allowed', mark: chartMarks[3], line: bound(design.minPerCm3) },
+  ];
+  const d = progress?.doping;
+  if (d && d.x.length > 0) {
+    const line = d.x.map((f, i) => ({ x: f * L, y: d.perCm3[i] }));
+    series.unshift({ key: 'now', label: 'Current profile', mark: chartMarks[0], line, points: line });
+  }
+  return series;
+}

@@ -1,0 +1,88 @@
+import { Pressable, StyleSheet, View } from 'react-native';
+import { Link } from 'expo-router';
+import type { RunProgress, RunSummary } from '@/shared/api/runs';
+import { isFinished } from '@/components/api/runs';
+import { formatDateTime } from '@/components/format/date';
+import { colors, spacing } from '@/components/theme';
+import { Chip } from '@/components/ui/chip';
+import { Glyph } from '@/components/ui/glyph';
+import { AppText } from '@/components/ui/text';
+import { ProgressBar } from './progress-bar';
+import { asObjective, formatObjective, objectiveInfo } from './run-format';
+import { RunStateBadge } from './run-state-badge';
+
+export type RunRowProps = {
+  run: RunSummary;
+  /** Latest live progress, when the page watches this run. */
+  live?: RunProgress;
+  /** Show the design's name (lists of several designs). */
+  showDesign?: boolean;
+  /** A swept value, already formatted with its unit. */
+  sweepLabel?: string;
+  selection?: { selected: boolean; onToggle: () => void };
+};
+
+/** "Best ΔT 87.3 K" or "Best so far ΔT 80.1 K". */
+function bestText(run: RunSummary, live?: RunProgress): string {
+  const objective = asObjective(run.objective);
+  const best = live?.best ?? run.best;
+  const prefix = isFinished(run.state) ? 'Best' : 'Best so far';
+  return `${prefix} ${objectiveInfo[objective].symbol} ${formatObjective(objective, best)}`;
+}
+
+/** One run in a list: state in words, best objective with its unit, live progress; opens the run. */
+export function RunRow({ run, live, showDesign = false, sweepLabel, selection }: RunRowProps) {
+  const active = !isFinished(run.state);
+  const fraction = live?.fractionDone ?? run.fractionDone;
+  return (
+    <View style={styles.row} testID={`run-row-${run.id}`}>
+      {selection ? (
+        <Chip label="Compare" selected={selection.selected} onPress={selection.onToggle} testID={`compare-${run.id}`} />
+      ) : null}
+      <Link href={`/runs/${run.id}`} asChild>
+        <Pressable style={styles.link} aria-label={`Run of ${run.designName}, ${run.state}`}>
+          <View style={styles.body}>
+            <View style={styles.top}>
+              <RunStateBadge state={run.state} />
+              {showDesign ? (
+                <AppText variant="bodyStrong" style={styles.grow} numberOfLines={1}>
+                  {run.designName}
+                </AppText>
+              ) : (
+                <View style={styles.grow} />
+              )}
+              <Glyph name="chevron-right" color={colors.textFaint} />
+            </View>
+            <View style={styles.facts}>
+              {sweepLabel ? <AppText variant="label">{sweepLabel}</AppText> : null}
+              <AppText variant="mono">{bestText(run, live)}</AppText>
+              <AppText variant="caption" tone="muted">{`${formatDateTime(run.createdAt)} · ${run.launchedBy}`}</AppText>
+            </View>
+            {active ? <ProgressBar compact fraction={fraction} label={`Progress of the run of ${run.designName}`} caption={live?.phase ?? (run.state === 'queued' ? 'waiting for a worker' : 'running')} /> : null}
+            {run.state === 'failed' && run.error ? (
+              <AppText variant="caption" tone="danger" numberOfLines={2}>
+                {run.error}
+              </AppText>
+            ) : null}
+          </View>
+        </Pressable>
+      </Link>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  row: {
+    flexDirection: 'row',
+    alignItems: 'flex-start',
+    gap: spacing.md,
+    paddingVertical: spacing.md,
+    borderTopWidth: 1,
+    borderTopColor: colors.border,
+  },
+  link: { flex: 1 },
+  body: { gap: spacing.xs },
+  top: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm },
+  grow: { flex: 1 },
+  facts: { flexDirection: 'row', flexWrap: 'wrap', columnGap: spacing.lg, rowGap: spacing.xxs, alignItems: 'baseline' },
+});

@@ -1,0 +1,82 @@
+import { StyleSheet, View } from 'react-native';
+import { useLocalSearchParams } from 'expo-router';
+import type { RunDetail } from '@/shared/api/runs';
+import { ApiError } from '@/components/api/client';
+import { isFinished, useRunDetail } from '@/components/api/runs';
+import { formatDateTime } from '@/components/format/date';
+import { useRunProgress } from '@/components/realtime/use-run-progress';
+import { ScreenFrame } from '@/components/shell/screen-frame';
+import { spacing } from '@/components/theme';
+import { Section } from '@/components/ui/form-section';
+import { LinkButton } from '@/components/ui/link-button';
+import { ErrorState, LoadingState } from '@/components/ui/state-views';
+import { DesignFacts } from '../designs/design-facts';
+import { formatSweepValue, objectiveInfo, type SweepParameter } from './run-format';
+import { RunLive } from './run-live';
+import { RunOutcome } from './run-outcome';
+import { RunStateBadge } from './run-state-badge';
+
+const back = { label: 'Runs', href: '/runs' } as const;
+
+/** The design value a sweep run varied, from its frozen design (e.g. "Th = 300 K"). */
+function sweepNote(detail: RunDetail): string | null {
+  const { run } = detail;
+  if (!run.sweepId || run.sweepValue === null) return null;
+  const d = detail.design;
+  const values: Record<SweepParameter, number> = { hotSide: d.hotSide, lengthMm: d.lengthMm, heatLoad: d.heatLoad, maxPerCm3: d.maxPerCm3, minPerCm3: d.minPerCm3 };
+  const parameter = (Object.keys(values) as SweepParameter[]).find((p) => values[p] === run.sweepValue);
+  return parameter ? `Sweep run at ${formatSweepValue(parameter, run.sweepValue)}` : 'Sweep run';
+}
+
+function RunPage({ detail }: { detail: RunDetail }) {
+  const { run, design } = detail;
+  const active = !isFinished(run.state);
+  const live = useRunProgress(run.id, active);
+  const sweep = sweepNote(detail);
+  return (
+    <ScreenFrame
+      title={run.designName}
+      subtitle={`${objectiveInfo[design.objective].goal} · launched ${formatDateTime(run.createdAt)} by ${run.launchedBy}`}
+      back={back}
+    >
+      <View style={styles.status}>
+        <RunStateBadge state={run.state} size="large" testID="run-state" />
+        <View style={styles.links}>
+          <LinkButton variant="quiet" label="Design" href={`/designs/${run.designId}`} />
+          {run.sweepId ? <LinkButton variant="quiet" label={sweep ?? 'Sweep'} href={`/sweeps/${run.sweepId}`} /> : null}
+        </View>
+      </View>
+      {active ? <RunLive detail={detail} live={live} /> : <RunOutcome detail={detail} />}
+      <Section title="What was run" hint="The design and family version as frozen when the run was launched.">
+        <DesignFacts design={design} testID="run-design" />
+      </Section>
+    </ScreenFrame>
+  );
+}
+
+/** `/runs/[id]`: live while queued or running, the result once finished. */
+export function RunScreen() {
+  const id = useLocalSearchParams<{ id: string }>().id ?? '';
+  const query = useRunDetail(id);
+  if (query.data) return <RunPage detail={query.data} />;
+  const notFound = query.error instanceof ApiError && query.error.isNotFound;
+  return (
+    <ScreenFrame title={notFound ? 'No such run' : 'Run'} back={back}>
+      {query.isError ? (
+        <ErrorState
+          title={notFound ? 'This run is not in your team' : 'Could not load the run'}
+          message={query.error.message}
+          onRetry={notFound ? undefined : () => void query.refetch()}
+          retrying={query.isFetching}
+        />
+      ) : (
+        <LoadingState label="Loading the run…" />
+      )}
+    </ScreenFrame>
+  );
+}
+
+const styles = StyleSheet.create({
+  status: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', gap: spacing.md },
+  links: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
+});

@@ -1,0 +1,88 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import type { RunSummary } from '@/shared/api/runs';
+import { isFinished, useRuns } from '@/components/api/runs';
+import { useLiveRuns } from '@/components/realtime/use-live-runs';
+import { ScreenFrame } from '@/components/shell/screen-frame';
+import { spacing } from '@/components/theme';
+import { Chip } from '@/components/ui/chip';
+import { LinkButton } from '@/components/ui/link-button';
+import { EmptyState, ErrorState, LoadingState } from '@/components/ui/state-views';
+import { AppText } from '@/components/ui/text';
+import { ConnectionLine } from './connection-line';
+import { maxCompared } from './compare-model';
+import { RunRow } from './run-row';
+
+type Filter = 'all' | 'active' | 'finished';
+const filters: Array<{ key: Filter; label: string }> = [
+  { key: 'all', label: 'All' },
+  { key: 'active', label: 'Queued or running' },
+  { key: 'finished', label: 'Finished' },
+];
+
+const keep = (filter: Filter) => (r: RunSummary) => filter === 'all' || (filter === 'active') !== isFinished(r.state);
+/** Only runs with a result can be compared. */
+const comparable = (r: RunSummary) => isFinished(r.state) && r.best !== null;
+
+function CompareBar({ selected, onClear }: { selected: string[]; onClear: () => void }) {
+  const n = selected.length;
+  return (
+    <View style={styles.compareBar} testID="compare-bar">
+      <AppText variant="label">{n === 0 ? `Tick up to ${maxCompared} finished runs to compare them side by side.` : `${n} selected`}</AppText>
+      {n >= 2 ? <LinkButton label={`Compare ${n} runs`} href={`/runs/compare?ids=${selected.join(',')}`} testID="compare-link" /> : null}
+      {n > 0 ? <Chip label="Clear" selected={false} onPress={onClear} /> : null}
+    </View>
+  );
+}
+
+/** Recent runs of the team, live; pick several to compare. */
+export function RunsScreen() {
+  const query = useRuns();
+  const [filter, setFilter] = useState<Filter>('all');
+  const [selected, setSelected] = useState<string[]>([]);
+  const runs = query.data?.runs;
+  const live = useLiveRuns(runs, true);
+  const toggle = (id: string) =>
+    setSelected((s) => (s.includes(id) ? s.filter((x) => x !== id) : s.length < maxCompared ? [...s, id] : s));
+  const shown = (runs ?? []).filter(keep(filter));
+  return (
+    <ScreenFrame title="Runs" subtitle="Optimisation runs of your team, newest first" refreshing={query.isRefetching} onRefresh={() => void query.refetch()}>
+      <View style={styles.toolbar}>
+        <View style={styles.filters} role="tablist" aria-label="Which runs">
+          {filters.map((f) => (
+            <Chip key={f.key} role="tab" label={f.label} selected={filter === f.key} onPress={() => setFilter(f.key)} />
+          ))}
+        </View>
+        <ConnectionLine state={live.connection} />
+      </View>
+      <CompareBar selected={selected} onClear={() => setSelected([])} />
+      {query.isPending ? <LoadingState label="Loading runs…" /> : null}
+      {query.isError ? <ErrorState title="Could not load runs" message={query.error.message} onRetry={() => void query.refetch()} retrying={query.isFetching} /> : null}
+      {runs && shown.length === 0 ? (
+        <EmptyState title="No runs here" body="Runs are launched from a design's page: open Designs, pick one and launch a run or a sweep." />
+      ) : null}
+      {shown.length > 0 ? (
+        <View role="list" aria-label="Runs" style={styles.list}>
+          {shown.map((r) => (
+            <View key={r.id} role="listitem">
+              <RunRow
+                run={r}
+                live={live.progress[r.id]}
+                showDesign
+                sweepLabel={r.sweepId ? 'Part of a sweep' : undefined}
+                selection={comparable(r) ? { selected: selected.includes(r.id), onToggle: () => toggle(r.id) } : undefined}
+              />
+            </View>
+          ))}
+        </View>
+      ) : null}
+    </ScreenFrame>
+  );
+}
+
+const styles = StyleSheet.create({
+  toolbar: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'center', gap: spacing.md },
+  filters: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
+  compareBar: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: spacing.md, minHeight: 40 },
+  list: { gap: spacing.xxs },
+});
