@@ -8,6 +8,7 @@ import { startBoss } from '../server/queue/boss';
 import { queues } from '../server/queue/queues';
 import { startHeartbeat } from './heartbeat';
 import { runJob } from './run-job';
+import { sheetJob } from './sheet-job';
 import { startRunSupervisor } from './run-supervisor';
 
 /**
@@ -33,6 +34,12 @@ async function main(): Promise<void> {
     const outcome = await runJob({ ds, mailer, appOrigin: env.appOrigin, workerId, isShuttingDown: () => shuttingDown }, job.data.runId);
     await heartbeat.beat(1);
     console.log(`[worker] run ${job.data.runId}: ${outcome}`);
+    return { workerId, outcome };
+  });
+  await boss.work<{ orderId: string }>(queues.growthSheet, { pollingIntervalSeconds: 0.5, batchSize: 1 }, async ([job]) => {
+    if (!job) return null;
+    const outcome = await sheetJob(ds, job.data.orderId);
+    console.log(`[worker] growth order ${job.data.orderId}: ${outcome}`);
     return { workerId, outcome };
   });
   const supervisor = startRunSupervisor(ds, boss, env.runStaleSeconds);

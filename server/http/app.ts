@@ -9,6 +9,7 @@ import type { Mailer } from '../mail/mailer';
 import { authRoutes } from '../routes/auth-routes';
 import { designRoutes } from '../routes/design-routes';
 import { familyRoutes } from '../routes/family-routes';
+import { growthRoutes } from '../routes/growth-routes';
 import { systemRoutes } from '../routes/system-routes';
 import { teamRoutes } from '../routes/team-routes';
 import { sessionReader } from './access';
@@ -27,6 +28,7 @@ export function apiRoutes(d: AppDeps): RouteSpec[] {
     ...teamRoutes(accountDeps),
     ...familyRoutes(d.ds),
     ...designRoutes({ ds: d.ds, boss: d.boss, runQueue: d.env.runQueue }),
+    ...growthRoutes({ ds: d.ds, boss: d.boss, mailer: d.mailer, appOrigin: d.env.appOrigin }),
   ];
 }
 

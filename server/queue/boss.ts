@@ -18,7 +18,7 @@ export async function startBoss(databaseUrl: string, applicationName: string, ex
     try {
       await boss.start();
       for (const name of Object.values(queues)) {
-        if (!(await boss.getQueue(name))) await boss.createQueue(name, { name, retryLimit: 0, expireInSeconds: 60 });
+        if (!(await boss.getQueue(name))) await boss.createQueue(name, { name, retryLimit: 1, expireInSeconds: 600 });
       }
       for (const name of extraQueues) await ensureRunQueue(boss, name);
       return boss;

@@ -2,4 +2,6 @@
 export const queues = {
   /** A no-op job used by the health check and tests to prove the queue → worker path. */
   probe: 'system-probe',
+  /** Computes a growth order's sheet (zoning for every K, tolerances) in a worker. */
+  growthSheet: 'growth-sheet',
 } as const;

@@ -3,7 +3,7 @@ import type { DataSource } from 'typeorm';
 import { isUuid } from '../http/validate';
 
 /** Object kinds a browser may watch, each checked against the watcher's team. */
-const tables: Record<string, string> = { family: 'material_family', run: 'run', design: 'design', sweep: 'sweep' };
+const tables: Record<string, string> = { family: 'material_family', run: 'run', design: 'design', sweep: 'sweep', growth: 'growth_order' };
 
 export function watchRules(ds: DataSource): (user: User, room: string) => Promise<boolean> {
   return async (user, room) => {

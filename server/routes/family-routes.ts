@@ -1,8 +1,7 @@
-import type { Request, RequestHandler } from 'express';
-import multer from 'multer';
+import type { Request } from 'express';
 import type { DataSource } from 'typeorm';
-import { createFamilyRequestSchema, duplicateFamilyRequestSchema, maxUploadBytes, updateFamilyRequestSchema } from '../../shared/api';
-import { HttpError, ValidationError } from '../http/errors';
+import { createFamilyRequestSchema, duplicateFamilyRequestSchema, updateFamilyRequestSchema } from '../../shared/api';
+import { fileOf, uploadThen } from '../http/upload';
 import { actorName, anyMember, designers, requireTeam } from '../http/access';
 import { route, type RouteSpec } from '../http/route-table';
 import { body, parseOrThrow } from '../http/validate';
@@ -10,9 +9,6 @@ import { exportFamily } from '../services/family-export';
 import { createFamily, duplicateFamily, getFamily, listFamilies, setArchived, updateFamily } from '../services/family-service';
 import { previewUpload, saveUpload } from '../services/family-upload-service';
 import { z } from 'zod';
-
-/** Files stay in memory (≤ 5 MB); multer stops reading at the limit. */
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: maxUploadBytes, files: 1, fields: 10, fieldSize: 10_000 } }).single('file');
 
 const uploadMeta = z.object({
   name: z.string({ error: 'name is required' }).trim().min(1, { error: 'name is required' }).max(120),
@@ -22,31 +18,9 @@ const uploadMeta = z.object({
 
 const versionQuery = z.object({ version: z.coerce.number({ error: 'version must be a whole number' }).int().min(1).optional() });
 
-function fileOf(req: Request): Buffer {
-  if (!req.file) throw new ValidationError([{ field: 'file', message: 'attach the CSV file in the multipart field "file"' }]);
-  if (req.file.size === 0) throw new ValidationError([{ field: 'file', message: 'the file is empty' }]);
-  return req.file.buffer;
-}
-
-/** Refuses an announced oversized body before a byte of it is read. */
-function tooLarge(req: Request): boolean {
-  return Number(req.get('content-length') ?? 0) > maxUploadBytes + 64 * 1024;
-}
-
-function uploadThen(handle: (req: Request) => Promise<unknown>, status: number): RequestHandler {
-  return (req, res, next) => {
-    if (tooLarge(req)) return next(new HttpError(413, `The file is larger than ${maxUploadBytes / 1024 / 1024} MB.`, [{ field: 'file', message: 'too large' }], 'PayloadTooLarge'));
-    upload(req, res, (err: unknown) => {
-      if (err) return next(err);
-      handle(req).then((out) => res.status(status).json(out), next);
-    });
-  };
-}
-
 export function familyRoutes(ds: DataSource): RouteSpec[] {
   const team = (req: Request) => requireTeam(req);
   return [
-
     route('get', '/families', anyMember, async (req, res) => {
       res.json(await listFamilies(ds, team(req), req.query.archived === '1'));
     }),

@@ -7,3 +7,4 @@ export * from './family-upload';
 export * from './auth';
 export * from './designs';
 export * from './runs';
+export * from './growth';

@@ -3,10 +3,11 @@ import request from 'supertest';
 import { roles, type Role } from '../../shared/api';
 import { apiRoutes } from '../../server/http/app';
 import type { RouteSpec } from '../../server/http/route-table';
-import { agent, demo, openContext, signedIn, type TestContext } from './context';
+import { agent, demo, eventually, openContext, signedIn, type TestContext } from './context';
 
 let ctx: TestContext;
 let specs: RouteSpec[];
+jest.setTimeout(120_000);
 beforeAll(async () => {
   ctx = await openContext();
   specs = apiRoutes({ env: ctx.env, ds: ctx.ds, boss: ctx.boss, mailer: ctx.mailer, auth: ctx.auth, version: 'test' });
@@ -65,6 +66,15 @@ const policy: Record<string, 'public' | Role[]> = {
   'GET /runs/:id/export.csv': runReaders,
   'GET /runs/:id/export.json': runReaders,
   'GET /sweeps/:id': runReaders,
+  'POST /runs/:id/release': designers,
+  'GET /growth-orders': all.slice(),
+  'GET /growth-orders/:id': all.slice(),
+  'PUT /growth-orders/:id/state': ['admin', 'grower'],
+  'POST /growth-orders/:id/close': designers,
+  'PUT /growth-orders/:id/sheet': designers,
+  'POST /growth-orders/:id/measurements': ['admin', 'grower'],
+  'GET /growth-orders/:id/sheet.csv': all.slice(),
+  'GET /growth-orders/:id/sheet.json': all.slice(),
 };
 
 const key = (s: RouteSpec): string => `${s.method.toUpperCase()} ${s.path}`;
@@ -81,6 +91,10 @@ const validBody: Record<string, object> = {
   'PUT /team/members/:id/role': { role: 'admin' },
   'PUT /designs/:id': { name: 'x', familyId: '00000000-0000-4000-8000-000000000000', lengthMm: 1, areaMm2: 1, hotSide: 300, minPerCm3: 1e18, maxPerCm3: 1e20 },
   'POST /designs/:id/sweeps': { parameter: 'hotSide', values: [290, 300] },
+  'POST /runs/:id/release': { batch: 'outsider' },
+  'PUT /growth-orders/:id/state': { state: 'accepted' },
+  'POST /growth-orders/:id/close': { verdict: 'rejected', reason: 'outsider' },
+  'PUT /growth-orders/:id/sheet': { zones: 2 },
 };
 
 function call(client: ReturnType<typeof request.agent>, s: RouteSpec, path: string) {
@@ -114,7 +128,9 @@ it('a member of another team gets 404 for every object of this team, and nothing
   const designId = designRes.body.design.id as string;
   const runId = (await lab.post(`/api/designs/${designId}/runs`)).body.run.id as string;
   const sweepId = (await lab.post(`/api/designs/${designId}/sweeps`).send({ parameter: 'hotSide', values: [295, 300] })).body.sweep.id as string;
-  const ids: Record<string, string> = { '/families/': family.id, '/team/members/': viewer.id, '/team/invitations/': randomUUID(), '/designs/': designId, '/runs/': runId, '/sweeps/': sweepId };
+  await eventually(async () => ((await lab.get(`/api/runs/${runId}`)).body.run.state === 'succeeded' ? true : undefined), 60);
+  const orderId = (await lab.post(`/api/runs/${runId}/release`).send({ batch: `Matrix ${Date.now()}` })).body.order.id as string;
+  const ids: Record<string, string> = { '/families/': family.id, '/team/members/': viewer.id, '/team/invitations/': randomUUID(), '/designs/': designId, '/runs/': runId, '/sweeps/': sweepId, '/growth-orders/': orderId };
   for (const s of specs.filter((x) => x.path.includes(':id'))) {
     const prefix = Object.keys(ids).find((p) => s.path.startsWith(p))!;
     const outsider = await signedIn(ctx, demo.otherTeamAdmin);

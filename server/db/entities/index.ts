@@ -9,3 +9,4 @@ export { PasswordReset } from './password-reset';
 export { Design } from './design';
 export { Run } from './run';
 export { Sweep } from './sweep';
+export { GrowthOrder } from './growth-order';

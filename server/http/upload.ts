@@ -1,0 +1,29 @@
+import type { Request, RequestHandler } from 'express';
+import multer from 'multer';
+import { maxUploadBytes } from '../../shared/api';
+import { HttpError, ValidationError } from './errors';
+
+/** Files stay in memory (≤ 5 MB); multer stops reading at the limit. */
+const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: maxUploadBytes, files: 1, fields: 10, fieldSize: 10_000 } }).single('file');
+
+/** Refuses an announced oversized body before a byte of it is read. */
+function tooLarge(req: Request): boolean {
+  return Number(req.get('content-length') ?? 0) > maxUploadBytes + 64 * 1024;
+}
+
+export function fileOf(req: Request): Buffer {
+  if (!req.file) throw new ValidationError([{ field: 'file', message: 'attach the CSV file in the multipart field "file"' }]);
+  if (req.file.size === 0) throw new ValidationError([{ field: 'file', message: 'the file is empty' }]);
+  return req.file.buffer;
+}
+
+/** Reads one multipart file, then answers with what `handle` returns. */
+export function uploadThen(handle: (req: Request) => Promise<unknown>, status: number): RequestHandler {
+  return (req, res, next) => {
+    if (tooLarge(req)) return next(new HttpError(413, `The file is larger than ${maxUploadBytes / 1024 / 1024} MB.`, [{ field: 'file', message: 'too large' }], 'PayloadTooLarge'));
+    upload(req, res, (err: unknown) => {
+      if (err) return next(err);
+      handle(req).then((out) => res.status(status).json(out), next);
+    });
+  };
+}

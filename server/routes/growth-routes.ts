@@ -1,0 +1,49 @@
+import { z } from 'zod';
+import type { Role } from '../../shared/api';
+import { closeOrderSchema, growthStateChangeSchema, releaseRequestSchema, sheetSettingsSchema } from '../../shared/api';
+import { anyMember, designers, requireTeam, requireUser } from '../http/access';
+import { route, type RouteSpec } from '../http/route-table';
+import { fileOf, uploadThen } from '../http/upload';
+import { body, parseOrThrow } from '../http/validate';
+import { exportSheet } from '../services/growth-export';
+import { changeState, closeOrder, listOrders, orderDetail, releaseRun, updateSheetSettings, uploadMeasurements, type GrowthDeps } from '../services/growth-service';
+
+/** Growers move orders and upload measurements; admins may stand in for them. */
+export const growers: readonly Role[] = ['admin', 'grower'];
+
+const temperatureField = z.object({ temperature: z.coerce.number({ error: 'temperature must be a number (K)' }).min(200, { error: 'temperature is in kelvin (200–400 K)' }).max(400, { error: 'temperature is in kelvin (200–400 K)' }).optional() });
+
+export function growthRoutes(d: GrowthDeps): RouteSpec[] {
+  const { ds } = d;
+  return [
+    route('post', '/runs/:id/release', designers, body(releaseRequestSchema), async (req, res) => {
+      res.status(201).json({ order: await releaseRun(d, requireTeam(req), requireUser(req), req.params.id, res.locals.body) });
+    }),
+    route('get', '/growth-orders', anyMember, async (req, res) => {
+      res.json({ orders: await listOrders(ds, requireTeam(req)) });
+    }),
+    route('get', '/growth-orders/:id', anyMember, async (req, res) => {
+      res.json(await orderDetail(ds, requireTeam(req), req.params.id));
+    }),
+    route('put', '/growth-orders/:id/state', growers, body(growthStateChangeSchema), async (req, res) => {
+      await changeState(ds, requireTeam(req), requireUser(req), req.params.id, res.locals.body);
+      res.json(await orderDetail(ds, requireTeam(req), req.params.id));
+    }),
+    route('post', '/growth-orders/:id/close', designers, body(closeOrderSchema), async (req, res) => {
+      await closeOrder(ds, requireTeam(req), requireUser(req), req.params.id, res.locals.body);
+      res.json(await orderDetail(ds, requireTeam(req), req.params.id));
+    }),
+    route('put', '/growth-orders/:id/sheet', designers, body(sheetSettingsSchema), async (req, res) => {
+      await updateSheetSettings(d, requireTeam(req), requireUser(req), req.params.id, res.locals.body);
+      res.json(await orderDetail(ds, requireTeam(req), req.params.id));
+    }),
+    route('post', '/growth-orders/:id/measurements', growers, uploadThen(async (req) => {
+      const { temperature } = parseOrThrow(temperatureField, req.body ?? {});
+      return { report: await uploadMeasurements(d, requireTeam(req), requireUser(req), req.params.id, () => fileOf(req), temperature) };
+    }, 201)),
+    ...(['csv', 'json'] as const).map((format) => route('get', `/growth-orders/:id/sheet.${format}`, anyMember, async (req, res) => {
+      const out = await exportSheet(ds, requireTeam(req), req.params.id, format);
+      res.type(format === 'csv' ? 'text/csv' : 'application/json').attachment(out.filename).send(out.body);
+    })),
+  ];
+}

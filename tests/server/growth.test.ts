@@ -1,0 +1,98 @@
+import { growthOrderDetailSchema } from '../../shared/api';
+import { familyFromMaterial, propertiesAt, type MaterialInput } from '../../shared/engine';
+import type { GrowthSheet } from '../../shared/growth/growth-sheet';
+import type { MeasurementReport } from '../../shared/growth/measurement-report';
+import { demo, eventually, openContext, signedIn, type TestContext } from './context';
+
+let ctx: TestContext;
+jest.setTimeout(120_000);
+beforeAll(async () => { ctx = await openContext(); });
+afterAll(async () => { await ctx.close(); });
+
+type Api = Awaited<ReturnType<typeof signedIn>>;
+
+/** A converged run of the demo p-type family, worked by the test stack's worker. */
+async function convergedRun(api: Api): Promise<{ runId: string; uniformDeltaT: number; material: MaterialInput }> {
+  const families = (await api.get('/api/families')).body.families as Array<{ id: string; name: string }>;
+  const family = families.find((f) => f.name.startsWith('NL-P7 (Bi,Sb)'))!;
+  const design = await api.post('/api/designs').send({ name: `Growth ${Date.now()}`, familyId: family.id, lengthMm: 1.5, areaMm2: 1, hotSide: 300, minPerCm3: 1e18, maxPerCm3: 1e20, controlPoints: 6, starts: 1, minZoneMm: 0.2 });
+  const runId = (await api.post(`/api/designs/${design.body.design.id}/runs`)).body.run.id as string;
+  const done = await eventually(async () => {
+    const d = (await api.get(`/api/runs/${runId}`)).body;
+    return d.run.state === 'succeeded' ? d : undefined;
+  }, 60);
+  return { runId, uniformDeltaT: done.result.baselines.uniform.deltaT, material: done.case.material };
+}
+
+it('release → sheet (K = 1 is the best uniform leg) → grower steps → measurements flagged → physicist closes', async () => {
+  const physicist = await signedIn(ctx, demo.physicist);
+  const grower = await signedIn(ctx, demo.grower);
+  const { runId, uniformDeltaT, material } = await convergedRun(physicist);
+  const batch = `B-${Date.now()}`;
+  const released = await physicist.post(`/api/runs/${runId}/release`).send({ batch, dueDate: '2027-02-15', zones: 3, notes: 'for the detector stage' });
+  expect(released.status).toBe(201);
+  const orderId = released.body.order.id as string;
+
+  // Growers are told by e-mail.
+  const mail = await eventually(async () => (await ctx.ds.query('SELECT text FROM captured_mail WHERE $1 = ANY(mail_to) AND subject LIKE $2', [demo.grower, `%${batch}%`]))[0] as { text: string } | undefined);
+  expect(mail.text).toContain(`/growth/${orderId}`);
+
+  const ready = await eventually(async () => {
+    const d = growthOrderDetailSchema.parse((await grower.get(`/api/growth-orders/${orderId}`)).body);
+    return d.order.sheetStatus === 'ready' ? d : undefined;
+  }, 90);
+  const sheet = ready.sheet as unknown as GrowthSheet;
+  expect(Math.abs(sheet.steps[0]!.deltaT - uniformDeltaT)).toBeLessThan(0.01);
+  for (let k = 1; k < sheet.steps.length; k += 1) expect(sheet.steps[k]!.deltaT).toBeGreaterThanOrEqual(sheet.steps[k - 1]!.deltaT - 1e-9);
+  // minZoneMm 0.2 on a 1.5 mm leg: at most 7 zones, none shorter than 0.2 mm.
+  expect(sheet.steps.length).toBeLessThanOrEqual(7);
+  for (const s of sheet.steps) for (const r of s.rows) expect(r.endMm - r.startMm).toBeGreaterThanOrEqual(0.2 - 1e-9);
+
+  // The grower moves the order one step at a time.
+  expect((await grower.put(`/api/growth-orders/${orderId}/state`).send({ state: 'growing' })).status).toBe(400);
+  for (const state of ['accepted', 'growing', 'grown']) expect((await grower.put(`/api/growth-orders/${orderId}/state`).send({ state })).status).toBe(200);
+  expect((await physicist.put(`/api/growth-orders/${orderId}/state`).send({ state: 'measured' })).status).toBe(403);
+
+  // Measurements: room-temperature S and σ of the 3-zone target, with zone 2 grown 3× too high.
+  const step = sheet.steps.find((s) => s.zones === 3)!;
+  const family = familyFromMaterial(material);
+  const lines = ['position_mm,seebeck_uV_per_K,sigma_S_per_cm'];
+  for (let mm = 0.05; mm < 1.5; mm += 0.1) {
+    const k = step.rows.findIndex((r) => mm >= r.startMm && mm < r.endMm);
+    const at = propertiesAt(family, step.rows[k]!.perCm3 * (k === 1 ? 3 : 1), 300);
+    lines.push(`${mm.toFixed(2)},${(at.seebeck * 1e6).toFixed(2)},${(at.sigma / 100).toFixed(3)}`);
+  }
+  const bad = await grower.post(`/api/growth-orders/${orderId}/measurements`).attach('file', Buffer.from('position_mm,seebeck_uV_per_K\n0.5,abc'), 'm.csv');
+  expect(bad.status).toBe(400);
+  expect(bad.body.errors[0].field).toBe('file:line 2:seebeck_uV_per_K');
+  const up = await grower.post(`/api/growth-orders/${orderId}/measurements`).attach('file', Buffer.from(lines.join('\n')), 'as-grown.csv');
+  expect(up.status).toBe(201);
+  const report = up.body.report as MeasurementReport;
+  expect(report.verdicts.map((v) => v.verdict)).toEqual(['within', 'high', 'within']);
+  expect(report.asGrown.atDesignCurrent.deltaT).toBeLessThan(report.target.deltaT);
+  const physicistMail = await eventually(async () => (await ctx.ds.query('SELECT subject, text FROM captured_mail WHERE $1 = ANY(mail_to) AND subject LIKE $2', [demo.physicist, `%Measurements back for batch ${batch}%`]))[0] as { subject: string; text: string } | undefined);
+  expect(physicistMail.text).toMatch(/zone 2 \(high\)/);
+
+  expect((await grower.put(`/api/growth-orders/${orderId}/state`).send({ state: 'measured' })).status).toBe(200);
+  expect((await physicist.post(`/api/growth-orders/${orderId}/close`).send({ verdict: 'rejected', reason: '' })).status).toBe(400);
+  const closed = growthOrderDetailSchema.parse((await physicist.post(`/api/growth-orders/${orderId}/close`).send({ verdict: 'rejected', reason: 'zone 2 overdoped; regrow' })).body);
+  expect(closed.order.state).toBe('rejected');
+  expect(closed.timeline.map((e) => e.toState ?? e.kind)).toEqual(['requested', 'accepted', 'growing', 'grown', 'measured', 'measured', 'rejected']);
+  expect(closed.timeline.map((e) => e.by)).toContain('Greta Moreau');
+  expect((await grower.put(`/api/growth-orders/${orderId}/state`).send({ state: 'measured' })).status).toBe(409);
+
+  const csv = await grower.get(`/api/growth-orders/${orderId}/sheet.csv`);
+  expect(csv.text).toMatch(/Model predictions: verify/);
+  expect(csv.text.trim().split('\n').filter((l) => /^\d,/.test(l))).toHaveLength(3);
+  expect((await (await signedIn(ctx, demo.otherTeamAdmin)).get(`/api/growth-orders/${orderId}`)).status).toBe(404);
+});
+
+it('only a converged run can be released', async () => {
+  const physicist = await signedIn(ctx, demo.physicist);
+  const families = (await physicist.get('/api/families')).body.families as Array<{ id: string; name: string }>;
+  const design = await physicist.post('/api/designs').send({ name: `Queued ${Date.now()}`, familyId: families[0]!.id, lengthMm: 1.5, areaMm2: 1, hotSide: 300, minPerCm3: 1e18, maxPerCm3: 1e20, controlPoints: 6, starts: 300 });
+  const runId = (await physicist.post(`/api/designs/${design.body.design.id}/runs`)).body.run.id as string;
+  const res = await physicist.post(`/api/runs/${runId}/release`).send({ batch: 'too early' });
+  expect(res.status).toBe(409);
+  await physicist.post(`/api/runs/${runId}/cancel`);
+});
