@@ -1,5 +1,5 @@
 import { figureOfMerit, propertiesAt } from '@/shared/engine';
-import { curveVsDoping, logSpaced, measuredVsDoping, optimumVsTemperature, plotSetup, type TableRow } from './family-curves';
+import { bestMeasuredVsTemperature, curveVsDoping, logSpaced, measuredVsDoping, optimumVsTemperature, plotSetup, type TableRow } from './family-curves';
 
 const band = {
   kind: 'band',
@@ -61,6 +61,14 @@ describe('family curves', () => {
     const line = curveVsDoping(setup.family, 'seebeck', 350, setup.dopingRange);
     expect(line[0].y).toBeCloseTo(rows[1].seebeck * 1e6, 6);
     expect(line[line.length - 1].y).toBeCloseTo(rows[5].seebeck * 1e6, 6);
+  });
+
+  it('marks the best measured doping at each measured temperature', () => {
+    // zT = S²σT/κ at 300 K: 0.622, 0.729, 0.588 for 1, 2, 4 × 10¹⁹ cm⁻³; at 350 K: 0.793, 0.948, 0.787.
+    expect(bestMeasuredVsTemperature(rows)).toEqual([
+      { x: 300, y: 2e19 },
+      { x: 350, y: 2e19 },
+    ]);
   });
 
   it('keeps the points of a table with a hole and says why there are no lines', () => {

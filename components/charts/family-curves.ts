@@ -161,3 +161,14 @@ export function optimumVsTemperature(
     return { x: t, y: ztOptimalDoping(family, t, range.min, range.max) };
   });
 }
+
+/** At each measured temperature, the measured doping with the largest zT (x = T [K], y = n [cm⁻³]). */
+export function bestMeasuredVsTemperature(rows: TableRow[]): PlotPoint[] {
+  const best = new Map<number, { n: number; zT: number }>();
+  for (const r of rows) {
+    const zT = figureOfMerit(r, r.temperature);
+    const held = best.get(r.temperature);
+    if (!held || zT > held.zT) best.set(r.temperature, { n: r.perCm3, zT });
+  }
+  return [...best.entries()].sort((a, b) => a[0] - b[0]).map(([t, b]) => ({ x: t, y: b.n }));
+}

@@ -51,7 +51,7 @@ export function EditFamilyScreen() {
     <ScreenFrame
       title={`Edit ${detail.family.name}`}
       subtitle={isBand ? 'Band model, name and provenance' : 'Name and provenance; the measured values stay as uploaded'}
-      back={backToFamily}
+      back={{ ...backToFamily, label: detail.family.name }}
     >
       <FamilyWriteGuard>
         <FamilyForm

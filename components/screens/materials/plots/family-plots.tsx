@@ -64,6 +64,7 @@ export function FamilyPlots({ definition, quantities = allQuantities, showOptimu
         family={setup.family}
         temperatures={span}
         range={setup.dopingRange}
+        measured={setup.measured}
       />,
     );
   }
