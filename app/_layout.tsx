@@ -5,9 +5,13 @@ import { Slot } from 'expo-router';
 import { StatusBar } from 'expo-status-bar';
 import { SafeAreaProvider } from 'react-native-safe-area-context';
 import { createQueryClient } from '@/components/api/query-client';
+import { AuthGate } from '@/components/auth/auth-gate';
 import { appFonts } from '@/components/fonts';
 
-/** Providers and one-time setup only; screens live in `components/screens`. */
+/**
+ * Providers and one-time setup only (fonts, the session check); screens
+ * live in `components/screens` and `components/auth`.
+ */
 export default function RootLayout() {
   const [queryClient] = useState(createQueryClient);
   const [fontsLoaded, fontError] = useFonts(appFonts);
@@ -17,7 +21,9 @@ export default function RootLayout() {
     <SafeAreaProvider>
       <QueryClientProvider client={queryClient}>
         <StatusBar style="light" />
-        <Slot />
+        <AuthGate>
+          <Slot />
+        </AuthGate>
       </QueryClientProvider>
     </SafeAreaProvider>
   );

@@ -1,1 +1,1 @@
-export { AppShell as default } from '@/components/shell/app-shell';
+export { SignedInShell as default } from '@/components/auth/signed-in-shell';

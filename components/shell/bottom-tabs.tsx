@@ -3,11 +3,12 @@ import { useSafeAreaInsets } from 'react-native-safe-area-context';
 import { colors, spacing } from '@/components/theme';
 import { GradedStrip } from '@/components/ui/graded-strip';
 import { NavItem } from './nav-item';
-import { tabs } from './tabs';
+import { useVisibleTabs } from './use-visible-tabs';
 
 /** Phone navigation: a bottom bar under a cold-to-hot edge. */
 export function BottomTabs() {
   const insets = useSafeAreaInsets();
+  const tabs = useVisibleTabs();
   return (
     <View style={styles.bar} testID="nav-bottom-tabs">
       <GradedStrip direction="row" zones={12} thickness={3} />

@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { RefreshControl, ScrollView, StyleSheet, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
+import { AccountMenu } from '@/components/auth/account-menu';
 import { colors, layout, spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';
 import { BackLink, type BackTarget } from './back-link';
@@ -32,6 +33,7 @@ export function ScreenFrame(props: ScreenFrameProps) {
       {wide ? null : (
         <View style={[styles.appBar, { paddingTop: insets.top + spacing.sm }]}>
           <BrandMark />
+          <AccountMenu />
         </View>
       )}
       <ScrollView
@@ -62,6 +64,9 @@ export function ScreenFrame(props: ScreenFrameProps) {
 const styles = StyleSheet.create({
   root: { flex: 1, backgroundColor: colors.background },
   appBar: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    justifyContent: 'space-between',
     backgroundColor: colors.chrome,
     paddingHorizontal: spacing.lg,
     paddingBottom: spacing.sm,

@@ -1,13 +1,15 @@
 import { StyleSheet, View } from 'react-native';
+import { AccountPanel } from '@/components/auth/account-panel';
 import { colors, layout, spacing } from '@/components/theme';
 import { GradedStrip } from '@/components/ui/graded-strip';
 import { AppText } from '@/components/ui/text';
 import { BrandMark, brandLegWidth } from './brand-mark';
 import { NavItem } from './nav-item';
-import { tabs } from './tabs';
+import { useVisibleTabs } from './use-visible-tabs';
 
-/** Wide-screen navigation: a night-slate rail whose edge runs cold to hot. */
+/** Wide-screen navigation: a night-slate rail whose edge runs cold to hot; who is signed in at its foot. */
 export function SideRail() {
+  const tabs = useVisibleTabs();
   return (
     <View style={styles.rail} testID="nav-side-rail">
       <View style={styles.inner}>
@@ -22,6 +24,8 @@ export function SideRail() {
             <NavItem key={tab.name} tab={tab} placement="rail" />
           ))}
         </View>
+        <View style={styles.spacer} />
+        <AccountPanel />
       </View>
       <GradedStrip direction="column" zones={12} thickness={3} />
     </View>
@@ -39,4 +43,5 @@ const styles = StyleSheet.create({
   // Lines up with the wordmark, after the little leg and the gap.
   tagline: { color: colors.chromeText, marginLeft: brandLegWidth + spacing.sm },
   items: { gap: spacing.xs },
+  spacer: { flex: 1 },
 });

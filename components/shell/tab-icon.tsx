@@ -1,11 +1,11 @@
 import { StyleSheet, View } from 'react-native';
 
-export type TabIconName = 'materials' | 'designs' | 'runs' | 'outbox' | 'system';
+export type TabIconName = 'materials' | 'designs' | 'runs' | 'team' | 'outbox' | 'system';
 
 /**
  * Navigation icons drawn with views: stacked zones (materials), a graded
- * leg between plates (designs), a start triangle (runs), an envelope
- * (outbox) and a gauge (system). 24 × 24 px, one colour.
+ * leg between plates (designs), a start triangle (runs), two people
+ * (team), an envelope (outbox) and a gauge (system). 24 × 24 px, one colour.
  */
 export function TabIcon({ name, color }: { name: TabIconName; color: string }) {
   return (
@@ -13,6 +13,7 @@ export function TabIcon({ name, color }: { name: TabIconName; color: string }) {
       {name === 'materials' ? <Layers color={color} /> : null}
       {name === 'designs' ? <Leg color={color} /> : null}
       {name === 'runs' ? <Play color={color} /> : null}
+      {name === 'team' ? <People color={color} /> : null}
       {name === 'outbox' ? <Envelope color={color} /> : null}
       {name === 'system' ? <Gauge color={color} /> : null}
     </View>
@@ -25,6 +26,24 @@ function Layers({ color }: { color: string }) {
       <View style={[styles.layer, styles.layerTop, { backgroundColor: color }]} />
       <View style={[styles.layer, styles.layerMid, { backgroundColor: color }]} />
       <View style={[styles.layer, { backgroundColor: color }]} />
+    </View>
+  );
+}
+
+function Person({ color, style }: { color: string; style: object }) {
+  return (
+    <View style={[styles.person, style]}>
+      <View style={[styles.head, { backgroundColor: color }]} />
+      <View style={[styles.shoulders, { backgroundColor: color }]} />
+    </View>
+  );
+}
+
+function People({ color }: { color: string }) {
+  return (
+    <View style={styles.people}>
+      <Person color={color} style={styles.behind} />
+      <Person color={color} style={styles.front} />
     </View>
   );
 }
@@ -75,6 +94,12 @@ const styles = StyleSheet.create({
   layer: { height: 4, width: 20, borderRadius: 1 },
   layerMid: { width: 16, opacity: 0.8 },
   layerTop: { width: 12, opacity: 0.6 },
+  people: { width: 22, height: 20 },
+  person: { position: 'absolute', alignItems: 'center', gap: 1 },
+  behind: { left: 0, top: 0, opacity: 0.6 },
+  front: { right: 0, top: 2 },
+  head: { width: 7, height: 7, borderRadius: 4 },
+  shoulders: { width: 12, height: 8, borderTopLeftRadius: 6, borderTopRightRadius: 6 },
   legIcon: { width: 20, alignItems: 'center', gap: 1 },
   plate: { width: 20, height: 3, borderRadius: 1 },
   legZone: { width: 8, height: 4 },

@@ -1,5 +1,6 @@
 import type { Href } from 'expo-router';
 import type { UseTabsWithTriggersOptions } from 'expo-router/ui';
+import type { Action } from '@/components/auth/permissions';
 import type { TabIconName } from './tab-icon';
 
 export type TabSpec = {
@@ -8,6 +9,8 @@ export type TabSpec = {
   href: Href;
   label: string;
   icon: TabIconName;
+  /** Shown only to members whose role may take this action (see `useVisibleTabs`). */
+  requires?: Action;
 };
 
 /**
@@ -18,7 +21,8 @@ export const tabs: readonly TabSpec[] = [
   { name: '(materials)', href: '/', label: 'Materials', icon: 'materials' },
   { name: '(designs)', href: '/designs', label: 'Designs', icon: 'designs' },
   { name: '(runs)', href: '/runs', label: 'Runs', icon: 'runs' },
-  { name: 'outbox', href: '/outbox', label: 'Outbox', icon: 'outbox' },
+  { name: 'team', href: '/team', label: 'Team', icon: 'team' },
+  { name: 'outbox', href: '/outbox', label: 'Outbox', icon: 'outbox', requires: 'outbox.read' },
   { name: 'system', href: '/system', label: 'System', icon: 'system' },
 ];
 

@@ -1,0 +1,1 @@
+export { ForgotPasswordScreen as default } from '@/components/auth/forgot-password-screen';

@@ -1,0 +1,1 @@
+export { SignUpScreen as default } from '@/components/auth/sign-up-screen';

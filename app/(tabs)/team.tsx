@@ -1,0 +1,1 @@
+export { TeamScreen as default } from '@/components/screens/team/team-screen';

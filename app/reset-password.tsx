@@ -1,0 +1,1 @@
+export { ResetPasswordScreen as default } from '@/components/auth/reset-password-screen';

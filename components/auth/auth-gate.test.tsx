@@ -1,0 +1,108 @@
+import { useState, type ReactNode } from 'react';
+import { Text } from 'react-native';
+import { QueryClientProvider } from '@tanstack/react-query';
+import { Slot } from 'expo-router';
+import { fireEvent, renderRouter, screen } from 'expo-router/testing-library';
+import { SafeAreaProvider } from 'react-native-safe-area-context';
+import { ScreenFrame } from '@/components/shell/screen-frame';
+import { createTestQueryClient, mockFetch, sessionAs } from '@/components/test-utils';
+import { AuthGate } from './auth-gate';
+import { AuthLayout } from './auth-layout';
+import { SignInScreen } from './sign-in-screen';
+import { SignedInShell } from './signed-in-shell';
+
+const metrics = { frame: { x: 0, y: 0, width: 390, height: 844 }, insets: { top: 0, left: 0, right: 0, bottom: 0 } };
+
+/** The app's root layout, with a test query client (no retries). */
+function Root() {
+  const [client] = useState(createTestQueryClient);
+  return (
+    <SafeAreaProvider initialMetrics={metrics}>
+      <QueryClientProvider client={client}>
+        <AuthGate>
+          <Slot />
+        </AuthGate>
+      </QueryClientProvider>
+    </SafeAreaProvider>
+  );
+}
+
+const page = (text: string) =>
+  function Page(): ReactNode {
+    return <Text>{text}</Text>;
+  };
+
+/** The real layouts and sign-in page; the tab pages are stand-ins. */
+const routes = {
+  _layout: Root,
+  '(auth)/_layout': AuthLayout,
+  '(auth)/sign-in': SignInScreen,
+  '(auth)/sign-up': page('Sign-up page'),
+  '(auth)/forgot-password': page('Forgot page'),
+  '(tabs)/_layout': SignedInShell,
+  '(tabs)/(materials)/_layout': () => <Slot />,
+  '(tabs)/(materials)/index': page('Materials home'),
+  '(tabs)/team': () => (
+    <ScreenFrame title="Team page">
+      <Text>Members</Text>
+    </ScreenFrame>
+  ),
+  '(tabs)/outbox': page('Outbox page'),
+  '(tabs)/system': page('System page'),
+};
+
+const unauthorized = { status: 401, body: { name: 'Unauthorized', message: 'Sign in first.' } };
+
+describe('the auth gate', () => {
+  it('sends the signed-out to the sign-in page and keeps where they were going', async () => {
+    mockFetch(unauthorized);
+    const router = renderRouter(routes, { initialUrl: '/team' });
+
+    expect(await screen.findByRole('heading', { name: 'Sign in' })).toBeOnTheScreen();
+    expect(router.getPathname()).toBe('/sign-in');
+    expect(router.getSearchParams()).toEqual({ next: '/team' });
+    expect(screen.queryByText('Team page')).toBeNull();
+    expect(screen.queryByTestId('nav-bottom-tabs')).toBeNull();
+  });
+
+  it('shows the shell to a signed-in member, with the tabs of their role', async () => {
+    mockFetch({ status: 200, body: sessionAs('grower', 'Greta Hahn') });
+    const router = renderRouter(routes, { initialUrl: '/' });
+
+    expect(await screen.findByText('Materials home')).toBeOnTheScreen();
+    expect(router.getPathname()).toBe('/');
+    expect(screen.getByTestId('nav-bottom-tabs')).toBeOnTheScreen();
+    expect(screen.getByRole('tab', { name: 'Team' })).toBeOnTheScreen();
+    expect(screen.queryByRole('tab', { name: 'Outbox' })).toBeNull();
+  });
+
+  it('gives an admin the Outbox tab', async () => {
+    mockFetch({ status: 200, body: sessionAs('admin') });
+    renderRouter(routes, { initialUrl: '/' });
+
+    expect(await screen.findByRole('tab', { name: 'Outbox' })).toBeOnTheScreen();
+  });
+
+  it('sends a signed-in member away from the sign-in page', async () => {
+    mockFetch({ status: 200, body: sessionAs('viewer') });
+    const router = renderRouter(routes, { initialUrl: '/sign-in?next=/system' });
+
+    expect(await screen.findByText('System page')).toBeOnTheScreen();
+    expect(router.getPathname()).toBe('/system');
+  });
+
+  it('signs out from the phone account menu, back to a plain sign-in page', async () => {
+    const { requests } = mockFetch({ status: 200, body: sessionAs('physicist', 'Piet Jansen') }, { status: 204, body: '' });
+    const router = renderRouter(routes, { initialUrl: '/team' });
+    expect(await screen.findByText('Team page')).toBeOnTheScreen();
+
+    fireEvent.press(screen.getByRole('button', { name: 'Account of Piet Jansen' }));
+    expect(screen.getByTestId('account-menu')).toHaveTextContent(/PHYSICIST.*Northlight Sensors/);
+    fireEvent.press(screen.getByTestId('sign-out'));
+
+    expect(await screen.findByRole('heading', { name: 'Sign in' })).toBeOnTheScreen();
+    expect(router.getPathname()).toBe('/sign-in');
+    expect(router.getSearchParams()).toEqual({});
+    expect(requests.map((r) => `${r.method} ${r.url}`)).toEqual(['GET /api/auth/me', 'POST /api/auth/sign-out']);
+  });
+});

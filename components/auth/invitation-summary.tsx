@@ -1,0 +1,56 @@
+import type { ReactNode } from 'react';
+import { StyleSheet, View } from 'react-native';
+import type { InvitationPreview } from '@/shared/api/auth';
+import { formatDay } from '@/components/format/date';
+import { colors, radii, spacing } from '@/components/theme';
+import { AppText } from '@/components/ui/text';
+import { roleSummaries } from './permissions';
+import { RoleBadge } from './role-badge';
+
+function Line({ label, children }: { label: string; children: ReactNode }) {
+  return (
+    <View style={styles.line}>
+      <AppText variant="caption" tone="muted" style={styles.label}>
+        {label}
+      </AppText>
+      <View style={styles.value}>{children}</View>
+    </View>
+  );
+}
+
+/** Team, role, address and expiry of an invitation, before the account exists. */
+export function InvitationSummary({ preview }: { preview: InvitationPreview }) {
+  return (
+    <View style={styles.card} testID="invitation-summary">
+      <Line label="Team">
+        <AppText variant="bodyStrong">{preview.teamName}</AppText>
+      </Line>
+      <Line label="Role">
+        <RoleBadge role={preview.role} />
+        <AppText variant="caption" tone="muted">
+          {roleSummaries[preview.role]}
+        </AppText>
+      </Line>
+      <Line label="E-mail">
+        <AppText variant="mono">{preview.email}</AppText>
+      </Line>
+      <Line label="Valid until">
+        <AppText>{formatDay(preview.expiresAt)}</AppText>
+      </Line>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  card: {
+    backgroundColor: colors.surface,
+    borderWidth: 1,
+    borderColor: colors.border,
+    borderRadius: radii.lg,
+    padding: spacing.lg,
+    gap: spacing.md,
+  },
+  line: { flexDirection: 'row', gap: spacing.md },
+  label: { width: 76, paddingTop: 3 },
+  value: { flex: 1, gap: spacing.xxs },
+});

@@ -1,0 +1,97 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { router, useLocalSearchParams } from 'expo-router';
+import { acceptInvitationSchema, type InvitationPreview } from '@/shared/api/auth';
+import { useAcceptInvitation, useInvitationPreview } from '@/components/api/auth';
+import { spacing } from '@/components/theme';
+import { LoadingState } from '@/components/ui/state-views';
+import { AuthFrame } from './auth-frame';
+import { AuthLink } from './auth-link';
+import { AccountField } from './form/account-field';
+import { FormAlert } from './form/form-alert';
+import { errorsFrom } from './form/form-errors';
+import { SubmitButton } from './form/submit-button';
+import { useAccountForm } from './form/use-account-form';
+import { InvitationSummary } from './invitation-summary';
+import { useSession } from './session';
+import { SignedInElsewhere } from './signed-in-elsewhere';
+
+const fields = ['displayName', 'password'] as const;
+
+function AcceptForm({ token, preview }: { token: string; preview: InvitationPreview }) {
+  const form = useAccountForm(fields, { displayName: '', password: '' });
+  const accept = useAcceptInvitation();
+  const submit = () => {
+    if (accept.isPending || !form.check(acceptInvitationSchema, { token })) return;
+    accept.mutate({ token, ...form.values }, { onError: form.fail, onSuccess: () => router.replace('/') });
+  };
+  return (
+    <>
+      {form.errors.banner ? (
+        <FormAlert tone="danger" title="Not joined" testID="join-problem">
+          {form.errors.banner}
+        </FormAlert>
+      ) : null}
+      <View style={styles.fields}>
+        <AccountField
+          id="displayName"
+          label="Your name"
+          kind="name"
+          value={form.values.displayName}
+          onChangeText={form.set('displayName')}
+          error={form.errors.fields.displayName}
+          help="As your teammates will see it"
+        />
+        <AccountField
+          id="password"
+          label="Choose a password"
+          kind="new-password"
+          value={form.values.password}
+          onChangeText={form.set('password')}
+          error={form.errors.fields.password}
+          help="At least 10 characters; a few unrelated words work well"
+          onSubmit={submit}
+        />
+      </View>
+      <SubmitButton label={`Join ${preview.teamName}`} busyLabel="Joining…" busy={accept.isPending} onPress={submit} testID="submit-join" />
+    </>
+  );
+}
+
+/** `/join?token=…`: the link from an invitation e-mail. */
+export function JoinScreen() {
+  const { token = '' } = useLocalSearchParams<{ token?: string }>();
+  const session = useSession();
+  // Once this page has made the account, the session belongs to it: no "signed in elsewhere".
+  const [startedSignedIn] = useState(session !== null);
+  const preview = useInvitationPreview(token);
+  const footer = <AuthLink lead="Already a member?" label="Sign in" href="/sign-in" />;
+  if (!token || preview.isError) {
+    return (
+      <AuthFrame title="Invitation not usable" footer={footer}>
+        <FormAlert tone="danger" title="This link does not open an invitation" testID="join-unusable">
+          {preview.error
+            ? errorsFrom(preview.error, []).banner
+            : 'Open the link from your invitation e-mail as it is, or ask an admin of the team to invite you again.'}
+        </FormAlert>
+      </AuthFrame>
+    );
+  }
+  if (!preview.data) {
+    return (
+      <AuthFrame title="Join a team">
+        <LoadingState label="Opening the invitation…" />
+      </AuthFrame>
+    );
+  }
+  return (
+    <AuthFrame title={`Join ${preview.data.teamName}`} subtitle="Choose your name and password; you are signed in straight away." footer={footer}>
+      <InvitationSummary preview={preview.data} />
+      {startedSignedIn && session ? <SignedInElsewhere session={session} /> : <AcceptForm token={token} preview={preview.data} />}
+    </AuthFrame>
+  );
+}
+
+const styles = StyleSheet.create({
+  fields: { gap: spacing.lg },
+});
