@@ -70,6 +70,13 @@ describe('uploading a measured family in a real browser', () => {
   });
 
   afterAll(async () => {
+    // Against a long-lived stack, keep the active list tidy: archive (never delete) what this test made.
+    if (session) {
+      const listed = familiesResponseSchema.parse(await getJsonAs(session, '/api/families'));
+      for (const f of listed.families.filter((family) => family.name === familyName)) {
+        await session.context.request.post(`${baseUrl}/api/families/${f.id}/archive`, { headers: { Origin: baseUrl } });
+      }
+    }
     await session?.close();
   });
 
