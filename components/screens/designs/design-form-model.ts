@@ -114,8 +114,9 @@ export function humanize(field: string, message: string): string {
   if (!label) return message;
   const engine = /^[\w.[\]]+: (.*)$/s.exec(message);
   if (engine) return `${label}: ${engine[1]}`;
-  if (message.startsWith(field)) return `${label}${message.slice(field.length)}`;
-  return message;
+  const rest = message.startsWith(field) ? `${label}${message.slice(field.length)}` : message;
+  // Other fields named inside the message ("… must be below hotSide") by their labels too.
+  return rest.replace(/\b(hotSide|coldSide|minPerCm3|maxPerCm3|lengthMm)\b/g, (code) => labelOf(code) ?? code);
 }
 
 const familyMissing = 'Choose a material family';

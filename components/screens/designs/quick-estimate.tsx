@@ -63,7 +63,8 @@ export function QuickEstimate({ values, onInvalid }: QuickEstimateProps) {
   );
 
   const run = () => {
-    const checked = validateDesign(values);
+    // The name does not change the physics: an unnamed draft can be estimated.
+    const checked = validateDesign({ ...values, name: values.name.trim() || 'Unnamed draft' });
     if (!checked.ok) {
       onInvalid();
       setState({ kind: 'error', message: 'Fix the fields marked in the form first.' });

@@ -38,13 +38,13 @@ export function doping(perCm3: number): string {
   return withUnit(formatScientific(perCm3), 'cm⁻³');
 }
 
-/** "0.8 s", "42 s", "3 min 05 s", "2 h 14 min". */
+/** "0.8 s", "42.3 s", "3 min 05 s", "2 h 14 min". */
 export function formatDuration(seconds: number): string {
   if (!Number.isFinite(seconds) || seconds < 0) return '–';
-  if (seconds < 10) return `${seconds.toFixed(1)} s`;
-  if (seconds < 60) return `${Math.round(seconds)} s`;
-  const minutes = Math.floor(seconds / 60);
-  if (minutes < 60) return `${minutes} min ${String(Math.round(seconds % 60)).padStart(2, '0')} s`;
+  if (seconds < 59.95) return `${seconds.toFixed(1)} s`;
+  const whole = Math.round(seconds);
+  const minutes = Math.floor(whole / 60);
+  if (minutes < 60) return `${minutes} min ${String(whole % 60).padStart(2, '0')} s`;
   return `${Math.floor(minutes / 60)} h ${String(minutes % 60).padStart(2, '0')} min`;
 }
 
