@@ -1,4 +1,5 @@
 import { optimizeLeg, type CheckedCase, type OptimizeResult, type OptimizerState } from '../engine';
+import { mulberry32 } from '../random';
 
 /**
  * Multi-start search over the doping profile. The engine's optimiser is
@@ -36,17 +37,11 @@ export type SearchOptions = {
 
 export type SearchResult = { result: OptimizeResult; stopped: boolean; startsDone: number; bestStart: number; evaluations: number };
 
-/** mulberry32 seeded from a string: small, fast, reproducible. */
+/** A generator per (run, start): the seed string and the start index hashed into mulberry32's seed. */
 function generator(seed: string, start: number): () => number {
   let a = start * 0x9e3779b1;
   for (let i = 0; i < seed.length; i += 1) a = Math.imul(a ^ seed.charCodeAt(i), 0x85ebca6b) >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
+  return mulberry32(a);
 }
 
 /** A random profile within the bounds (sorted like the best so far when the profile must be monotone). */

@@ -1,4 +1,5 @@
 import { familyFromMaterial, propertiesAt, type MaterialInput } from '../../../shared/engine';
+import { mulberry32 } from '../../../shared/random';
 
 /**
  * Demo data for an invented lab: Northlight Sensors' detector-cooling group,
@@ -32,18 +33,6 @@ const modelFamilies: DemoFamily[] = [
   },
 ];
 
-/** Small deterministic generator (mulberry32), so every seed writes the same demo table. */
-function random(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 /**
  * An invented "measured" table: the p-type model sampled on an uneven grid
  * (no sample between 3e19 and 1.2e20 cm⁻³, so the upload preview shows a
@@ -51,7 +40,7 @@ function random(seed: number): () => number {
  */
 function measuredDemo(): DemoFamily {
   const model = familyFromMaterial(modelFamilies[0]!.definition);
-  const rnd = random(7);
+  const rnd = mulberry32(7);
   const jitter = (v: number, rel: number): number => v * (1 + rel * (2 * rnd() - 1));
   const dopings = [1e18, 2e18, 4e18, 8e18, 1.5e19, 3e19, 1.2e20];
   const temperatures = [220, 250, 280, 300, 330, 360, 400];
