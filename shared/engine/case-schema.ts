@@ -75,6 +75,15 @@ export const dopingSchema = z.union([doping('doping'), z.strictObject({ x: z.arr
   error: 'doping must be a number (cm⁻³) or {x: [fractions from the cold end], perCm3: [...]}',
 });
 
+/**
+ * Specific electrical contact resistivity of each metal–semiconductor
+ * junction [Ω·m²]. Good contacts are 1e-10 to 1e-9 Ω·m² (1e-6 to 1e-5 Ω·cm²);
+ * anything above 1e-6 Ω·m² is a unit slip (Ω·cm² is 1e-4 Ω·m²).
+ */
+export const contactResistivitySchema = number('contactResistivity')
+  .min(0, { error: 'contactResistivity must not be negative' })
+  .max(1e-6, { error: 'contactResistivity above 1e-6 Ω·m² is implausible: it is in Ω·m² (good contacts are 1e-10 to 1e-9 Ω·m²; 1 Ω·cm² = 1e-4 Ω·m²)' });
+
 export const caseSchema = z.strictObject({
   /** Free text for people; the engine ignores it. */
   description: z.string({ error: 'description must be text' }).max(2000, { error: 'description is limited to 2000 characters' }).optional(),
@@ -97,6 +106,8 @@ export const caseSchema = z.strictObject({
     .max(41, { error: 'controlPoints must be at most 41' })
     .optional(),
   monotone: z.boolean({ error: 'monotone must be true or false' }).optional(),
+  /** Ω·m² per junction (both ends of the leg); default 0, ideal contacts. */
+  contactResistivity: contactResistivitySchema.optional(),
 });
 
 export type CaseInput = z.infer<typeof caseSchema>;

@@ -42,6 +42,8 @@ export type CheckedCase = {
   /** @default 'maxDeltaT' */
   objective: Objective;
   leg: CheckedLeg;
+  /** Specific contact resistivity of each junction [Ω·m²]; present only when given and > 0. */
+  contactResistivity?: number;
 };
 
 /** Default number of doping nodes for optimize. */
@@ -162,7 +164,8 @@ export function parseCase(json: unknown, mode: Mode = 'optimize'): CheckedCase {
   if (input.segments && input.material) throw new CaseError('segments', 'give either segments or a material, not both');
   if (!input.segments && !input.material) throw new CaseError('material', 'give either segments or a material');
   checkConditions(input, mode, objective);
-  const base = { mode, hotSide: input.hotSide, length: input.length, area: input.area, current: input.current, coldSide: input.coldSide, objective };
+  const contact = input.contactResistivity ? { contactResistivity: input.contactResistivity } : {};
+  const base = { mode, hotSide: input.hotSide, length: input.length, area: input.area, current: input.current, coldSide: input.coldSide, objective, ...contact };
   const heatLoad = mode === 'solve' ? (input.coldSide === undefined ? (input.heatLoad ?? 0) : undefined) : objective === 'maxHeatLoad' ? undefined : (input.heatLoad ?? 0);
 
   if (input.segments) {

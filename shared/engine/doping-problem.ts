@@ -4,7 +4,7 @@
  * layout, and whether the current is fixed.
  */
 import type { Conditions } from './evaluate-design';
-import { equallySpacedNodes, gradedLeg, type Leg } from './leg-profile';
+import { equallySpacedNodes, gradedLeg, withContacts, type Leg } from './leg-profile';
 import type { MaterialFamily } from './material-family';
 
 export type DopingProblem = {
@@ -22,6 +22,8 @@ export type DopingProblem = {
   current?: number;
   /** Relative accuracy of each solve. */
   tolerance: number;
+  /** Specific contact resistivity of each junction [Ω·m²]; absent = ideal contacts. */
+  contactResistivity?: number;
 };
 
 /** Counts leg solves across every phase of a run. */
@@ -32,7 +34,7 @@ export function nodeFractions(problem: DopingProblem): number[] {
 }
 
 export function legFor(problem: DopingProblem, x: readonly number[], log10: readonly number[]): Leg {
-  return gradedLeg(problem.length, problem.area, problem.family, x, log10);
+  return withContacts(gradedLeg(problem.length, problem.area, problem.family, x, log10), problem.contactResistivity);
 }
 
 /** Whether the current is an optimisation variable (free, and not fixed by maxCop's conditions). */

@@ -15,6 +15,14 @@
  * independent cross-check.
  * Constant-property sections have a polynomial solution (the system matrix
  * is nilpotent), which a fifth-order step reproduces exactly.
+ *
+ * Contacts (leg.contactResistivity = ρc > 0): each end is a junction of zero
+ * thickness with resistance ρc/A and no temperature drop. Its Joule heat
+ * J²ρc per unit area is released at the junction, so q jumps by J²ρc at
+ * x = 0 (the heat entering the leg is the heat drawn from the load plus the
+ * cold contact's Joule heat) and again at x = L, and V by J·ρc at each end.
+ * The coldFlux argument and the returned flux and voltage are then the
+ * junction-side values: Qc/A, Qh/A and the voltage across leg and contacts.
  */
 import type { Leg, LegSection } from './leg-profile';
 import type { Properties } from './material-family';
@@ -99,6 +107,11 @@ export function integrateLeg(leg: Leg, currentDensity: number, coldTemperature: 
   let T = coldTemperature;
   let q = coldFlux;
   let V = 0;
+  const contact = leg.contactResistivity ?? 0;
+  if (contact > 0) {
+    q += J * J * contact;
+    V += J * contact;
+  }
   let steps = 0;
   let rejected = 0;
   let evaluations = 0;
@@ -201,6 +214,10 @@ export function integrateLeg(leg: Leg, currentDensity: number, coldTemperature: 
       }
     }
     onPoint?.(x, T, q, V, s);
+  }
+  if (contact > 0) {
+    q += J * J * contact;
+    V += J * contact;
   }
   return finish('ok', leg.length);
 }

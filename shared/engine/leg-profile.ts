@@ -29,6 +29,13 @@ export type Leg = {
   sections: LegSection[];
   /** Whether a doping-controlled family is used (the profile then reports n). */
   graded: boolean;
+  /**
+   * Specific electrical contact resistivity of each end's metal–semiconductor
+   * junction [Ω·m²]; absent or 0 = ideal contacts. Each end adds ρc/A to the
+   * leg's resistance, and its Joule heat I²ρc/A is released at that
+   * junction (see integrate.ts and PHYSICS.md, "Contacts").
+   */
+  contactResistivity?: number;
 };
 
 export type Segment = { fraction: number; seebeck: number; sigma: number; kappa: number };
@@ -90,4 +97,10 @@ export function profileAt(x: readonly number[], log10Doping: readonly number[], 
     }
   }
   return log10Doping[log10Doping.length - 1];
+}
+
+/** The same leg with contacts of specific resistivity ρc [Ω·m²] at both ends (0 = ideal contacts, the leg itself). */
+export function withContacts(leg: Leg, contactResistivity: number | undefined): Leg {
+  if (!contactResistivity) return leg;
+  return { ...leg, contactResistivity };
 }

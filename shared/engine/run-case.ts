@@ -8,7 +8,7 @@ import { CaseError } from './case-error';
 import type { CheckedCase } from './check-case';
 import type { Conditions, DesignScore, Objective } from './evaluate-design';
 import { nodeFractions, type Counter, type DopingProblem } from './doping-problem';
-import { gradedLeg, profileAt, segmentedLeg, type Leg, type Segment } from './leg-profile';
+import { gradedLeg, profileAt, segmentedLeg, withContacts, type Leg, type Segment } from './leg-profile';
 import { optimizeDoping } from './optimize-doping';
 import { bestSingleSegment, optimizeSegments } from './optimize-segments';
 import { nodeSensitivities, type NodeSensitivity } from './sensitivity';
@@ -80,9 +80,9 @@ export type OptimizeResult = CaseSolution & {
 const defaultClock = (): number => (typeof performance !== 'undefined' ? performance.now() : Date.now());
 
 function buildLeg(c: CheckedCase): Leg {
-  if (c.leg.kind === 'segments') return segmentedLeg(c.length, c.area, c.leg.segments);
+  if (c.leg.kind === 'segments') return withContacts(segmentedLeg(c.length, c.area, c.leg.segments), c.contactResistivity);
   const doping = c.leg.doping ?? { x: [0, 1], log10: [0, 0] };
-  return gradedLeg(c.length, c.area, c.leg.family, doping.x, doping.log10);
+  return withContacts(gradedLeg(c.length, c.area, c.leg.family, doping.x, doping.log10), c.contactResistivity);
 }
 
 function strip(s: LegSolution): CaseSolution {
@@ -162,7 +162,16 @@ const checkpoint = (log10: readonly number[], current: number): OptimizerState =
 function optimizeSegmented(c: CheckedCase, options: OptimizeOptions, tolerance: number): Omit<OptimizeResult, 'seconds'> {
   const material = c.leg.kind === 'family' && c.leg.material.kind === 'constant' ? c.leg.material : undefined;
   const segments: Segment[] = c.leg.kind === 'segments' ? c.leg.segments : [{ fraction: 1, seebeck: material?.seebeck ?? 0, sigma: material?.sigma ?? 1, kappa: material?.kappa ?? 1 }];
-  const problem = { segments, length: c.length, area: c.area, conditions: conditionsOf(c), freeFractions: c.leg.kind === 'segments' && c.leg.freeFractions, current: c.current, tolerance };
+  const problem = {
+    segments,
+    length: c.length,
+    area: c.area,
+    conditions: conditionsOf(c),
+    freeFractions: c.leg.kind === 'segments' && c.leg.freeFractions,
+    current: c.current,
+    tolerance,
+    contactResistivity: c.contactResistivity,
+  };
   if (options.start && options.start.kind !== 'segments') throw new CaseError('start', 'a doping checkpoint cannot resume a segmented leg');
   if (options.start && options.start.fractions.length !== segments.length) throw new CaseError('start.fractions', `needs one fraction per segment (${segments.length})`);
   const phase = problem.freeFractions ? 'fractions' : 'current';
@@ -174,7 +183,7 @@ function optimizeSegmented(c: CheckedCase, options: OptimizeOptions, tolerance: 
   if (!opt.score.feasible) throw new CaseError(c.objective === 'maxCop' ? 'heatLoad' : 'hotSide', 'no current gives a steady state for these conditions');
   const single = segments.length > 1 && c.leg.kind === 'segments' ? bestSingleSegment(problem) : undefined;
   const fitted = segments.map((s, k) => ({ ...s, fraction: opt.fractions[k] }));
-  const solution = finalSolution(c, segmentedLeg(c.length, c.area, fitted), opt.score, tolerance);
+  const solution = finalSolution(c, withContacts(segmentedLeg(c.length, c.area, fitted), c.contactResistivity), opt.score, tolerance);
   return {
     ...solution,
     objective: { name: c.objective, value: opt.score.value },
@@ -205,6 +214,7 @@ function optimizeDoped(c: CheckedCase, options: OptimizeOptions, tolerance: numb
     monotone: leg.monotone,
     current: c.current,
     tolerance,
+    contactResistivity: c.contactResistivity,
   };
   const x = nodeFractions(problem);
   // Starting points besides the baselines: a checkpoint, else a doping given in the case.
@@ -230,7 +240,7 @@ function optimizeDoped(c: CheckedCase, options: OptimizeOptions, tolerance: numb
     shouldStop: options.shouldStop,
     onProgress: (p) => options.onProgress?.({ phase: 'profile', iteration: p.iteration, objective: p.objective, best: p.best, state: checkpoint(p.state.log10, p.state.current) }),
   });
-  const build = (log10: readonly number[]) => gradedLeg(c.length, c.area, leg.family, x, log10);
+  const build = (log10: readonly number[]) => withContacts(gradedLeg(c.length, c.area, leg.family, x, log10), c.contactResistivity);
   const solution = finalSolution(c, build(opt.log10), opt.score, tolerance);
   const sensitivity = nodeSensitivities({
     x,

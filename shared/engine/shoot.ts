@@ -173,9 +173,11 @@ export function shootColdSide(leg: Leg, currentDensity: number, hotSide: number,
   const J = currentDensity;
   // Constant properties: T(L) = Tc·(1 + a) − b exactly (see PHYSICS.md).
   // Properties averaged at Th first, then again at the mean temperature.
+  // Contacts: the flux entering the leg includes the cold contact's Joule heat.
+  const legFlux = coldFlux + J * J * (leg.contactResistivity ?? 0);
   const estimate = (avg: LegAverages) => {
     const a = (avg.seebeck * J * L) / avg.kappa;
-    const b = (coldFlux * L) / avg.kappa + (J * J * avg.resistivity * L * L) / (2 * avg.kappa);
+    const b = (legFlux * L) / avg.kappa + (J * J * avg.resistivity * L * L) / (2 * avg.kappa);
     return { a, tc: (hotSide + b) / (1 + a) };
   };
   const atHot = legAverages(leg, hotSide);
@@ -205,7 +207,7 @@ export function shootHeatLoad(leg: Leg, currentDensity: number, hotSide: number,
   const J = currentDensity;
   const a = (avg.seebeck * J * L) / avg.kappa;
   const fluxScale = legFluxScale(leg, hotSide, J);
-  const guess = (avg.kappa * (coldSide * (1 + a) - hotSide) - 0.5 * J * J * avg.resistivity * L * L) / L;
+  const guess = (avg.kappa * (coldSide * (1 + a) - hotSide) - 0.5 * J * J * avg.resistivity * L * L) / L - J * J * (leg.contactResistivity ?? 0);
   // The flux scale bounds any physical heat flux by orders of magnitude.
   const bound = 1e3 * fluxScale + Math.abs(guess);
   const r = solveUnknown(
