@@ -11,6 +11,13 @@
  *   });
  *   const solution = solveLeg(parseCase(json, 'solve'));
  *
+ *   // Operating curves, couples and modules (pure, synchronous, tens of ms):
+ *   const curve = operatingCurve(parseLegDefinition(legJson, 300), { hotSide: 300, deltaT: 40 }, { points: 40, currentLimit: 6 });
+ *   const m = { p, n, couples: 31, coldPlateResistance: 0.1, hotPlateResistance: 0.05 };
+ *   moduleCurve(m, { hotSide: 300, coldSide: 260 });   // versus current
+ *   moduleDeltaTCurve(m, { hotSide: 300 });             // versus ΔT at each ΔT's current of maximum Qc
+ *   moduleTrade(m, { hotSide: 300, deltaT: 40 });       // the same leg area as 1, 2, 5, … couples
+ *
  * Physics, numerics and the case format: PHYSICS.md beside this file.
  */
 export { CaseError } from './case-error';
@@ -29,3 +36,19 @@ export { figureOfMerit } from './material-family';
 export { propertiesAt, ztOptimalDoping } from './family-helpers';
 export type { LocalProperties } from './family-helpers';
 export type { BandParameters } from './band-model';
+export { withContacts } from './leg-profile';
+export type { Leg } from './leg-profile';
+export { contactResistivitySchema } from './case-schema';
+export { operatingCurve, coupleCurve, moduleCurve, moduleDeltaTCurve, moduleTrade, legFromDefinition, defaultTradeCouples } from './module';
+export type { LegDefinition, CoupleDefinition, ModuleDefinition, TradeOptions, TradeRow, ModuleTrade } from './module';
+export { DEFAULT_CURVE_POINTS } from './operating-curve';
+export type { CurveConditions, CurveOptions, OperatingCurve, OperatingPoint } from './operating-curve';
+export { DEFAULT_DELTA_T_POINTS } from './delta-t-curve';
+export type { DeltaTCurve, DeltaTMode, DeltaTOptions } from './delta-t-curve';
+export type { DevicePoint } from './device';
+export { legDefinitionSchema, moduleLegSchema, curvesCaseSchema, moduleCaseSchema, parseLegDefinition, parseCurvesCase, parseModuleCase } from './device-case';
+export type { LegDefinitionInput, CurvesCaseInput, ModuleCaseInput, CurvesCase, ModuleCase } from './device-case';
+export { runCurves, runModule } from './run-device-case';
+export type { CurvesResult, ModuleResult } from './run-device-case';
+export { legsFromRun } from './run-legs';
+export type { RunLegs, RunResultLegs } from './run-legs';

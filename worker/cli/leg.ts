@@ -1,5 +1,6 @@
 /**
  * `npm run -s leg -- solve FILE` / `npm run -s leg -- optimize FILE`
+ * `npm run -s leg -- curves FILE` / `npm run -s leg -- module FILE`
  *
  * Reads one JSON case, prints one JSON object on stdout. Invalid input
  * (unreadable file, bad JSON, a field out of range, a case with no steady
@@ -8,9 +9,26 @@
  * The contract and the case fields are in shared/engine/PHYSICS.md.
  */
 import { readFileSync } from 'node:fs';
-import { CaseError, optimizeLeg, parseCase, solveLeg } from '../../shared/engine';
+import { CaseError, optimizeLeg, parseCase, parseCurvesCase, parseModuleCase, runCurves, runModule, solveLeg } from '../../shared/engine';
 
-const USAGE = 'usage: npm run -s leg -- solve|optimize FILE';
+const USAGE = 'usage: npm run -s leg -- solve|optimize|curves|module FILE';
+const COMMANDS = ['solve', 'optimize', 'curves', 'module'] as const;
+type Command = (typeof COMMANDS)[number];
+
+const isCommand = (c: string | undefined): c is Command => (COMMANDS as readonly (string | undefined)[]).includes(c);
+
+function run(command: Command, json: unknown): unknown {
+  switch (command) {
+    case 'solve':
+      return solveLeg(parseCase(json, 'solve'));
+    case 'optimize':
+      return optimizeLeg(parseCase(json, 'optimize'));
+    case 'curves':
+      return runCurves(parseCurvesCase(json));
+    case 'module':
+      return runModule(parseModuleCase(json));
+  }
+}
 
 class InputError extends Error {}
 
@@ -35,12 +53,10 @@ function readCase(file: string): unknown {
 
 function main(argv: string[]): void {
   const [command, file, ...rest] = argv;
-  if (command !== 'solve' && command !== 'optimize') fail(2, `command: expected solve or optimize, got ${command ?? 'nothing'} (${USAGE})`);
+  if (!isCommand(command)) fail(2, `command: expected solve, optimize, curves or module, got ${command ?? 'nothing'} (${USAGE})`);
   if (!file || rest.length > 0) fail(2, `FILE: give exactly one case file (${USAGE})`);
   try {
-    const json = readCase(file);
-    const checked = parseCase(json, command);
-    const result = command === 'solve' ? solveLeg(checked) : optimizeLeg(checked);
+    const result = run(command, readCase(file));
     process.stdout.write(`${JSON.stringify(result, null, 2)}\n`);
   } catch (e) {
     if (e instanceof CaseError || e instanceof InputError) fail(2, e.message);
