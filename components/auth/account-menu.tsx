@@ -34,7 +34,7 @@ export function AccountMenu() {
       </Pressable>
       <Modal visible={open} transparent animationType="fade" onRequestClose={close}>
         <Pressable style={styles.backdrop} onPress={close} accessibilityLabel="Close the account menu" />
-        <View style={[styles.card, { top: insets.top + spacing.xxxl }]} testID="account-menu" role="dialog" aria-label="Account">
+        <View style={[styles.card, { top: insets.top + spacing.xxxl + spacing.sm }]} testID="account-menu" role="dialog" aria-label="Account">
           <View style={styles.who}>
             <Initials name={user.displayName} size={40} />
             <View style={styles.names}>

@@ -3,7 +3,7 @@ import { ScrollView, StyleSheet, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 import { BrandMark } from '@/components/shell/brand-mark';
 import { useIsWide } from '@/components/shell/use-is-wide';
-import { colors, spacing } from '@/components/theme';
+import { colors, radii, spacing } from '@/components/theme';
 import { GradedStrip } from '@/components/ui/graded-strip';
 import { AppText } from '@/components/ui/text';
 
@@ -78,7 +78,7 @@ export function AuthFrame({ title, subtitle, children, footer }: AuthFrameProps)
             </AppText>
             {subtitle ? <AppText tone="muted">{subtitle}</AppText> : null}
           </View>
-          {children}
+          <View style={styles.card}>{children}</View>
           {footer ? <View style={styles.footer}>{footer}</View> : null}
         </View>
       </ScrollView>
@@ -102,5 +102,13 @@ const styles = StyleSheet.create({
   centerWide: { flexGrow: 1, justifyContent: 'center', padding: spacing.xxl },
   column: { width: '100%', maxWidth: 420, alignSelf: 'center', gap: spacing.lg },
   headings: { gap: spacing.xxs },
-  footer: { gap: spacing.sm, paddingTop: spacing.xs },
+  card: {
+    gap: spacing.lg,
+    padding: spacing.lg,
+    borderRadius: radii.lg,
+    borderWidth: 1,
+    borderColor: colors.border,
+    backgroundColor: colors.surface,
+  },
+  footer: { gap: spacing.sm, paddingHorizontal: spacing.xs },
 });

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { router, useLocalSearchParams } from 'expo-router';
-import { acceptInvitationSchema, type InvitationPreview } from '@/shared/api/auth';
+import { acceptInvitationSchema } from '@/shared/api/auth';
 import { useAcceptInvitation, useInvitationPreview } from '@/components/api/auth';
 import { spacing } from '@/components/theme';
 import { LoadingState } from '@/components/ui/state-views';
@@ -18,7 +18,7 @@ import { SignedInElsewhere } from './signed-in-elsewhere';
 
 const fields = ['displayName', 'password'] as const;
 
-function AcceptForm({ token, preview }: { token: string; preview: InvitationPreview }) {
+function AcceptForm({ token }: { token: string }) {
   const form = useAccountForm(fields, { displayName: '', password: '' });
   const accept = useAcceptInvitation();
   const submit = () => {
@@ -53,7 +53,7 @@ function AcceptForm({ token, preview }: { token: string; preview: InvitationPrev
           onSubmit={submit}
         />
       </View>
-      <SubmitButton label={`Join ${preview.teamName}`} busyLabel="Joining…" busy={accept.isPending} onPress={submit} testID="submit-join" />
+      <SubmitButton label="Accept and join" busyLabel="Joining…" busy={accept.isPending} onPress={submit} testID="submit-join" />
     </>
   );
 }
@@ -85,9 +85,13 @@ export function JoinScreen() {
     );
   }
   return (
-    <AuthFrame title={`Join ${preview.data.teamName}`} subtitle="Choose your name and password; you are signed in straight away." footer={footer}>
+    <AuthFrame
+      title="You are invited"
+      subtitle={`to ${preview.data.teamName}. Choose your name and a password; you are signed in straight away.`}
+      footer={footer}
+    >
       <InvitationSummary preview={preview.data} />
-      {startedSignedIn && session ? <SignedInElsewhere session={session} /> : <AcceptForm token={token} preview={preview.data} />}
+      {startedSignedIn && session ? <SignedInElsewhere session={session} /> : <AcceptForm token={token} />}
     </AuthFrame>
   );
 }

@@ -146,3 +146,54 @@ export async function getJsonAs(session: BrowserSession, path: string): Promise<
   if (!response.ok()) throw new Error(`GET ${path} answered ${response.status()}`);
   return response.json();
 }
+
+/** Either navigation (side rail or bottom tabs), whichever the width shows. */
+export function shellNav(page: Page): Locator {
+  return page.locator('[data-testid="nav-side-rail"], [data-testid="nav-bottom-tabs"]').filter({ visible: true }).first();
+}
+
+/**
+ * Signs in through the sign-in page, as a person would, and waits for the
+ * shell. Every attempt counts against the account's limit (8 per 15 min):
+ * prefer `signInAs` once per session, or fresh invited accounts.
+ */
+export async function signIn(page: Page, email: string, password = demoPassword): Promise<void> {
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByTestId('field-email').filter({ visible: true }).fill(email);
+  await page.getByTestId('field-password').filter({ visible: true }).fill(password);
+  await page.getByTestId('submit-sign-in').filter({ visible: true }).click();
+  await shellNav(page).waitFor({ state: 'visible', timeout: 30_000 });
+}
+
+/** POST JSON with the session's cookies and the app's Origin; answers the parsed body (or null for 204). */
+export async function postJsonAs(session: BrowserSession, path: string, data: unknown): Promise<unknown> {
+  const response = await session.context.request.post(`${baseUrl}${path}`, { data, headers: { Origin: baseUrl } });
+  if (!response.ok()) throw new Error(`POST ${path} answered ${response.status()}: ${await response.text()}`);
+  return response.status() === 204 ? null : response.json();
+}
+
+export type CaughtMail = { to: string[]; subject: string; text: string; receivedAt: string };
+
+/**
+ * The newest e-mail to `address` in the mail catcher's outbox, read with an
+ * admin's session (`GET /api/outbox` is admin-only); waits for it to arrive.
+ */
+export async function waitForMail(adminSession: BrowserSession, address: string, subject: RegExp, timeout = 20_000): Promise<CaughtMail> {
+  const deadline = Date.now() + timeout;
+  for (;;) {
+    const { messages } = (await getJsonAs(adminSession, '/api/outbox')) as { messages: CaughtMail[] };
+    const mine = messages
+      .filter((m) => m.to.some((to) => to.toLowerCase() === address.toLowerCase()) && subject.test(m.subject))
+      .sort((a, b) => Date.parse(b.receivedAt) - Date.parse(a.receivedAt));
+    if (mine.length > 0) return mine[0];
+    if (Date.now() > deadline) throw new Error(`no e-mail to ${address} matching ${subject} within ${timeout} ms`);
+    await new Promise((resolve) => setTimeout(resolve, 300));
+  }
+}
+
+/** The first link to `path` of this app in a text (e.g. `/join`), with its query. */
+export function linkIn(text: string, path: string): string {
+  const found = text.match(new RegExp(`https?://[^\\s]+${path}\\?token=[A-Za-z0-9_-]+`));
+  if (!found) throw new Error(`no ${path} link in: ${text}`);
+  return found[0];
+}

@@ -89,7 +89,7 @@ const styles = StyleSheet.create({
   box: {
     flexDirection: 'row',
     alignItems: 'center',
-    backgroundColor: colors.surface,
+    backgroundColor: colors.field,
     borderWidth: 1,
     borderColor: colors.border,
     borderRadius: radii.md,

@@ -61,7 +61,9 @@ export function InviteForm() {
         <RolePicker label="Role of the new member" value={role} onChange={setRole} disabled={invite.isPending} />
         {form.errors.fields.role ? <AppText tone="danger">{form.errors.fields.role}</AppText> : null}
       </View>
-      <RowButton label={invite.isPending ? 'Sending…' : 'Send invitation'} tone="primary" onPress={submit} disabled={invite.isPending} testID="send-invitation" />
+      <View style={styles.submit}>
+        <RowButton label={invite.isPending ? 'Sending…' : 'Send invitation'} tone="primary" onPress={submit} disabled={invite.isPending} testID="send-invitation" />
+      </View>
     </View>
   );
 }
@@ -69,4 +71,5 @@ export function InviteForm() {
 const styles = StyleSheet.create({
   form: { gap: spacing.lg, alignItems: 'stretch' },
   roles: { gap: spacing.xs },
+  submit: { flexDirection: 'row' },
 });

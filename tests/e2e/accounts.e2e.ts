@@ -1,0 +1,251 @@
+import { request, type Page } from 'playwright-core';
+import { familiesResponseSchema } from '../../shared/api/families';
+import {
+  baseUrl,
+  getJsonAs,
+  linkIn,
+  openBrowser,
+  postJsonAs,
+  saveScreenshot,
+  shellNav,
+  signIn,
+  signInAs,
+  waitForMail,
+  waitForVisibleText,
+  type BrowserSession,
+} from './browser';
+
+jest.setTimeout(240_000);
+
+const admin = 'ada@northlight.example';
+const teamName = 'Northlight Sensors — detector cooling group';
+/** Fresh addresses every run, so repeated runs never meet the sign-in limit of an old account. */
+const run = Date.now().toString(36);
+const fresh = (who: string) => `${who}-${run}@northlight.example`;
+
+const visible = (page: Page, testId: string) => page.getByTestId(testId).filter({ visible: true });
+
+/** An invited, accepted member with a known password, made through the API (no browser). */
+async function makeMember(adminSession: BrowserSession, email: string, password: string): Promise<void> {
+  await postJsonAs(adminSession, '/api/team/invitations', { email, role: 'viewer' });
+  const token = new URL(linkIn((await waitForMail(adminSession, email, /invites you/)).text, '/join')).searchParams.get('token');
+  const api = await request.newContext();
+  const answer = await api.post(`${baseUrl}/api/invitations/accept`, {
+    data: { token, password, displayName: `Test ${email.split('@')[0]}` },
+    headers: { Origin: baseUrl },
+  });
+  await api.dispose();
+  if (answer.status() !== 201) throw new Error(`accepting the invitation answered ${answer.status()}`);
+}
+
+describe('accounts in a real browser', () => {
+  let adminSession: BrowserSession;
+
+  beforeAll(async () => {
+    adminSession = await openBrowser();
+    await signInAs(adminSession, admin);
+  });
+
+  afterAll(async () => {
+    await adminSession?.close();
+  });
+
+  it('an admin invites a grower, who joins through the e-mailed link and sees what a grower may', async () => {
+    const grower = fresh('grower');
+    const adminPage = await adminSession.newPage('desktop');
+    await adminPage.goto(`${baseUrl}/team`);
+    await visible(adminPage, 'invite-form').waitFor();
+    await visible(adminPage, 'field-invite-email').fill(grower);
+    await adminPage.getByRole('radio', { name: 'Grower' }).filter({ visible: true }).click();
+    await visible(adminPage, 'send-invitation').click();
+    await visible(adminPage, 'invite-sent').waitFor();
+    await expectText(visible(adminPage, `invitation-${grower}`), /GROWER[\s\S]*Pending/);
+    await saveScreenshot(adminPage, 'team-admin-desktop');
+
+    const mail = await waitForMail(adminSession, grower, /invites you to/);
+    const link = linkIn(mail.text, '/join');
+    expect(link.startsWith(`${baseUrl}/join?token=`)).toBe(true);
+
+    const newcomer = await openBrowser();
+    try {
+      const page = await newcomer.newPage('phone');
+      await page.goto(link);
+      const summary = visible(page, 'invitation-summary');
+      await summary.waitFor();
+      await expectText(summary, new RegExp(`${teamName}[\\s\\S]*GROWER[\\s\\S]*${grower}`));
+      await saveScreenshot(page, 'join-phone');
+      await visible(page, 'field-displayName').fill('Gus Newgrow');
+      await visible(page, 'field-password').fill('a fresh grower passphrase');
+      await visible(page, 'submit-join').click();
+
+      await shellNav(page).waitFor({ state: 'visible', timeout: 30_000 });
+      await page.waitForURL(`${baseUrl}/`);
+      const families = familiesResponseSchema.parse(await getJsonAs(newcomer, '/api/families'));
+      await waitForVisibleText(page, families.families[0].name);
+      expect(await page.getByRole('tab', { name: 'Team' }).filter({ visible: true }).count()).toBe(1);
+      expect(await page.getByRole('tab', { name: 'Outbox' }).count()).toBe(0);
+      expect(await page.getByTestId('new-family').count()).toBe(0);
+      expect(await page.getByTestId('upload-family').count()).toBe(0);
+      await saveScreenshot(page, 'materials-grower-phone');
+
+      await visible(page, 'account-menu-button').click();
+      await expectText(visible(page, 'account-menu'), /Gus Newgrow[\s\S]*GROWER[\s\S]*Northlight/);
+      await page.waitForTimeout(400); // the menu fades in
+      await saveScreenshot(page, 'account-menu-phone');
+    } finally {
+      await newcomer.close();
+    }
+
+    await adminPage.reload();
+    await expectText(visible(adminPage, `member-${grower}`), /Gus Newgrow[\s\S]*GROWER/);
+    await expectText(visible(adminPage, `invitation-${grower}`), /Accepted/);
+    await adminPage.close();
+  });
+
+  it('resets a password through the e-mailed link: the old one is refused, the new one works', async () => {
+    const member = fresh('reset');
+    const oldPassword = 'the first long passphrase';
+    const newPassword = 'a second, newer passphrase';
+    await makeMember(adminSession, member, oldPassword);
+
+    const visitor = await openBrowser();
+    try {
+      const page = await visitor.newPage('phone');
+      await page.goto(`${baseUrl}/sign-in`);
+      await visible(page, 'link-forgot').click();
+      await page.waitForURL(`${baseUrl}/forgot-password`);
+      // The same words for an address without an account …
+      await visible(page, 'field-email').fill(fresh('nobody'));
+      await visible(page, 'submit-reset-request').click();
+      const neutral = await visible(page, 'reset-requested').innerText();
+      // … and for one with an account, asked afresh.
+      await page.goto(`${baseUrl}/forgot-password`);
+      await visible(page, 'field-email').fill(member);
+      await visible(page, 'submit-reset-request').click();
+      expect(await visible(page, 'reset-requested').innerText()).toBe(neutral);
+      await waitForMail(adminSession, member, /Reset your Frostgrade password/);
+      await saveScreenshot(page, 'forgot-password-phone');
+
+      const link = linkIn((await waitForMail(adminSession, member, /Reset your/)).text, '/reset-password');
+      expect(link.startsWith(`${baseUrl}/reset-password?token=`)).toBe(true);
+      await page.goto(link);
+      await visible(page, 'field-password').fill(newPassword);
+      await saveScreenshot(page, 'reset-password-phone');
+      await visible(page, 'submit-reset').click();
+      await visible(page, 'reset-done').waitFor();
+
+      await visible(page, 'link-sign-in').click();
+      await page.waitForURL(/\/sign-in/);
+      await visible(page, 'field-email').fill(member);
+      await visible(page, 'field-password').fill(oldPassword);
+      await visible(page, 'submit-sign-in').click();
+      await expectText(visible(page, 'error-password'), /E-mail or password is wrong/);
+      await saveScreenshot(page, 'sign-in-refused-phone');
+
+      await visible(page, 'field-password').fill(newPassword);
+      await visible(page, 'submit-sign-in').click();
+      await shellNav(page).waitFor({ state: 'visible', timeout: 30_000 });
+
+      // The link works once.
+      await page.goto(link);
+      await visible(page, 'field-password').fill('yet another passphrase');
+      await visible(page, 'submit-reset').click();
+      await expectText(visible(page, 'reset-problem'), /invalid, used or expired/);
+    } finally {
+      await visitor.close();
+    }
+  });
+
+  it('signs out back to the sign-in page, on a desktop and on a phone', async () => {
+    const member = fresh('leaver');
+    const password = 'a passphrase for leaving';
+    await makeMember(adminSession, member, password);
+    const visitor = await openBrowser();
+    try {
+      const desktop = await visitor.newPage('desktop');
+      await desktop.goto(`${baseUrl}/sign-in`);
+      await desktop.getByRole('heading', { name: 'Sign in' }).filter({ visible: true }).waitFor();
+      await saveScreenshot(desktop, 'sign-in-desktop');
+      await signIn(desktop, member, password);
+      await expectText(visible(desktop, 'account-panel'), /VIEWER[\s\S]*Northlight/);
+      await desktop.getByRole('tab', { name: 'Team' }).filter({ visible: true }).click();
+      await desktop.waitForURL(`${baseUrl}/team`);
+      await visible(desktop, 'members').waitFor();
+      await saveScreenshot(desktop, 'team-viewer-desktop');
+      expect(await desktop.getByRole('button', { name: /^Change role of / }).count()).toBe(0);
+
+      await visible(desktop, 'sign-out').click();
+      await desktop.getByRole('heading', { name: 'Sign in' }).filter({ visible: true }).waitFor();
+      expect(desktop.url()).toBe(`${baseUrl}/sign-in`);
+      // Signed out means signed out: a deep link asks to sign in and remembers where it led.
+      await desktop.goto(`${baseUrl}/team`);
+      await desktop.waitForURL(/\/sign-in\?next=%2Fteam/);
+
+      const phone = await visitor.newPage('phone');
+      await signIn(phone, member, password);
+      await saveScreenshot(phone, 'materials-viewer-phone');
+      await visible(phone, 'account-menu-button').click();
+      await visible(phone, 'sign-out').click();
+      await phone.getByRole('heading', { name: 'Sign in' }).filter({ visible: true }).waitFor();
+      await saveScreenshot(phone, 'sign-in-phone');
+      expect(visitor.pageErrors).toEqual([]);
+    } finally {
+      await visitor.close();
+    }
+  });
+
+  it('starts a team from the sign-up page; its first member is the admin', async () => {
+    const founder = `founder-${run}@lab.example`;
+    const visitor = await openBrowser();
+    try {
+      for (const width of ['phone', 'desktop'] as const) {
+        const page = await visitor.newPage(width);
+        for (const [path, heading] of [['/sign-up', 'Start a team'], ['/forgot-password', 'Forgot your password?']] as const) {
+          await page.goto(`${baseUrl}${path}`);
+          await page.getByRole('heading', { name: heading }).filter({ visible: true }).waitFor();
+          await saveScreenshot(page, `${path.slice(1)}-${width}`);
+        }
+        await page.close();
+      }
+      const page = await visitor.newPage('desktop');
+      await page.goto(`${baseUrl}/sign-in`);
+      await visible(page, 'link-sign-up').click();
+      await page.waitForURL(`${baseUrl}/sign-up`);
+      await visible(page, 'field-displayName').fill('Fern Founder');
+      await visible(page, 'field-email').fill(founder);
+      await visible(page, 'field-teamName').fill(`Founders lab ${run}`);
+      await visible(page, 'field-password').fill('short');
+      await visible(page, 'submit-sign-up').click();
+      await expectText(visible(page, 'error-password'), /at least 10 characters/);
+      await visible(page, 'field-password').fill('a long enough founding phrase');
+      await visible(page, 'submit-sign-up').click();
+
+      await shellNav(page).waitFor({ state: 'visible', timeout: 30_000 });
+      await expectText(visible(page, 'account-panel'), new RegExp(`Fern Founder[\\s\\S]*ADMIN[\\s\\S]*Founders lab ${run}`));
+      await page.getByRole('tab', { name: 'Team' }).filter({ visible: true }).click();
+      await expectText(visible(page, 'members'), /1 member,[\s\S]*Fern Founder · you[\s\S]*ADMIN/);
+      expect(await page.getByRole('tab', { name: 'Outbox' }).filter({ visible: true }).count()).toBe(1);
+      await saveScreenshot(page, 'team-founder-desktop');
+    } finally {
+      await visitor.close();
+    }
+  });
+
+  it('raised no uncaught errors in the admin pages', () => {
+    expect(adminSession.pageErrors).toEqual([]);
+  });
+});
+
+/** Waits until the element's text matches (it may still be loading). */
+async function expectText(locator: ReturnType<Page['getByTestId']>, pattern: RegExp): Promise<void> {
+  const deadline = Date.now() + 20_000;
+  let text = '';
+  while (Date.now() < deadline) {
+    if ((await locator.count()) > 0) {
+      text = await locator.first().innerText();
+      if (pattern.test(text)) return;
+    }
+    await new Promise((resolve) => setTimeout(resolve, 200));
+  }
+  throw new Error(`expected ${pattern} in: ${text || '(element not found)'}`);
+}
