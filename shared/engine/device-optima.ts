@@ -1,6 +1,6 @@
 /**
  * The two optima every curve is built on, each by Brent's minimiser over the
- * current on [0, 3·I_ref] (widened while the optimum sits at the bracket's
+ * current on [0, 2·I_ref] (widened while the optimum sits at the bracket's
  * edge): the current of maximum Qc at fixed load and sink temperatures, and
  * the current of the largest ΔT with no heat load.
  */
@@ -15,7 +15,7 @@ export const MAX_WIDENING = 1e3;
 const HINT_WIDTH = 1.3;
 
 /**
- * The point maximising score over the current: Brent on [0, 3·I_ref],
+ * The point maximising score over the current: Brent on [0, 2·I_ref],
  * widened while the optimum sits at the edge; if nothing there has a steady
  * state, closer to zero current. With a hint (the optimum of a neighbouring
  * problem) Brent first tries [hint/1.3, 1.3·hint] and keeps that answer
@@ -41,10 +41,10 @@ function maximizeOverCurrent(at: (current: number) => DevicePoint | undefined, s
     const m = brentMinimize(negative, a, b, tolerance);
     if (best && m.x > a + 0.03 * (b - a) && m.x < b - 0.03 * (b - a)) return best;
   }
-  let upper = 3 * reference;
+  let upper = 2 * reference;
   let m = brentMinimize(negative, 0, upper, tolerance);
   while (best && m.x > 0.97 * upper && upper < MAX_WIDENING * reference) {
-    upper *= 3;
+    upper *= 2;
     m = brentMinimize(negative, 0.5 * m.x, upper, tolerance);
   }
   for (let k = 1; !best && k <= 30; k++) {

@@ -69,9 +69,10 @@ export type DeviceSolver = {
 type Averages = { seebeck: number; resistance: number; conductance: number };
 
 const MAX_ITERATIONS = 60;
-/** Junction temperatures are solved to this × the solve tolerance × Th (~3e-9 K at 1e-9, 300 K). */
-const JUNCTION_TOLERANCE = 1e-2;
-const MAX_HALVINGS = 30;
+/** Junction temperatures are solved to this × the solve tolerance × Th (3e-8 K at 1e-9 and 300 K: ~1e-9 of Qc). */
+const JUNCTION_TOLERANCE = 0.1;
+/** Newton steps into a region without a steady state are halved this many times before the point counts as having none. */
+const MAX_HALVINGS = 4;
 
 export function deviceSolver(device: Device, tolerance: number): DeviceSolver {
   const warms: LegPointWarm[] = device.legs.map((d) => newLegPointWarm(d.leg));
@@ -132,10 +133,16 @@ export function deviceSolver(device: Device, tolerance: number): DeviceSolver {
     return { b: [b11, b12, b21, b22], tc: (rhs1 * b22 - b12 * rhs2) / det, th: (b11 * rhs2 - b21 * rhs1) / det, dqcTc };
   };
 
-  /** The last solved point with plates: its junctions and final Jacobian correct the next guess. */
-  let last: { current: number; hotSide: number; cold: ColdCondition; tc: number; th: number; modelTc: number; modelTh: number; b: number[]; modelB: number[] } | undefined;
-  const sameConditions = (a: ColdCondition, b: ColdCondition) =>
-    'coldSide' in a ? 'coldSide' in b && a.coldSide === b.coldSide : 'heatLoad' in b && a.heatLoad === b.heatLoad;
+  /**
+   * The last two solved points with plates under the same conditions: the
+   * model's error in the junction temperatures, extrapolated linearly in the
+   * current, corrects the next guess, and the last Jacobian's difference from
+   * the model's corrects the next Jacobian.
+   */
+  type Solved = { current: number; hotSide: number; cold: ColdCondition; errorTc: number; errorTh: number; deltaB: number[] };
+  let recent: Solved[] = [];
+  const sameConditions = (a: Solved, hotSide: number, cold: ColdCondition) =>
+    a.hotSide === hotSide && ('coldSide' in a.cold ? 'coldSide' in cold && a.cold.coldSide === cold.coldSide : 'heatLoad' in cold && a.cold.heatLoad === cold.heatLoad);
 
   const at = (current: number, hotSide: number, cold: ColdCondition): DevicePoint | undefined => {
     const thetaC = device.coldPlateResistance;
@@ -165,15 +172,17 @@ export function deviceSolver(device: Device, tolerance: number): DeviceSolver {
     let [b11, b12, b21, b22] = m.b;
     let u0 = m.tc;
     let u1 = m.th;
-    const warm = last && last.hotSide === hotSide && sameConditions(last.cold, cold) ? last : undefined;
-    if (warm) {
-      // The model's error changes slowly with the current: carry it over.
-      u0 += warm.tc - warm.modelTc;
-      u1 += warm.th - warm.modelTh;
-      b11 += warm.b[0] - warm.modelB[0];
-      b12 += warm.b[1] - warm.modelB[1];
-      b21 += warm.b[2] - warm.modelB[2];
-      b22 += warm.b[3] - warm.modelB[3];
+    const similar = recent.filter((p) => sameConditions(p, hotSide, cold));
+    if (similar.length > 0) {
+      const [a, b] = [similar[similar.length - 1], similar[similar.length - 2]];
+      // Linear in the current through the last two (constant with one).
+      const w = b && b.current !== a.current ? (current - a.current) / (a.current - b.current) : 0;
+      u0 += a.errorTc + (b ? w * (a.errorTc - b.errorTc) : 0);
+      u1 += a.errorTh + (b ? w * (a.errorTh - b.errorTh) : 0);
+      b11 += a.deltaB[0];
+      b12 += a.deltaB[1];
+      b21 += a.deltaB[2];
+      b22 += a.deltaB[3];
     }
     if (!(u0 > 0 && u0 <= hotSide + 1e3 && u1 > 0)) {
       u0 = loadGiven ? cold.coldSide : 0.5 * hotSide;
@@ -184,7 +193,7 @@ export function deviceSolver(device: Device, tolerance: number): DeviceSolver {
       th - thetaH * q.heatRejected - hotSide,
     ];
     let q = junctions(current, u0, u1);
-    if (!q && warm) {
+    if (!q && similar.length > 0) {
       u0 = m.tc;
       u1 = m.th;
       q = junctions(current, u0, u1);
@@ -193,7 +202,8 @@ export function deviceSolver(device: Device, tolerance: number): DeviceSolver {
     let r = residual(u0, u1, q);
     const limit = JUNCTION_TOLERANCE * tolerance * hotSide;
     const done = (): DevicePoint => {
-      last = { current, hotSide, cold, tc: u0, th: u1, modelTc: m.tc, modelTh: m.th, b: [b11, b12, b21, b22], modelB: m.b };
+      const solved: Solved = { current, hotSide, cold, errorTc: u0 - m.tc, errorTh: u1 - m.th, deltaB: [b11 - m.b[0], b12 - m.b[1], b21 - m.b[2], b22 - m.b[3]] };
+      recent = [...recent.filter((p) => sameConditions(p, hotSide, cold)).slice(-1), solved];
       return finish(u0, u1, q as { heatLoad: number; heatRejected: number; voltage: number });
     };
     for (let iteration = 0; iteration < MAX_ITERATIONS; iteration++) {

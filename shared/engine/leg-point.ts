@@ -30,6 +30,14 @@ export function newLegPointWarm(leg: Leg): LegPointWarm {
 /** A previous point counts as close within this relative change of the current and this many kelvin. */
 const CLOSE_CURRENT = 1e-3;
 const CLOSE_KELVIN = 0.05;
+/**
+ * Trials per phase: a leg with a steady state converges in 2–8; without one
+ * (e.g. thermal runaway at a high current) the search would otherwise spend
+ * up to 100 whole-leg integrations before giving up.
+ */
+const MAX_SHOTS = 25;
+/** |T(L) − Th| at the last trial, relative to Th, above which the shot is no solution. */
+const RESIDUAL_LIMIT = 1e-6;
 
 /** The leg at current I [A] between junctions at Tc and Th [K]; undefined when it has no steady state there. */
 export function legPointAt(leg: Leg, current: number, coldSide: number, hotSide: number, tolerance: number, warm: LegPointWarm): LegPoint | undefined {
@@ -45,9 +53,12 @@ export function legPointAt(leg: Leg, current: number, coldSide: number, hotSide:
     tolerance,
     odeTolerance,
     stepHint: warm.stepHint,
+    maxShots: MAX_SHOTS,
     ...(close && last ? { guess: last.coldFlux, slope: last.slope } : {}),
   });
-  if (!out.ok || !out.shot.converged) return undefined;
+  // A root search can close its bracket on a jump of T(L) (a current at which
+  // the leg runs away thermally on one side): that is no steady state either.
+  if (!out.ok || !out.shot.converged || !(Math.abs(out.shot.residual) <= RESIDUAL_LIMIT * hotSide)) return undefined;
   const { coldFlux, slope } = out.shot;
   warm.last = { current, coldSide, hotSide, coldFlux, slope };
   const end = integrateLeg(leg, J, coldSide, coldFlux, { tolerance: odeTolerance, fluxScale: legFluxScale(leg, hotSide, J), stepHint: { step: warm.stepHint.step } });

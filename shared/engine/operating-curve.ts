@@ -2,7 +2,7 @@
  * Operating curves of a device (leg, couple or module) with the load and the
  * sink at fixed temperatures: Qc, Qh, V, P = V·I and COP versus the current.
  *
- * - Current of maximum Qc: Brent's minimiser on −Qc(I) over [0, 3·I_ref]
+ * - Current of maximum Qc: Brent's minimiser on −Qc(I) over [0, 2·I_ref]
  *   (widened while the optimum sits at the edge); Qc(I) is single-peaked
  *   (Peltier cooling grows like I, Joule heat like I²).
  * - If that maximum is below 0 the device cannot hold the ΔT at any current.
@@ -136,26 +136,38 @@ export function operatingSummary(solver: DeviceSolver, c: CheckedConditions, wha
     const q0 = qc(0);
     lower = q0 < 0 && top.heatLoad > 0 ? brentRoot(qc, 0, top.current, q0, top.heatLoad, ROOT_TOLERANCE * reference).root : q0 >= 0 ? 0 : top.current;
   }
-  // Upper end: widen until Qc < 0, or until the device leaves its materials' range.
+  // Upper end: step up until Qc < 0. A current without a steady state (the
+  // leg running away thermally, or leaving a table's range) is bisected
+  // against the last good one: either Qc turns negative first (then the root
+  // is bracketed) or the range is cut at that edge.
   let a = top.current;
-  let b = Math.max(2 * top.current, top.current + reference);
+  let qa = top.heatLoad;
+  let step = Math.max(0.5 * top.current, 0.25 * reference);
+  let b = a + step;
   let qb = qc(b);
   while (qb >= 0 && b < MAX_WIDENING * reference) {
     a = b;
-    b *= 2;
+    qa = qb;
+    step *= 2;
+    b = a + step;
     qb = qc(b);
   }
-  let upper: number;
-  if (qb < 0) upper = top.heatLoad > 0 ? brentRoot(qc, a, b, qc(a), qb, ROOT_TOLERANCE * reference).root : top.current;
-  else {
-    // No steady state beyond some current while Qc is still ≥ 0: bisect for that edge.
-    for (let k = 0; k < 60 && b - a > ROOT_TOLERANCE * reference; k++) {
-      const m = 0.5 * (a + b);
-      if (qc(m) >= 0) a = m;
-      else b = m;
+  for (let k = 0; Number.isNaN(qb) && k < 60 && b - a > ROOT_TOLERANCE * reference; k++) {
+    const m = 0.5 * (a + b);
+    const qm = qc(m);
+    if (qm >= 0) {
+      a = m;
+      qa = qm;
+    } else {
+      b = m;
+      qb = qm;
     }
+  }
+  let upper: number;
+  if (qb < 0) upper = qa > 0 ? brentRoot(qc, a, b, qa, qb, ROOT_TOLERANCE * reference).root : a;
+  else {
     upper = a;
-    warnings.push(`above ${fmt(upper)} A ${what} has no steady state inside its materials' temperature range, so the pumping range is cut there`);
+    warnings.push(`above ${fmt(upper)} A ${what} has no steady state (thermal runaway, or beyond its materials' temperature range), so the pumping range is cut there`);
   }
   let maxCop: DevicePoint | null = null;
   if (deltaT > 0) {

@@ -72,6 +72,13 @@ export type ShotSettings = {
   /** Warm start: a previous root and slope (the coarse phase is skipped when it is close). */
   guess?: number;
   slope?: number;
+  /**
+   * Trials allowed in each phase before the search gives up (not converged).
+   * A solvable leg needs a handful; callers that probe currents with no
+   * steady state (operating curves) cap this to fail fast.
+   * @default 100
+   */
+  maxShots?: number;
 };
 
 /** Outcome of a root search, or the reason there is none. */
@@ -123,7 +130,7 @@ function solveUnknown(
   let guess = settings.guess ?? u.guess;
   let slope = settings.slope ?? u.slope;
   const coarse = () => {
-    const r = secantThenBrent(trial(COARSE_ODE_TOLERANCE, { step: settings.stepHint.step }), guess, slope, u.lower, u.upper, COARSE_ROOT_TOLERANCE * u.scale);
+    const r = secantThenBrent(trial(COARSE_ODE_TOLERANCE, { step: settings.stepHint.step }), guess, slope, u.lower, u.upper, COARSE_ROOT_TOLERANCE * u.scale, settings.maxShots);
     guess = r.root;
     slope = r.slope;
   };
@@ -137,7 +144,7 @@ function solveUnknown(
       else coarse();
     }
   }
-  const fine = secantThenBrent(trial(settings.odeTolerance, settings.stepHint), guess, slope, u.lower, u.upper, settings.tolerance * u.scale);
+  const fine = secantThenBrent(trial(settings.odeTolerance, settings.stepHint), guess, slope, u.lower, u.upper, settings.tolerance * u.scale, settings.maxShots);
   const result = last as IntegrationResult;
   return { root: fine.root, slope: fine.slope, rootError: fine.extrapolated ? Math.abs(fine.value / fine.slope) : 0, converged: fine.converged, last: result, shots, evaluations };
 }
