@@ -1,0 +1,205 @@
+import type { Locator, Page } from 'playwright-core';
+import { outboxResponseSchema, type OutboxMessage } from '../../shared/api/outbox';
+import { runDetailSchema } from '../../shared/api/runs';
+import {
+  baseUrl,
+  getJsonAs,
+  openBrowser,
+  saveScreenshot,
+  signInAs,
+  waitForVisibleText,
+  type BrowserSession,
+  type ViewportName,
+} from './browser';
+
+jest.setTimeout(420_000);
+
+/** The demo p-type family (README, "Demo lab"). */
+const familyRadio = /^NL-P7 .*p-type band model \(p\)$/;
+/** Enough starts that the run lasts several seconds: each is a full local optimisation. */
+const starts = 120;
+
+const visible = (locator: Locator) => locator.filter({ visible: true }).first();
+
+/** Pixels of the optimum's line colour (glacier blue) in an element, decoded by the browser. */
+async function countBluePixels(page: Page, element: Locator): Promise<number> {
+  const png = (await element.screenshot()).toString('base64');
+  return page.evaluate(async (data) => {
+    const image = new Image();
+    image.src = `data:image/png;base64,${data}`;
+    await image.decode();
+    const canvas = document.createElement('canvas');
+    canvas.width = image.width;
+    canvas.height = image.height;
+    const context = canvas.getContext('2d');
+    if (!context) throw new Error('no 2d context');
+    context.drawImage(image, 0, 0);
+    const { data: rgba } = context.getImageData(0, 0, image.width, image.height);
+    let blue = 0;
+    for (let i = 0; i < rgba.length; i += 4) {
+      const [r, g, b] = [rgba[i], rgba[i + 1], rgba[i + 2]];
+      if (b > 90 && b - r > 60 && r < 90 && g < 130) blue += 1;
+    }
+    return blue;
+  }, png);
+}
+
+/** Waits until a chart card's canvas shows the optimum's line (or its error boundary speaks). */
+async function waitForDrawnLine(page: Page, card: Locator, minPixels = 60, timeout = 60_000): Promise<number> {
+  await card.locator('canvas, [role="alert"]').first().waitFor({ state: 'visible', timeout });
+  const failure = card.getByRole('alert');
+  if ((await failure.count()) > 0) throw new Error(`chart failed to load: ${await failure.innerText()}`);
+  const canvas = card.locator('canvas').first();
+  await canvas.scrollIntoViewIfNeeded();
+  let pixels = 0;
+  const deadline = Date.now() + timeout;
+  while (pixels < minPixels && Date.now() < deadline) {
+    pixels = await countBluePixels(page, canvas);
+    if (pixels < minPixels) await page.waitForTimeout(250);
+  }
+  return pixels;
+}
+
+async function progressValue(page: Page): Promise<number> {
+  return Number(await visible(page.getByTestId('run-progress')).getAttribute('aria-valuenow'));
+}
+
+async function eventually<T>(probe: () => Promise<T | undefined>, seconds: number, what: string): Promise<T> {
+  const deadline = Date.now() + seconds * 1000;
+  for (;;) {
+    const value = await probe();
+    if (value !== undefined) return value;
+    if (Date.now() > deadline) throw new Error(`timed out after ${seconds} s waiting for ${what}`);
+    await new Promise((r) => setTimeout(r, 500));
+  }
+}
+
+async function fillDesign(page: Page, name: string): Promise<void> {
+  await page.goto(`${baseUrl}/designs`);
+  await visible(page.getByText('New design', { exact: true })).click();
+  await page.waitForURL(`${baseUrl}/designs/new`);
+  await visible(page.getByTestId('field-name')).fill(name);
+  await visible(page.getByRole('radio', { name: familyRadio })).click();
+  await visible(page.getByTestId('field-lengthMm')).fill('1.5');
+  await visible(page.getByTestId('field-controlPoints')).fill('8');
+  await visible(page.getByTestId('field-starts')).fill(String(starts));
+}
+
+describe('a physicist optimises a leg in a real browser', () => {
+  let physicist: BrowserSession;
+  let admin: BrowserSession;
+  const designName = `Browser leg ${Date.now()}`;
+  let runId = '';
+
+  beforeAll(async () => {
+    physicist = await openBrowser();
+    admin = await openBrowser();
+    await signInAs(physicist, 'piet@northlight.example');
+    await signInAs(admin, 'ada@northlight.example');
+  });
+
+  afterAll(async () => {
+    await physicist?.close();
+    await admin?.close();
+  });
+
+  it('creates a design with a quick estimate, launches it and watches the progress bar move', async () => {
+    const page = await physicist.newPage('desktop');
+    await fillDesign(page, designName);
+    const estimate = visible(page.getByTestId('quick-estimate'));
+    await estimate.getByRole('button', { name: 'Quick estimate' }).click();
+    const uniform = visible(page.getByTestId('estimate-uniform'));
+    await uniform.waitFor({ timeout: 30_000 });
+    expect(await uniform.innerText()).toMatch(/^ΔT ≈ \d+(\.\d+)?\sK at \d+(\.\d+)?\sA$/);
+    await estimate.scrollIntoViewIfNeeded();
+    await saveScreenshot(page, 'design-form-estimate-desktop');
+
+    await visible(page.getByRole('button', { name: 'Save design' })).click();
+    await page.waitForURL(/\/designs\/[0-9a-f-]{36}$/);
+    await waitForVisibleText(page, designName);
+    await saveScreenshot(page, 'design-page-desktop');
+
+    await visible(page.getByRole('button', { name: 'Launch run' })).click();
+    await page.waitForURL(/\/runs\/[0-9a-f-]{36}$/);
+    runId = /\/runs\/([0-9a-f-]{36})$/.exec(page.url())![1];
+
+    // Two readings of the bar, the second strictly later in the run: the bar moves live.
+    const first = await eventually(async () => {
+      const v = await progressValue(page);
+      return v > 0 && v < 100 ? v : undefined;
+    }, 120, 'the first progress report');
+    await saveScreenshot(page, 'run-live-desktop');
+    const second = await eventually(async () => {
+      const state = await visible(page.getByTestId('run-state')).innerText();
+      if (/Succeeded/.test(state)) throw new Error(`the run finished before the bar was seen to move past ${first} %`);
+      const v = await progressValue(page);
+      return v > first ? v : undefined;
+    }, 120, 'the bar to move');
+    expect(second).toBeGreaterThan(first);
+    await waitForDrawnLine(page, visible(page.getByTestId('live-doping')));
+    await saveScreenshot(page, 'run-live-chart-desktop');
+    await page.close();
+  });
+
+  it('opens the result with its numbers and plots drawn', async () => {
+    const page = await physicist.newPage('desktop');
+    await page.goto(`${baseUrl}/runs/${runId}`);
+    await visible(page.getByTestId('run-state')).filter({ hasText: 'Succeeded' }).waitFor({ timeout: 300_000 });
+    const headline = visible(page.getByTestId('headline-deltaT'));
+    expect(await headline.innerText()).toMatch(/\d+(\.\d+)?\sK/);
+    expect(await visible(page.getByTestId('caution')).innerText()).toMatch(/hot side can burn/);
+    const detail = runDetailSchema.parse(await getJsonAs(physicist, `/api/runs/${runId}`));
+    const stored = detail.result as { deltaT: number; baselines: { uniform: { deltaT: number } } };
+    expect(stored.deltaT).toBeGreaterThan(stored.baselines.uniform.deltaT);
+    expect(await visible(page.getByTestId('run-fact-search')).innerText()).toContain(`${starts} of ${starts} starts`);
+    await saveScreenshot(page, 'run-result-desktop');
+    for (const q of ['doping', 'temperature', 'zT']) {
+      expect(await waitForDrawnLine(page, visible(page.getByTestId(`leg-plot-${q}`)))).toBeGreaterThanOrEqual(60);
+    }
+    await visible(page.getByTestId('leg-plot-doping')).scrollIntoViewIfNeeded();
+    await saveScreenshot(page, 'run-plots-desktop');
+    await visible(page.getByTestId('profile-table')).scrollIntoViewIfNeeded();
+    await saveScreenshot(page, 'run-table-desktop');
+    await page.close();
+  });
+
+  it.each<ViewportName>(['phone', 'desktop'])('lists designs and runs at %s width', async (size) => {
+    const page = await physicist.newPage(size);
+    await page.goto(`${baseUrl}/designs`);
+    await waitForVisibleText(page, designName);
+    await saveScreenshot(page, `designs-${size}`);
+    await page.goto(`${baseUrl}/runs`);
+    await visible(page.getByTestId(`run-row-${runId}`)).waitFor();
+    await saveScreenshot(page, `runs-${size}`);
+    if (size === 'phone') {
+      await page.goto(`${baseUrl}/runs/${runId}`);
+      await visible(page.getByTestId('headline-deltaT')).waitFor({ timeout: 60_000 });
+      await saveScreenshot(page, 'run-result-phone');
+      await waitForDrawnLine(page, visible(page.getByTestId('leg-plot-temperature')));
+      await saveScreenshot(page, 'run-plots-phone');
+      await page.goto(`${baseUrl}/designs/new`);
+      await visible(page.getByTestId('field-name')).waitFor();
+      await saveScreenshot(page, 'design-form-phone');
+    }
+    await page.close();
+  });
+
+  it('e-mails the team: the admin finds the run in the outbox', async () => {
+    const mail = await eventually(async () => {
+      const { messages } = outboxResponseSchema.parse(await getJsonAs(admin, '/api/outbox'));
+      return messages.find((m: OutboxMessage) => m.subject.includes(designName));
+    }, 60, 'the run e-mail');
+    expect(mail.subject).toMatch(/^Run finished: .* ΔT \d+\.\d K$/);
+    expect(mail.to).toContain('piet@northlight.example');
+    expect(mail.text).toContain(`/runs/${runId}`);
+    const page = await admin.newPage('desktop');
+    await page.goto(`${baseUrl}/outbox`);
+    await waitForVisibleText(page, mail.subject);
+    await saveScreenshot(page, 'run-mail-outbox-desktop');
+    await page.close();
+  });
+
+  it('raised no uncaught errors in the page', () => {
+    expect([...physicist.pageErrors, ...admin.pageErrors]).toEqual([]);
+  });
+});
