@@ -60,6 +60,14 @@ export const legDefinitionSchema = z.strictObject(legFields);
 /** A module's leg: as above; the n leg's area may come from areaRatio instead. */
 export const moduleLegSchema = z.strictObject({ ...legFields, area: shape.area.optional() });
 
+const moduleLeg = (side: 'p' | 'n') =>
+  z.strictObject(moduleLegSchema.shape, {
+    error: (issue) =>
+      issue.input === undefined
+        ? `${side} is required: the ${side}-type leg, {length, area, material, doping} or {length, area, segments}`
+        : `${side} must be an object: {length, area, material, doping} or {length, area, segments}`,
+  });
+
 /** `leg curves FILE`: one leg (fields at the top level, as in a solve case) and the conditions. */
 export const curvesCaseSchema = z.strictObject({
   ...legFields,
@@ -76,8 +84,8 @@ export const moduleCaseSchema = z.strictObject({
   hotSide: shape.hotSide,
   coldSide: shape.coldSide,
   deltaT: deltaTSchema.optional(),
-  p: moduleLegSchema,
-  n: moduleLegSchema,
+  p: moduleLeg('p'),
+  n: moduleLeg('n'),
   couples: count('couples', 1, 100000).optional(),
   areaRatio: positiveUpTo('areaRatio', 100, 'it is A_n / A_p, the n leg’s cross-section over the p leg’s').optional(),
   contactResistivity: contactResistivitySchema.optional(),

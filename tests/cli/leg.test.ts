@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 
 /**
- * The command-line contract: `npm run -s leg -- solve|optimize FILE` prints
+ * The command-line contract: `npm run -s leg -- solve|optimize|curves|module FILE` prints
  * one JSON object on stdout; invalid input exits 2 with one line on stderr
  * naming the field and nothing on stdout.
  */
@@ -75,6 +75,42 @@ describe('leg CLI', () => {
     expect(out.profile.perCm3).toBeDefined();
   });
 
+  test('curves prints the curves, the pumping range and the marked currents for the bundled example', () => {
+    const r = leg(['curves', join(root, 'shared', 'engine', 'examples', 'detector-leg-curves.json')]);
+    expect(r.stderr).toBe('');
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout);
+    for (const field of ['currents', 'heatLoad', 'heatRejected', 'voltage', 'power', 'cop', 'overLimit']) expect(out[field]).toHaveLength(40);
+    expect(out.deltaT).toBe(40);
+    expect(out.currentLimit).toBe(5);
+    const [lo, hi] = out.pumpingRange;
+    expect(out.currents[0]).toBe(lo);
+    expect(out.currents[39]).toBe(hi);
+    expect(out.maxCop.current).toBeLessThan(out.maxHeatLoad.current);
+    expect(out.maxHeatLoad.heatLoad).toBeGreaterThan(Math.max(...out.heatLoad) - 1e-12);
+    out.currents.forEach((I: number, k: number) => expect(out.overLimit[k]).toBe(I > 5));
+    expect(out.power[10]).toBeCloseTo(out.voltage[10] * out.currents[10], 12);
+    expect(typeof out.seconds).toBe('number');
+  });
+
+  test('module prints the module, its curves versus current and ΔT, and the N-couple trade', () => {
+    const r = leg(['module', join(root, 'shared', 'engine', 'examples', 'detector-module.json')]);
+    expect(r.stderr).toBe('');
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout);
+    expect(out.module).toEqual(expect.objectContaining({ couples: 31, areaRatio: expect.any(Number), totalLegArea: expect.any(Number) }));
+    expect(out.versusCurrent.currents).toHaveLength(40);
+    expect(out.versusCurrent.coldJunction).toHaveLength(40);
+    expect(out.versusDeltaT.mode).toBe('maxHeatLoadCurrent');
+    expect(out.versusDeltaT.deltaT).toHaveLength(21);
+    expect(out.versusDeltaT.deltaT[20]).toBeCloseTo(out.versusDeltaT.hotSide - out.versusDeltaT.deltaTMax.coldSide, 9);
+    const n31 = out.trade.rows.find((row: { couples: number }) => row.couples === 31);
+    expect(n31.maxHeatLoad.current).toBeCloseTo(out.versusCurrent.maxHeatLoad.current, 9);
+    // Fewer couples from the same leg area need more current than the 5 A supply gives.
+    expect(out.trade.rows[0].couples).toBe(1);
+    expect(out.trade.rows[0].maxHeatLoad.overLimit).toBe(true);
+  });
+
   test.each<[string, string[] | (() => string[]), RegExp]>([
     ['unknown command', ['frobnicate', 'x.json'], /^command: /],
     ['missing file argument', ['solve'], /^FILE: /],
@@ -87,6 +123,15 @@ describe('leg CLI', () => {
     ['NaN written as a string', () => ['solve', caseFile('nan', { ...uniform, current: 'NaN' })], /^current: /],
     ['current missing for solve', () => ['solve', caseFile('nocurrent', uniform)], /^current: is required/],
     ['bounds missing for a band optimisation', () => ['optimize', caseFile('nobounds', { ...uniform, segments: undefined, material: band })], /^bounds: /],
+    ['curves: both deltaT and coldSide', () => ['curves', caseFile('both', { ...uniform, deltaT: 20, coldSide: 280 })], /^deltaT: /],
+    ['curves: a ΔT beyond the leg’s ΔTmax', () => ['curves', caseFile('toofar', { ...uniform, deltaT: 75 })], /^deltaT: .*cannot hold ΔT = 75 K/],
+    ['curves: contact resistivity in Ω·cm²', () => ['curves', caseFile('rc', { ...uniform, deltaT: 20, contactResistivity: 1e-5 })], /^contactResistivity: /],
+    [
+      'module: an n leg that is p-type',
+      () => ['module', caseFile('nn', { hotSide: 300, deltaT: 20, p: { length: 1e-3, area: 1e-6, segments: uniform.segments }, n: { length: 1e-3, area: 1e-6, segments: uniform.segments } })],
+      /^n\.segments: /,
+    ],
+    ['module: no legs', () => ['module', caseFile('nolegs', { hotSide: 300, deltaT: 20 })], /^p: /],
   ])('bad input (%s): exit 2, one line naming the field on stderr, nothing on stdout', (_name, args, pattern) => {
     const r = leg(typeof args === 'function' ? args() : args);
     expect(r.status).toBe(2);
