@@ -76,16 +76,16 @@ async function main(): Promise<void> {
   socket.disconnect();
   console.log(`progress worker → browser socket (${lags.length} events, one 40-start run): p50 ${ms(pct(lags, 50))}, p95 ${ms(pct(lags, 95))}`);
 
-  // 3. Throughput with 1, then 2 workers: 16 runs of 4 starts × 8 nodes each.
-  const batch = await design(4, 8);
+  // 3. Throughput with 1, then 2 workers: 12 runs of 2 starts × 6 nodes each.
+  const batch = await design(2, 6);
   for (const count of [1, 2]) {
     if (count === 2) { await pool1.stop(); pool1 = workers(2); await new Promise((r) => setTimeout(r, 4000)); }
     const t0 = Date.now();
     const ids: string[] = [];
-    for (let i = 0; i < 16; i += 1) ids.push(await launch(batch));
+    for (let i = 0; i < 12; i += 1) ids.push(await launch(batch));
     await waitAll(ids);
     const minutes = (Date.now() - t0) / 60000;
-    console.log(`throughput with ${count} worker${count > 1 ? 's' : ''}: 16 runs in ${(minutes * 60).toFixed(1)} s = ${(16 / minutes).toFixed(1)} runs/min`);
+    console.log(`throughput with ${count} worker${count > 1 ? "s" : ""}: 12 runs in ${(minutes * 60).toFixed(1)} s = ${(12 / minutes).toFixed(1)} runs/min`);
   }
   process.stdout.write = origWrite;
   await pool1.stop();
