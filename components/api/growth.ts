@@ -1,0 +1,119 @@
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+import {
+  growthOrderDetailSchema,
+  growthOrderSchema,
+  growthOrdersResponseSchema,
+  type GrowthOrderDetail,
+  type ReleaseRequest,
+} from '@/shared/api/growth';
+import { apiBaseUrl, apiGet, apiSend } from './client';
+import { measurementReportSchema } from './growth-schemas';
+import type { PickedFile } from './picked-file';
+import { appendFile } from './upload-form';
+
+/** Every growth query starts with this key: one invalidation refreshes lists and orders. */
+export const growthQueryKey = ['growth'] as const;
+export const growthListKey = [...growthQueryKey, 'list'] as const;
+export const growthOrderKey = (id: string) => [...growthQueryKey, 'order', id] as const;
+
+/** How often an order is asked again while its sheet is being computed (ms), if no event says so first. */
+export const computingPollMs = 3_000;
+
+const orderPath = (id: string) => `/api/growth-orders/${encodeURIComponent(id)}`;
+
+/** `GET /api/growth-orders`: the team's orders, newest first. */
+export function useGrowthOrders() {
+  return useQuery({
+    queryKey: growthListKey,
+    queryFn: ({ signal }) => apiGet('/api/growth-orders', growthOrdersResponseSchema, { signal }),
+    refetchInterval: (query) => (query.state.data?.orders.some((o) => o.sheetStatus === 'computing') ? computingPollMs : false),
+  });
+}
+
+/** `GET /api/growth-orders/:id`: order, sheet, timeline and measurement reports; polled while the sheet computes. */
+export function useGrowthOrder(id: string) {
+  return useQuery({
+    queryKey: growthOrderKey(id),
+    queryFn: ({ signal }) => apiGet(orderPath(id), growthOrderDetailSchema, { signal }),
+    enabled: id.length > 0,
+    refetchInterval: (query) => (query.state.data?.order.sheetStatus === 'computing' ? computingPollMs : false),
+  });
+}
+
+/** Writes on an order answer its whole detail: put it in the cache and refresh the lists. */
+function useStoreDetail(id: string) {
+  const queryClient = useQueryClient();
+  return (detail: GrowthOrderDetail) => {
+    queryClient.setQueryData(growthOrderKey(id), detail);
+    void queryClient.invalidateQueries({ queryKey: growthListKey });
+  };
+}
+
+export const releaseResponseSchema = z.object({ order: growthOrderSchema });
+export type ReleaseVariables = { runId: string; body: ReleaseRequest };
+
+/** `POST /api/runs/:id/release`: a converged run's profile becomes a growth order. */
+export function useReleaseRun() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ runId, body }: ReleaseVariables) =>
+      apiSend('POST', `/api/runs/${encodeURIComponent(runId)}/release`, { json: body }, releaseResponseSchema),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: growthQueryKey }),
+  });
+}
+
+export type NextStateVariables = { state: 'accepted' | 'growing' | 'grown' | 'measured'; note: string };
+
+/** `PUT /api/growth-orders/:id/state`: the grower's next step, with an optional note. */
+export function useAdvanceOrder(id: string) {
+  const onSuccess = useStoreDetail(id);
+  return useMutation({
+    mutationFn: (body: NextStateVariables) => apiSend('PUT', `${orderPath(id)}/state`, { json: body }, growthOrderDetailSchema),
+    onSuccess,
+  });
+}
+
+export type CloseVariables = { verdict: 'approved' | 'rejected'; reason: string };
+
+/** `POST /api/growth-orders/:id/close`: the physicist's verdict and reason. */
+export function useCloseOrder(id: string) {
+  const onSuccess = useStoreDetail(id);
+  return useMutation({
+    mutationFn: (body: CloseVariables) => apiSend('POST', `${orderPath(id)}/close`, { json: body }, growthOrderDetailSchema),
+    onSuccess,
+  });
+}
+
+export type SheetSettingsVariables = { zones?: number; lossBudget?: number; measureTemperature?: number };
+
+/** `PUT /api/growth-orders/:id/sheet`: K, loss budget (K) and check temperature (K); budget and temperature recompute. */
+export function useUpdateSheetSettings(id: string) {
+  const onSuccess = useStoreDetail(id);
+  return useMutation({
+    mutationFn: (body: SheetSettingsVariables) => apiSend('PUT', `${orderPath(id)}/sheet`, { json: body }, growthOrderDetailSchema),
+    onSuccess,
+  });
+}
+
+export const uploadReportSchema = z.object({ report: measurementReportSchema });
+export type UploadMeasurementsVariables = { file: PickedFile; temperature?: number };
+
+/** `POST /api/growth-orders/:id/measurements` (multipart `file`, optional `temperature` in K): all or nothing. */
+export function useUploadMeasurements(id: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ file, temperature }: UploadMeasurementsVariables) => {
+      const form = new FormData();
+      if (temperature !== undefined) form.append('temperature', String(temperature));
+      appendFile(form, 'file', file);
+      return apiSend('POST', `${orderPath(id)}/measurements`, { form }, uploadReportSchema);
+    },
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: growthQueryKey }),
+  });
+}
+
+/** Download address of the sheet at the order's chosen K (CSV) or the whole sheet (JSON). */
+export function growthSheetExportUrl(id: string, format: 'csv' | 'json'): string {
+  return `${apiBaseUrl()}${orderPath(id)}/sheet.${format}`;
+}
