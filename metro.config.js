@@ -24,4 +24,15 @@ function ensureCanvasKitWasm(projectRoot) {
 
 ensureCanvasKitWasm(__dirname);
 
-module.exports = getDefaultConfig(__dirname);
+const config = getDefaultConfig(__dirname);
+
+// csv-parse's default build reads Node's global Buffer, which browsers lack;
+// its browser build bundles one. Shared CSV readers (e.g. the as-grown
+// measurements preview) then run in the web client too.
+const resolveDefault = config.resolver.resolveRequest;
+config.resolver.resolveRequest = (context, moduleName, platform) => {
+  const name = platform === 'web' && moduleName === 'csv-parse/sync' ? 'csv-parse/browser/esm/sync' : moduleName;
+  return resolveDefault ? resolveDefault(context, name, platform) : context.resolveRequest(context, name, platform);
+};
+
+module.exports = config;
