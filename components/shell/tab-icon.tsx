@@ -1,11 +1,12 @@
 import { StyleSheet, View } from 'react-native';
 
-export type TabIconName = 'materials' | 'designs' | 'runs' | 'team' | 'outbox' | 'system';
+export type TabIconName = 'materials' | 'designs' | 'runs' | 'growth' | 'team' | 'outbox' | 'system';
 
 /**
  * Navigation icons drawn with views: stacked zones (materials), a graded
- * leg between plates (designs), a start triangle (runs), two people
- * (team), an envelope (outbox) and a gauge (system). 24 × 24 px, one colour.
+ * leg between plates (designs), a start triangle (runs), a crystal on its
+ * seed rod (growth), two people (team), an envelope (outbox) and a gauge
+ * (system). 24 × 24 px, one colour.
  */
 export function TabIcon({ name, color }: { name: TabIconName; color: string }) {
   return (
@@ -13,6 +14,7 @@ export function TabIcon({ name, color }: { name: TabIconName; color: string }) {
       {name === 'materials' ? <Layers color={color} /> : null}
       {name === 'designs' ? <Leg color={color} /> : null}
       {name === 'runs' ? <Play color={color} /> : null}
+      {name === 'growth' ? <Crystal color={color} /> : null}
       {name === 'team' ? <People color={color} /> : null}
       {name === 'outbox' ? <Envelope color={color} /> : null}
       {name === 'system' ? <Gauge color={color} /> : null}
@@ -71,6 +73,19 @@ function Play({ color }: { color: string }) {
   );
 }
 
+/** A grown crystal hanging from its seed rod, zones banded along it. */
+function Crystal({ color }: { color: string }) {
+  return (
+    <View style={styles.crystal}>
+      <View style={[styles.seed, { backgroundColor: color }]} />
+      <View style={[styles.boule, { borderColor: color }]}>
+        <View style={[styles.band, styles.zoneFaint, { backgroundColor: color }]} />
+        <View style={[styles.band, { backgroundColor: color }]} />
+      </View>
+    </View>
+  );
+}
+
 function Envelope({ color }: { color: string }) {
   return (
     <View style={[styles.envelope, { borderColor: color }]}>
@@ -116,6 +131,20 @@ const styles = StyleSheet.create({
     borderBottomColor: 'transparent',
   },
   track: { flex: 1, height: 3, borderRadius: 1 },
+  crystal: { width: 20, alignItems: 'center' },
+  seed: { width: 2, height: 4 },
+  boule: {
+    width: 12,
+    height: 17,
+    borderWidth: 2,
+    borderTopLeftRadius: 3,
+    borderTopRightRadius: 3,
+    borderBottomLeftRadius: 6,
+    borderBottomRightRadius: 6,
+    justifyContent: 'space-evenly',
+    alignItems: 'center',
+  },
+  band: { width: 8, height: 2 },
   envelope: {
     width: 20,
     height: 15,

@@ -1,0 +1,1 @@
+export { GrowthStack as default } from '@/components/screens/growth/growth-stack';

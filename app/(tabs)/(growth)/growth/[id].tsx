@@ -1,0 +1,1 @@
+export { GrowthOrderScreen as default } from '@/components/screens/growth/growth-order-screen';

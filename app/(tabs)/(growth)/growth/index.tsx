@@ -1,0 +1,1 @@
+export { GrowthOrdersScreen as default } from '@/components/screens/growth/growth-orders-screen';

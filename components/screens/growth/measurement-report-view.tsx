@@ -1,0 +1,62 @@
+import { useMemo } from 'react';
+import { StyleSheet, View } from 'react-native';
+import type { ReportView, SheetZone } from '@/components/api/growth-schemas';
+import { SeriesPlot } from '@/components/charts/series-plot';
+import { spacing } from '@/components/theme';
+import { Notice } from '@/components/ui/notice';
+import { AppText } from '@/components/ui/text';
+import { IssueList } from '../materials/upload/issue-list';
+import { reportSeries } from './report-series';
+import { ReportNumbers } from './report-numbers';
+import { verdictLook, ZoneVerdicts } from './zone-verdicts';
+
+export type MeasurementReportViewProps = { report: ReportView; rows: SheetZone[]; lengthMm: number };
+
+/** "2 of 3 zones within band; zone 2 above band." */
+export function verdictSummary(report: ReportView): string {
+  const within = report.verdicts.filter((v) => v.verdict === 'within').length;
+  const off = report.verdicts.filter((v) => v.verdict !== 'within').map((v) => `zone ${v.zone + 1} ${verdictLook[v.verdict].label.toLowerCase()}`);
+  return `${within} of ${report.verdicts.length} zones within band${off.length ? `; ${off.join(', ')}` : ''}.`;
+}
+
+/** What the as-grown piece means: predicted ΔT against the target, each zone's verdict, warnings and the doping along the leg. */
+export function MeasurementReportView({ report, rows, lengthMm }: MeasurementReportViewProps) {
+  const series = useMemo(() => reportSeries(rows, report, lengthMm), [rows, report, lengthMm]);
+  const flagged = report.verdicts.some((v) => v.verdict === 'low' || v.verdict === 'high');
+  return (
+    <View style={styles.wrap} testID="measurement-report">
+      <Notice tone={flagged ? 'danger' : 'ok'} title={flagged ? 'Zones out of tolerance' : 'Every measured zone within tolerance'} testID="report-summary">
+        <AppText>{verdictSummary(report)}</AppText>
+      </Notice>
+      <ReportNumbers report={report} />
+      <ZoneVerdicts verdicts={report.verdicts} rows={rows} />
+      {report.warnings.length > 0 ? (
+        <Notice tone="warning" title={`${report.warnings.length} ${report.warnings.length === 1 ? 'measurement' : 'measurements'} to look at`} testID="report-warnings">
+          {report.warnings.map((w, i) => (
+            <AppText key={i}>{w}</AppText>
+          ))}
+        </Notice>
+      ) : null}
+      <IssueList kind="warning" issues={report.uploadWarnings ?? []} />
+      <View style={styles.plot} testID="report-plot">
+        <AppText variant="bodyStrong" role="heading" aria-level={3}>
+          Target and as-grown doping along the leg
+        </AppText>
+        <SeriesPlot
+          series={series}
+          xLabel="Position from the cold end x (mm)"
+          yLabel="Carrier concentration n (cm⁻³)"
+          yScale="log"
+          height={240}
+          description={`Target doping steps with tolerance band edges and the doping inferred at ${report.points.length} measured positions, against position along the leg`}
+          note="As grown: doping inferred from each position's measurements with the family's model; the engine predicts the leg between them."
+        />
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: spacing.lg },
+  plot: { gap: spacing.sm },
+});

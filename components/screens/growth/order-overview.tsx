@@ -1,0 +1,42 @@
+import { StyleSheet, View } from 'react-native';
+import type { GrowthOrderDto } from '@/shared/api/growth';
+import { spacing } from '@/components/theme';
+import { LinkButton } from '@/components/ui/link-button';
+import { Notice } from '@/components/ui/notice';
+import { AppText } from '@/components/ui/text';
+import { growthStateLook, isClosed, sheetStatusLook } from './growth-state';
+import { StateStepper } from './state-stepper';
+import { StatusPill } from './status-pill';
+
+/** Where the order stands: state and sheet status in words, the steps, the physicist's notes and verdict. */
+export function OrderOverview({ order }: { order: GrowthOrderDto }) {
+  const closed = isClosed(order.state);
+  return (
+    <View style={styles.wrap}>
+      <View style={styles.status}>
+        <View style={styles.pills}>
+          <StatusPill look={growthStateLook[order.state]} size="large" testID="order-state" />
+          {closed ? null : <StatusPill look={sheetStatusLook[order.sheetStatus]} testID="order-sheet-status" />}
+        </View>
+        <LinkButton variant="quiet" label="Run" href={`/runs/${order.runId}`} />
+      </View>
+      <StateStepper state={order.state} />
+      {order.notes ? (
+        <Notice tone="info" title={`Notes from ${order.releasedBy}`} testID="order-notes">
+          <AppText>{order.notes}</AppText>
+        </Notice>
+      ) : null}
+      {closed && order.closeReason ? (
+        <Notice tone={order.state === 'approved' ? 'ok' : 'danger'} title={`${growthStateLook[order.state].label}: reason`} testID="close-reason">
+          <AppText>{order.closeReason}</AppText>
+        </Notice>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: spacing.md },
+  status: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', gap: spacing.md },
+  pills: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: spacing.sm },
+});

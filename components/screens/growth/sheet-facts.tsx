@@ -1,0 +1,40 @@
+import { StyleSheet, View } from 'react-native';
+import type { GrowthOrderDto } from '@/shared/api/growth';
+import type { SheetStep, SheetView } from '@/components/api/growth-schemas';
+import { formatDay } from '@/components/format/date';
+import { colors, spacing } from '@/components/theme';
+import { AppText } from '@/components/ui/text';
+import { ampere, kelvin, mm } from './growth-format';
+
+export type SheetFactsProps = { order: GrowthOrderDto; sheet: SheetView; step: SheetStep };
+
+/** The order and the chosen zoning in a few labelled numbers, each with its unit. */
+export function SheetFacts({ order, sheet, step }: SheetFactsProps) {
+  const facts: Array<[string, string, string]> = [
+    ['design', 'Design', order.designName],
+    ['due', 'Due', order.dueDate ? formatDay(order.dueDate) : 'no due date'],
+    ['released', 'Released', `${formatDay(order.createdAt)} by ${order.releasedBy}`],
+    ['length', 'Leg length', `${mm(sheet.lengthMm)} (zone ≥ ${mm(sheet.minZoneMm)})`],
+    ['deltaT', `Predicted ΔT, ${step.zones} ${step.zones === 1 ? 'zone' : 'zones'}`, `${kelvin(step.deltaT)} at ${ampere(step.current)}`],
+    ['continuous', 'Continuous profile', `ΔT ${kelvin(sheet.continuous.deltaT)}`],
+    ['budget', 'Tolerance', `each band edge loses ≤ ${kelvin(sheet.lossBudget)} of ΔT`],
+    ['check', 'Checks measured at', kelvin(sheet.measureTemperature)],
+  ];
+  return (
+    <View style={styles.grid} testID="sheet-facts">
+      {facts.map(([key, term, value]) => (
+        <View key={key} style={styles.fact} testID={`sheet-fact-${key}`}>
+          <AppText variant="caption" tone="muted">
+            {term}
+          </AppText>
+          <AppText variant="bodyStrong">{value}</AppText>
+        </View>
+      ))}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  grid: { flexDirection: 'row', flexWrap: 'wrap', columnGap: spacing.lg, rowGap: spacing.sm, borderTopWidth: 1, borderTopColor: colors.border, paddingTop: spacing.sm },
+  fact: { flexGrow: 1, flexBasis: 200, gap: spacing.xxs },
+});
