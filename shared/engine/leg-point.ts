@@ -35,7 +35,7 @@ const CLOSE_KELVIN = 0.05;
  * (e.g. thermal runaway at a high current) the search would otherwise spend
  * up to 100 whole-leg integrations before giving up.
  */
-const MAX_SHOTS = 25;
+const MAX_SHOTS = 15;
 /** |T(L) − Th| at the last trial, relative to Th, above which the shot is no solution. */
 const RESIDUAL_LIMIT = 1e-6;
 

@@ -136,20 +136,24 @@ export function operatingSummary(solver: DeviceSolver, c: CheckedConditions, wha
     const q0 = qc(0);
     lower = q0 < 0 && top.heatLoad > 0 ? brentRoot(qc, 0, top.current, q0, top.heatLoad, ROOT_TOLERANCE * reference).root : q0 >= 0 ? 0 : top.current;
   }
-  // Upper end: step up until Qc < 0. A current without a steady state (the
-  // leg running away thermally, or leaving a table's range) is bisected
-  // against the last good one: either Qc turns negative first (then the root
-  // is bracketed) or the range is cut at that edge.
+  // Upper end: probe where a parabola through the peak (zero slope there)
+  // and the last probe puts the root — exact for constant properties, where
+  // Qc(I) is a parabola — and a little beyond it, until Qc < 0. Probing no
+  // further than that keeps clear of currents without a steady state (a
+  // lightly doped hot end can run away thermally), which are costly to try.
+  // If one is hit anyway it is bisected against the last good current:
+  // either Qc turns negative first (the root is bracketed) or the range is
+  // cut at that edge.
   let a = top.current;
   let qa = top.heatLoad;
-  let step = Math.max(0.5 * top.current, 0.25 * reference);
-  let b = a + step;
+  let b = top.current + Math.max(top.current - lower, 0.25 * reference);
   let qb = qc(b);
   while (qb >= 0 && b < MAX_WIDENING * reference) {
+    const drop = top.heatLoad - qb;
+    const reach = drop > 0 ? (b - top.current) * Math.sqrt(top.heatLoad / drop) : 2 * (b - top.current);
     a = b;
     qa = qb;
-    step *= 2;
-    b = a + step;
+    b = top.current + Math.max(1.02 * reach, 1.1 * (b - top.current));
     qb = qc(b);
   }
   for (let k = 0; Number.isNaN(qb) && k < 60 && b - a > ROOT_TOLERANCE * reference; k++) {

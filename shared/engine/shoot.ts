@@ -75,7 +75,8 @@ export type ShotSettings = {
   /**
    * Trials allowed in each phase before the search gives up (not converged).
    * A solvable leg needs a handful; callers that probe currents with no
-   * steady state (operating curves) cap this to fail fast.
+   * steady state (operating curves) cap this to fail fast — and then a
+   * coarse phase that finds no root ends the search at once.
    * @default 100
    */
   maxShots?: number;
@@ -129,10 +130,12 @@ function solveUnknown(
   };
   let guess = settings.guess ?? u.guess;
   let slope = settings.slope ?? u.slope;
+  let coarseFailed = false;
   const coarse = () => {
     const r = secantThenBrent(trial(COARSE_ODE_TOLERANCE, { step: settings.stepHint.step }), guess, slope, u.lower, u.upper, COARSE_ROOT_TOLERANCE * u.scale, settings.maxShots);
     guess = r.root;
     slope = r.slope;
+    coarseFailed = !r.converged;
   };
   if (settings.odeTolerance < COARSE_ODE_TOLERANCE) {
     if (settings.guess === undefined) coarse();
@@ -143,6 +146,11 @@ function solveUnknown(
       if (Number.isFinite(g0) && Math.abs(g0 / slope) <= WARM_START_REACH * u.scale) guess -= g0 / slope;
       else coarse();
     }
+  }
+  // With capped shots (fail fast), a coarse phase that found no root ends the search.
+  if (coarseFailed && settings.maxShots !== undefined) {
+    const result = last as IntegrationResult;
+    return { root: guess, slope, rootError: 0, converged: false, last: result, shots, evaluations };
   }
   const fine = secantThenBrent(trial(settings.odeTolerance, settings.stepHint), guess, slope, u.lower, u.upper, settings.tolerance * u.scale, settings.maxShots);
   const result = last as IntegrationResult;
