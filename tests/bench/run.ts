@@ -10,6 +10,10 @@
  *    Th = 300 K, bounds 1e18–1e20 cm⁻³): time, evaluations, ΔT against the
  *    baselines, and the time at which the best design came within 0.05 K of
  *    the optimum, against a reference run at 100× tighter tolerance.
+ * 4. Operating curves and modules on the bundled detector examples: one
+ *    leg's curve (40 points), a couple's, the 31-couple module with plates
+ *    versus current and versus ΔT, the N-couple trade, and the whole
+ *    `leg module` command.
  */
 import { createRequire } from 'node:module';
 import { cpus, loadavg } from 'node:os';
@@ -19,6 +23,11 @@ import { gradedLeg, uniformLeg, type Leg } from '../../shared/engine/leg-profile
 import { optimizeLeg, type BaselineReport } from '../../shared/engine/run-case';
 import { solveLegProblem } from '../../shared/engine/solve-leg';
 import { integrateLeg } from '../../shared/engine/integrate';
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { parseCurvesCase, parseModuleCase } from '../../shared/engine/device-case';
+import { coupleCurve, moduleCurve, moduleDeltaTCurve, moduleTrade, operatingCurve } from '../../shared/engine/module';
+import { runModule } from '../../shared/engine/run-device-case';
 
 type OdexModule = { Solver: new (n: number) => { absoluteTolerance: number; relativeTolerance: number; maxSteps: number; solve(f: (x: number, y: number[]) => number[], x0: number, y0: number[], x1: number): { y: number[] } } };
 // odex ships its TypeScript sources, which do not pass our strict type-check:
@@ -147,6 +156,50 @@ function main(): void {
   say(`  baselines: best uniform ${b.uniform.deltaT.toFixed(4)} K at ${b.uniform.perCm3.toExponential(3)} cm⁻³, ${b.uniform.current.toFixed(3)} A; local-best-zT ${b.localBestZt.deltaT.toFixed(4)} K at ${b.localBestZt.current.toFixed(3)} A`);
   say(`  gain of grading over the best uniform leg: ${(runs[0].deltaT - b.uniform.deltaT).toFixed(3)} K`);
   say(`  optimum: current ${last?.current.toFixed(4)} A, doping ${(last?.doping?.perCm3 ?? []).map((v) => v.toExponential(2)).join(' ')} cm⁻³`);
+
+  curvesAndModules(say);
+}
+
+/** Median wall time, fastest run and median CPU time of fn over runs (after one warm-up). */
+function timeWithCpu<T>(fn: () => T, runs: number): { ms: number; fastest: number; cpu: number; result: T } {
+  let result = fn();
+  const wall: number[] = [];
+  const cpu: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const t = performance.now();
+    const c0 = process.cpuUsage();
+    result = fn();
+    const c = process.cpuUsage(c0);
+    wall.push(performance.now() - t);
+    cpu.push((c.user + c.system) / 1000);
+  }
+  return { ms: median(wall), fastest: Math.min(...wall), cpu: median(cpu), result };
+}
+
+function curvesAndModules(say: (s: string) => void): void {
+  const example = (name: string): unknown => JSON.parse(readFileSync(join(__dirname, '..', '..', 'shared', 'engine', 'examples', name), 'utf8'));
+  const legCase = parseCurvesCase(example('detector-leg-curves.json'));
+  const moduleCase = parseModuleCase(example('detector-module.json'));
+  const m = moduleCase.module;
+  const couple = { p: { ...m.p }, n: { ...m.n } };
+  say('');
+  say('operating curves and modules (detector examples: graded band p leg, uniform band n leg, contacts 5e-10 Ω·m², ΔT = 40 K, Th = 300 K)');
+  const line = (name: string, r: { ms: number; fastest: number; cpu: number }, solves: number, extra: string) =>
+    say(`  ${name.padEnd(44)} median ${r.ms.toFixed(1)} ms, fastest ${r.fastest.toFixed(1)} ms, CPU ${r.cpu.toFixed(1)} ms, ${solves} leg solves${extra}`);
+  const leg = timeWithCpu(() => operatingCurve(legCase.leg, legCase.conditions, legCase.options), 15);
+  line('one leg, 40 points', leg, leg.result.evaluations, `; I(max Qc) ${leg.result.maxHeatLoad.current.toFixed(4)} A, I(max COP) ${leg.result.maxCop?.current.toFixed(4)} A`);
+  const pair = timeWithCpu(() => coupleCurve(couple, moduleCase.conditions, { points: 40 }), 15);
+  line('one couple (no plates), 40 points', pair, pair.result.evaluations, '');
+  const mod = timeWithCpu(() => moduleCurve(m, moduleCase.conditions, moduleCase.options), 9);
+  line('31-couple module with plates, 40 points', mod, mod.result.evaluations, `; Qc,max ${mod.result.maxHeatLoad.heatLoad.toFixed(3)} W at ${mod.result.maxHeatLoad.current.toFixed(3)} A, ${mod.result.maxHeatLoad.voltage.toFixed(3)} V`);
+  const dt = timeWithCpu(() => moduleDeltaTCurve(m, { hotSide: moduleCase.conditions.hotSide }, { points: 21 }), 5);
+  line('module versus ΔT, 21 points, max-Qc current', dt, dt.result.evaluations, `; ΔTmax ${(dt.result.hotSide - dt.result.deltaTMax.coldSide).toFixed(3)} K at ${dt.result.deltaTMax.current.toFixed(3)} A`);
+  const fixed = timeWithCpu(() => moduleDeltaTCurve(m, { hotSide: moduleCase.conditions.hotSide }, { points: 21, current: 3 }), 5);
+  line('module versus ΔT, 21 points, at 3 A', fixed, fixed.result.evaluations, '');
+  const trade = timeWithCpu(() => moduleTrade(m, moduleCase.conditions), 5);
+  line(`N-couple trade, ${trade.result.rows.length} rows`, trade, trade.result.evaluations, '');
+  const all = timeWithCpu(() => runModule(moduleCase), 3);
+  line('`leg module` on the example (all three)', all, all.result.versusCurrent.evaluations + all.result.versusDeltaT.evaluations + all.result.trade.evaluations, '');
 }
 
 main();
