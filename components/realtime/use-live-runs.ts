@@ -1,6 +1,7 @@
 import { useCallback, useState } from 'react';
+import { useQueryClient } from '@tanstack/react-query';
 import type { RunProgress, RunSummary } from '@/shared/api/runs';
-import { isFinished } from '@/components/api/runs';
+import { isFinished, runsQueryKey } from '@/components/api/runs';
 import { runRoom } from './events';
 import { useRealtime, type ConnectionState } from './use-realtime';
 import { useInvalidateOnRunState } from './use-run-events';
@@ -22,12 +23,19 @@ export function useLiveRuns(runs: readonly RunSummary[] | undefined, listen = fa
   const [progress, setProgress] = useState<Record<string, RunProgress>>({});
   const invalidate = useInvalidateOnRunState();
   const active = (runs ?? []).filter((r) => !isFinished(r.state)).map((r) => r.id);
+  const queryClient = useQueryClient();
   const onProgress = useCallback((p: RunProgress) => setProgress((all) => ({ ...all, [p.runId]: p })), []);
+  // Lists may have changed between loading and joining the rooms.
+  const onWatching = useCallback(() => {
+    void queryClient.invalidateQueries({ queryKey: [...runsQueryKey, 'list'] });
+    void queryClient.invalidateQueries({ queryKey: [...runsQueryKey, 'sweep'] });
+  }, [queryClient]);
   const connection = useRealtime({
     rooms: active.map(runRoom),
     enabled: runs !== undefined && (listen || active.length > 0),
     onProgress,
     onState: invalidate,
+    onWatching,
   });
   return { progress, connection };
 }

@@ -14,6 +14,12 @@ export type RealtimeOptions = {
   enabled: boolean;
   onProgress?: (progress: RunProgress) => void;
   onState?: (event: RunStateEvent) => void;
+  /**
+   * After each (re)connect, once every room has answered its `watch`: from
+   * here on no event is missed, so this is the moment to refetch whatever
+   * may have changed before (e.g. a run that started while the page loaded).
+   */
+  onWatching?: () => void;
 };
 
 /**
@@ -22,14 +28,14 @@ export type RealtimeOptions = {
  * every (re)connect and when the list changes; events are checked against
  * the shared schemas before they reach the handlers.
  */
-export function useRealtime({ rooms, enabled, onProgress, onState }: RealtimeOptions): ConnectionState {
+export function useRealtime({ rooms, enabled, onProgress, onState, onWatching }: RealtimeOptions): ConnectionState {
   const [state, setState] = useState<ConnectionState>(enabled ? 'connecting' : 'off');
   const socketRef = useRef<Socket | null>(null);
   const roomsRef = useRef<readonly string[]>(rooms);
-  const handlers = useRef({ onProgress, onState });
+  const handlers = useRef({ onProgress, onState, onWatching });
   useEffect(() => {
-    handlers.current = { onProgress, onState };
-  }, [onProgress, onState]);
+    handlers.current = { onProgress, onState, onWatching };
+  }, [onProgress, onState, onWatching]);
 
   useEffect(() => {
     if (!enabled) {
@@ -41,7 +47,14 @@ export function useRealtime({ rooms, enabled, onProgress, onState }: RealtimeOpt
     setState('connecting');
     socket.on('connect', () => {
       setState('live');
-      for (const room of roomsRef.current) socket.emit('watch', room, () => undefined);
+      const rooms = roomsRef.current;
+      let waiting = rooms.length;
+      const answered = () => {
+        waiting -= 1;
+        if (waiting === 0) handlers.current.onWatching?.();
+      };
+      if (rooms.length === 0) handlers.current.onWatching?.();
+      for (const room of rooms) socket.emit('watch', room, answered);
     });
     socket.on('disconnect', () => setState('offline'));
     socket.on('connect_error', () => setState('offline'));

@@ -1,4 +1,6 @@
 import { useCallback, useState } from 'react';
+import { useQueryClient } from '@tanstack/react-query';
+import { runDetailKey } from '@/components/api/runs';
 import type { RunProgress } from '@/shared/api/runs';
 import { runRoom } from './events';
 import { useRealtime, type ConnectionState } from './use-realtime';
@@ -33,6 +35,9 @@ export function useRunProgress(runId: string, active: boolean): RunProgressState
   const [latest, setLatest] = useState<RunProgress | null>(null);
   const [live, setLive] = useState<TracePoint[]>([]);
   const invalidate = useInvalidateOnRunState();
+  const queryClient = useQueryClient();
+  // The run may have started (or ended) between loading the page and joining its room.
+  const onWatching = useCallback(() => void queryClient.invalidateQueries({ queryKey: runDetailKey(runId) }), [queryClient, runId]);
   const onProgress = useCallback(
     (p: RunProgress) => {
       if (p.runId !== runId) return;
@@ -46,6 +51,7 @@ export function useRunProgress(runId: string, active: boolean): RunProgressState
     enabled: active && runId.length > 0,
     onProgress,
     onState: invalidate,
+    onWatching,
   });
   return { latest, live, connection };
 }

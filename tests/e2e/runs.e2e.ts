@@ -12,7 +12,8 @@ import {
   type ViewportName,
 } from './browser';
 
-jest.setTimeout(420_000);
+// A loaded 2-core machine can take minutes for a 120-start run; a quiet one takes tens of seconds.
+jest.setTimeout(900_000);
 
 /** The demo p-type family (README, "Demo lab"). */
 const familyRadio = /^NL-P7 .*p-type band model \(p\)$/;
@@ -81,7 +82,7 @@ async function fillDesign(page: Page, name: string): Promise<void> {
   await visible(page.getByTestId('field-name')).fill(name);
   await visible(page.getByRole('radio', { name: familyRadio })).click();
   await visible(page.getByTestId('field-lengthMm')).fill('1.5');
-  await visible(page.getByTestId('field-controlPoints')).fill('8');
+  await visible(page.getByTestId('field-controlPoints')).fill('6');
   await visible(page.getByTestId('field-starts')).fill(String(starts));
 }
 
@@ -144,7 +145,7 @@ describe('a physicist optimises a leg in a real browser', () => {
   it('opens the result with its numbers and plots drawn', async () => {
     const page = await physicist.newPage('desktop');
     await page.goto(`${baseUrl}/runs/${runId}`);
-    await visible(page.getByTestId('run-state')).filter({ hasText: 'Succeeded' }).waitFor({ timeout: 300_000 });
+    await visible(page.getByTestId('run-state')).filter({ hasText: 'Succeeded' }).waitFor({ timeout: 720_000 });
     const headline = visible(page.getByTestId('headline-deltaT'));
     expect(await headline.innerText()).toMatch(/\d+(\.\d+)?\sK/);
     expect(await visible(page.getByTestId('caution')).innerText()).toMatch(/hot side can burn/);

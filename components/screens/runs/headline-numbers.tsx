@@ -15,7 +15,7 @@ function tiles(r: RunResult, objective: Objective): Tile[] {
     { key: 'voltage', label: 'Voltage V', value: quantity(r.voltage, 'V') },
     { key: 'power', label: 'Input power P', value: quantity(r.power, 'W') },
     { key: 'heatLoad', label: 'Heat load Qc', value: quantity(r.heatLoad, 'W'), lead: objective === 'maxHeatLoad' },
-    { key: 'cop', label: 'COP', value: r.cop === null ? '– (no power)' : quantity(r.cop, ''), lead: objective === 'maxCop' },
+    { key: 'cop', label: 'COP', value: r.cop === null ? '– (no power)' : r.heatLoad === 0 ? '0 (no heat load)' : quantity(r.cop, ''), lead: objective === 'maxCop' },
     { key: 'heatRejected', label: 'Heat rejected Qh', value: quantity(r.heatRejected, 'W') },
   ];
   return list;
@@ -71,7 +71,7 @@ export function Gains({ result, objective }: { result: RunResult; objective: Obj
         const percent = g.baseline !== 0 ? ` (${g.gain >= 0 ? '+' : ''}${((100 * g.gain) / Math.abs(g.baseline)).toFixed(1)} %)` : '';
         return (
           <View key={g.key} style={styles.gainRow} testID={`gain-${g.key}`}>
-            <AppText variant="heading">{`${g.gain >= 0 ? '+' : ''}${formatObjective(objective, g.gain, 3)}${percent}`}</AppText>
+            <AppText variant="heading">{`${g.gain >= 0 ? '+' : ''}${formatObjective(objective, g.gain, 4)}${percent}`}</AppText>
             <AppText tone="muted">{`${symbol} over the ${g.name}: ${formatObjective(objective, g.baseline)}, ${g.detail}`}</AppText>
           </View>
         );

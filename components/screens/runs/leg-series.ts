@@ -20,8 +20,8 @@ export const legQuantities: Record<LegQuantity, QuantityInfo> = {
 
 export const positionAxis = 'Position from the cold end x (mm)';
 
-/** Marks: the optimum solid, the baselines dashed and dash-dot, so they read without colour. */
-export const legMarks = { optimum: chartMarks[0], uniform: chartMarks[1], localBestZt: chartMarks[3] } as const;
+/** Marks: the optimum solid, the baselines dashed and dotted, so they read without colour. */
+export const legMarks = { optimum: chartMarks[0], uniform: chartMarks[1], localBestZt: chartMarks[2] } as const;
 
 function along(profile: LegProfileData, quantity: LegQuantity): PlotPoint[] {
   const value = legQuantities[quantity].value;

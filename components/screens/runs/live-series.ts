@@ -22,13 +22,31 @@ export function thin<T>(points: readonly T[], max: number): T[] {
 
 const maxChartPoints = 400;
 
-/** Best so far as a line and each report's objective as markers, against elapsed time. */
-export function objectiveSeries(trace: readonly TracePoint[]): PlotSeries[] {
+/**
+ * Below this a tried point is off the chart: a random start can begin far
+ * below the best (even at a negative ΔT), and one such point would squash
+ * the best-so-far line flat.
+ */
+export function objectiveFloor(trace: readonly TracePoint[]): number {
+  const best = trace.map((p) => p.best).filter(Number.isFinite);
+  if (best.length === 0) return -Infinity;
+  const low = Math.min(...best);
+  const high = Math.max(...best);
+  return low - Math.max(high - low, 0.25 * Math.abs(high));
+}
+
+/** Best so far as a line and each report's objective as markers, against elapsed time; `hidden` counts points below the floor. */
+export function objectiveSeries(trace: readonly TracePoint[]): { series: PlotSeries[]; hidden: number } {
   const shown = thin(trace, maxChartPoints);
-  return [
-    { key: 'best', label: 'Best so far', mark: chartMarks[0], line: shown.map((p) => ({ x: p.seconds, y: p.best })) },
-    { key: 'latest', label: 'Point being tried', mark: chartMarks[2], line: [], points: shown.map((p) => ({ x: p.seconds, y: p.objective })) },
-  ];
+  const floor = objectiveFloor(shown);
+  const tried = shown.filter((p) => p.objective >= floor);
+  return {
+    series: [
+      { key: 'best', label: 'Best so far', mark: chartMarks[0], line: shown.map((p) => ({ x: p.seconds, y: p.best })) },
+      { key: 'latest', label: 'Point being tried', mark: chartMarks[2], line: [], points: tried.map((p) => ({ x: p.seconds, y: p.objective })) },
+    ],
+    hidden: shown.length - tried.length,
+  };
 }
 
 /** The profile the optimiser holds now, between the grower's doping bounds. */

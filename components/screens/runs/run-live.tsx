@@ -40,6 +40,7 @@ export function RunLive({ detail, live }: { detail: RunDetail; live: RunProgress
   const objective = asObjective(detail.run.objective);
   const info = objectiveInfo[objective];
   const trace = mergeTrace(detail.trace, live.live);
+  const chart = objectiveSeries(trace);
   return (
     <>
       <Section title="Progress" hint="Everyone watching sees the same numbers; you can leave this page, the run goes on.">
@@ -52,10 +53,11 @@ export function RunLive({ detail, live }: { detail: RunDetail; live: RunProgress
         <ChartCard title={`${info.symbol} during the search`} hint="Against elapsed time: every start restarts the iteration count." testID="live-objective">
           {trace.length > 0 ? (
             <SeriesPlot
-              series={objectiveSeries(trace)}
+              series={chart.series}
               xLabel="Elapsed time (s)"
               yLabel={`${info.symbol}${info.unit ? ` (${info.unit})` : ' (dimensionless)'}`}
               description={`${info.symbol} of each reported point and best so far against elapsed time, ${trace.length} reports`}
+              note={chart.hidden > 0 ? `${chart.hidden} tried ${chart.hidden === 1 ? 'point lies' : 'points lie'} far below the best (early steps of a random start) and ${chart.hidden === 1 ? 'is' : 'are'} not drawn.` : undefined}
             />
           ) : (
             <AppText tone="muted">The first report arrives once the worker has computed the baselines.</AppText>

@@ -30,59 +30,71 @@ function bestText(run: RunSummary, live?: RunProgress): string {
   return `${prefix} ${objectiveInfo[objective].symbol} ${formatObjective(objective, best)}`;
 }
 
-/** One run in a list: state in words, best objective with its unit, live progress; opens the run. */
-export function RunRow({ run, live, showDesign = false, sweepLabel, selection }: RunRowProps) {
+function RowBody({ run, live, showDesign, sweepLabel }: Omit<RunRowProps, 'selection'>) {
   const active = !isFinished(run.state);
-  const fraction = live?.fractionDone ?? run.fractionDone;
+  return (
+    <View style={styles.body}>
+      <View style={styles.top}>
+        {showDesign ? (
+          <AppText variant="bodyStrong" style={styles.grow} numberOfLines={2}>
+            {run.designName}
+          </AppText>
+        ) : null}
+        {sweepLabel ? (
+          <AppText variant="bodyStrong" style={styles.grow}>
+            {sweepLabel}
+          </AppText>
+        ) : null}
+        {!showDesign && !sweepLabel ? <View style={styles.grow} /> : null}
+        <Glyph name="chevron-right" color={colors.textFaint} />
+      </View>
+      <View style={styles.facts}>
+        <RunStateBadge state={run.state} />
+        <AppText variant="mono">{bestText(run, live)}</AppText>
+      </View>
+      {active ? (
+        <ProgressBar
+          compact
+          fraction={live?.fractionDone ?? run.fractionDone}
+          label={`Progress of the run of ${run.designName}`}
+          caption={live?.phase ?? (run.state === 'queued' ? 'waiting for a worker' : 'running')}
+        />
+      ) : null}
+      {run.state === 'failed' && run.error ? (
+        <AppText variant="caption" tone="danger" numberOfLines={2}>
+          {run.error}
+        </AppText>
+      ) : null}
+      <AppText variant="caption" tone="muted">{`${formatDateTime(run.createdAt)} · ${run.launchedBy}`}</AppText>
+    </View>
+  );
+}
+
+/** One run in a list: state in words, best objective with its unit, live progress; opens the run. */
+export function RunRow({ selection, ...row }: RunRowProps) {
+  const { run } = row;
   return (
     <View style={styles.row} testID={`run-row-${run.id}`}>
-      {selection ? (
-        <Chip label="Compare" selected={selection.selected} onPress={selection.onToggle} testID={`compare-${run.id}`} />
-      ) : null}
       <Link href={`/runs/${run.id}`} asChild>
         <Pressable style={styles.link} aria-label={`Run of ${run.designName}, ${run.state}`}>
-          <View style={styles.body}>
-            <View style={styles.top}>
-              <RunStateBadge state={run.state} />
-              {showDesign ? (
-                <AppText variant="bodyStrong" style={styles.grow} numberOfLines={1}>
-                  {run.designName}
-                </AppText>
-              ) : (
-                <View style={styles.grow} />
-              )}
-              <Glyph name="chevron-right" color={colors.textFaint} />
-            </View>
-            <View style={styles.facts}>
-              {sweepLabel ? <AppText variant="label">{sweepLabel}</AppText> : null}
-              <AppText variant="mono">{bestText(run, live)}</AppText>
-              <AppText variant="caption" tone="muted">{`${formatDateTime(run.createdAt)} · ${run.launchedBy}`}</AppText>
-            </View>
-            {active ? <ProgressBar compact fraction={fraction} label={`Progress of the run of ${run.designName}`} caption={live?.phase ?? (run.state === 'queued' ? 'waiting for a worker' : 'running')} /> : null}
-            {run.state === 'failed' && run.error ? (
-              <AppText variant="caption" tone="danger" numberOfLines={2}>
-                {run.error}
-              </AppText>
-            ) : null}
-          </View>
+          <RowBody {...row} />
         </Pressable>
       </Link>
+      {selection ? (
+        <View style={styles.select}>
+          <Chip label="Compare" selected={selection.selected} onPress={selection.onToggle} testID={`compare-${run.id}`} />
+        </View>
+      ) : null}
     </View>
   );
 }
 
 const styles = StyleSheet.create({
-  row: {
-    flexDirection: 'row',
-    alignItems: 'flex-start',
-    gap: spacing.md,
-    paddingVertical: spacing.md,
-    borderTopWidth: 1,
-    borderTopColor: colors.border,
-  },
-  link: { flex: 1 },
+  row: { paddingVertical: spacing.md, borderTopWidth: 1, borderTopColor: colors.border, gap: spacing.sm },
+  link: { width: '100%' },
   body: { gap: spacing.xs },
   top: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm },
   grow: { flex: 1 },
-  facts: { flexDirection: 'row', flexWrap: 'wrap', columnGap: spacing.lg, rowGap: spacing.xxs, alignItems: 'baseline' },
+  facts: { flexDirection: 'row', flexWrap: 'wrap', columnGap: spacing.md, rowGap: spacing.xxs, alignItems: 'center' },
+  select: { flexDirection: 'row' },
 });

@@ -43,6 +43,17 @@ describe('RunScreen', () => {
     expect(screen.getByTestId('connection-live')).toBeOnTheScreen();
   });
 
+  it('refetches once it watches the run: a start missed while the page loaded is not missed', async () => {
+    let detail = runDetail('queued');
+    show(() => detail);
+    expect(await screen.findByTestId('run-state')).toHaveTextContent(/Queued/);
+    // The worker claimed the run before the socket joined its room: no event will say so.
+    detail = runDetail('running', { progress: progress({ fractionDone: 0.1 }) });
+    act(() => lastSocket().serverConnect());
+    await waitFor(() => expect(screen.getByTestId('run-state')).toHaveTextContent(/Running/));
+    expect(screen.getByTestId('run-progress').props['aria-valuenow']).toBe(10);
+  });
+
   it('hides cancel from a viewer', async () => {
     show(runDetail('running', { progress: progress() }), 'viewer');
     await screen.findByTestId('run-progress');
@@ -83,13 +94,13 @@ describe('RunScreen', () => {
     const result = detail.result as { deltaT: number; current: number; baselines: { uniform: { objective: number } } };
     show(detail);
     expect(await screen.findByTestId('run-state')).toHaveTextContent(/Succeeded/);
-    expect(screen.getByTestId('headline-deltaT')).toHaveTextContent(new RegExp(`objective.*${result.deltaT.toPrecision(4).replace('.', '\\.')}\\sK`));
+    expect(screen.getByTestId('headline-deltaT')).toHaveTextContent(new RegExp(`objective.*${String(Number(result.deltaT.toPrecision(4))).replace('.', '\\.')}\\sK`));
     expect(screen.getByTestId('headline-current')).toHaveTextContent(/\sA$/);
     expect(screen.getByTestId('headline-voltage')).toHaveTextContent(/\sV$/);
     expect(screen.getByTestId('caution')).toHaveTextContent(/Model prediction.*measure.*hot side can burn.*safety rules.*local electrical codes/);
     const gain = result.deltaT - result.baselines.uniform.objective;
     expect(gain).toBeGreaterThan(0);
-    expect(screen.getByTestId('gain-uniform')).toHaveTextContent(new RegExp(`^\\+${gain.toPrecision(3).replace('.', '\\.')}\\sK.*best uniform leg`));
+    expect(screen.getByTestId('gain-uniform')).toHaveTextContent(new RegExp(`^\\+${String(Number(gain.toPrecision(4))).replace('.', '\\.')}\\sK.*best uniform leg`));
     expect(screen.getByTestId('gain-localBestZt')).toHaveTextContent(/local-best-zT leg/);
     // Baselines overlaid on every plot along the leg (solved in the browser for S, σ, κ, zT and T).
     for (const q of ['doping', 'temperature', 'seebeck', 'sigma', 'kappa', 'zT']) {

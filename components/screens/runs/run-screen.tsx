@@ -11,6 +11,7 @@ import { Section } from '@/components/ui/form-section';
 import { LinkButton } from '@/components/ui/link-button';
 import { ErrorState, LoadingState } from '@/components/ui/state-views';
 import { DesignFacts } from '../designs/design-facts';
+import { ReleaseButton } from '../growth/release-button';
 import { formatSweepValue, objectiveInfo, type SweepParameter } from './run-format';
 import { RunLive } from './run-live';
 import { RunOutcome } from './run-outcome';
@@ -46,6 +47,7 @@ function RunPage({ detail }: { detail: RunDetail }) {
           {run.sweepId ? <LinkButton variant="quiet" label={sweep ?? 'Sweep'} href={`/sweeps/${run.sweepId}`} /> : null}
         </View>
       </View>
+      {run.state === 'succeeded' ? <ReleaseButton runId={run.id} /> : null}
       {active ? <RunLive detail={detail} live={live} /> : <RunOutcome detail={detail} />}
       <Section title="What was run" hint="The design and family version as frozen when the run was launched.">
         <DesignFacts design={design} testID="run-design" />

@@ -45,6 +45,7 @@ export function RunsScreen() {
   const toggle = (id: string) =>
     setSelected((s) => (s.includes(id) ? s.filter((x) => x !== id) : s.length < maxCompared ? [...s, id] : s));
   const shown = (runs ?? []).filter(keep(filter));
+  const anyActive = (runs ?? []).some((r) => !isFinished(r.state));
   return (
     <ScreenFrame title="Runs" subtitle="Optimisation runs of your team, newest first" refreshing={query.isRefetching} onRefresh={() => void query.refetch()}>
       <View style={styles.toolbar}>
@@ -53,7 +54,7 @@ export function RunsScreen() {
             <Chip key={f.key} role="tab" label={f.label} selected={filter === f.key} onPress={() => setFilter(f.key)} />
           ))}
         </View>
-        <ConnectionLine state={live.connection} />
+        {anyActive || live.connection === 'offline' ? <ConnectionLine state={live.connection} /> : null}
       </View>
       <CompareBar selected={selected} onClear={() => setSelected([])} />
       {query.isPending ? <LoadingState label="Loading runs…" /> : null}

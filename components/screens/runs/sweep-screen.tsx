@@ -34,7 +34,7 @@ function SweepPage({ sweep }: { sweep: Sweep }) {
     >
       <Section title="Progress" hint="Each value is its own run; free workers take them in parallel.">
         <ProgressBar fraction={sweepFraction(sweep.runs, live.progress)} label="Sweep progress" caption={`${done} of ${sweep.runs.length} runs finished · estimate`} testID="sweep-progress" />
-        <ConnectionLine state={live.connection} />
+        {done < sweep.runs.length || live.connection === 'offline' ? <ConnectionLine state={live.connection} /> : null}
       </Section>
       <ChartCard title={`${info.symbol} against ${param.label.toLowerCase()}`} hint="Points appear as runs finish. Model predictions." testID="sweep-plot">
         {series.length > 0 ? (
