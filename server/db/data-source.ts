@@ -1,22 +1,23 @@
 import 'reflect-metadata';
 import { DataSource } from 'typeorm';
-import { AppUser, CapturedMail, Design, Invitation, MaterialFamily, MaterialFamilyVersion, PasswordReset, Run, Sweep, Team, WorkerHeartbeat, GrowthOrder } from './entities';
+import { AppUser, CapturedMail, Design, Invitation, MaterialFamily, MaterialFamilyVersion, PasswordReset, Run, Sweep, Team, WorkerHeartbeat, GrowthOrder, ModuleDesign } from './entities';
 import { Foundation1764612000000 } from './migrations/1764612000000-foundation';
 import { FamilyVersions1764615600000 } from './migrations/1764615600000-family-versions';
 import { Accounts1764619200000 } from './migrations/1764619200000-accounts';
 import { DesignsAndRuns1764622800000 } from './migrations/1764622800000-designs-and-runs';
 import { GrowthOrders1764626400000 } from './migrations/1764626400000-growth-orders';
+import { ModuleDesigns1764630000000 } from './migrations/1764630000000-module-designs';
 import { SnakeNamingStrategy } from './naming';
 
 /** Migrations in order; a new one is appended here as well as written. */
-export const migrations = [Foundation1764612000000, FamilyVersions1764615600000, Accounts1764619200000, DesignsAndRuns1764622800000, GrowthOrders1764626400000];
+export const migrations = [Foundation1764612000000, FamilyVersions1764615600000, Accounts1764619200000, DesignsAndRuns1764622800000, GrowthOrders1764626400000, ModuleDesigns1764630000000];
 
 export function createDataSource(databaseUrl: string, applicationName = 'frostgrade'): DataSource {
   return new DataSource({
     type: 'postgres',
     url: databaseUrl,
     applicationName,
-    entities: [Team, MaterialFamily, MaterialFamilyVersion, CapturedMail, WorkerHeartbeat, AppUser, Invitation, PasswordReset, Design, Run, Sweep, GrowthOrder],
+    entities: [Team, MaterialFamily, MaterialFamilyVersion, CapturedMail, WorkerHeartbeat, AppUser, Invitation, PasswordReset, Design, Run, Sweep, GrowthOrder, ModuleDesign],
     migrations,
     migrationsTableName: 'schema_migration',
     namingStrategy: new SnakeNamingStrategy(),

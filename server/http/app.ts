@@ -10,6 +10,7 @@ import { authRoutes } from '../routes/auth-routes';
 import { designRoutes } from '../routes/design-routes';
 import { familyRoutes } from '../routes/family-routes';
 import { growthRoutes } from '../routes/growth-routes';
+import { moduleRoutes } from '../routes/module-routes';
 import { systemRoutes } from '../routes/system-routes';
 import { teamRoutes } from '../routes/team-routes';
 import { sessionReader } from './access';
@@ -29,6 +30,7 @@ export function apiRoutes(d: AppDeps): RouteSpec[] {
     ...familyRoutes(d.ds),
     ...designRoutes({ ds: d.ds, boss: d.boss, runQueue: d.env.runQueue }),
     ...growthRoutes({ ds: d.ds, boss: d.boss, mailer: d.mailer, appOrigin: d.env.appOrigin }),
+    ...moduleRoutes(d.ds),
   ];
 }
 

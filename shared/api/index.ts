@@ -8,3 +8,4 @@ export * from './auth';
 export * from './designs';
 export * from './runs';
 export * from './growth';
+export * from './modules';

@@ -75,6 +75,11 @@ const policy: Record<string, 'public' | Role[]> = {
   'POST /growth-orders/:id/measurements': ['admin', 'grower'],
   'GET /growth-orders/:id/sheet.csv': all.slice(),
   'GET /growth-orders/:id/sheet.json': all.slice(),
+  'GET /modules': runReaders,
+  'POST /modules': designers,
+  'GET /modules/:id': runReaders,
+  'PUT /modules/:id': designers,
+  'GET /modules/:id/curves.csv': runReaders,
 };
 
 const key = (s: RouteSpec): string => `${s.method.toUpperCase()} ${s.path}`;
@@ -95,6 +100,7 @@ const validBody: Record<string, object> = {
   'PUT /growth-orders/:id/state': { state: 'accepted' },
   'POST /growth-orders/:id/close': { verdict: 'rejected', reason: 'outsider' },
   'PUT /growth-orders/:id/sheet': { zones: 2 },
+  'PUT /modules/:id': { name: 'outsider', p: { kind: 'family', familyId: '00000000-0000-4000-8000-000000000000', perCm3: 1e19, lengthMm: 1, areaMm2: 1 }, n: { kind: 'family', familyId: '00000000-0000-4000-8000-000000000000', perCm3: 1e19, lengthMm: 1, areaMm2: 1 }, hotSide: 300, deltaT: 30 },
 };
 
 function call(client: ReturnType<typeof request.agent>, s: RouteSpec, path: string) {
@@ -130,7 +136,15 @@ it('a member of another team gets 404 for every object of this team, and nothing
   const sweepId = (await lab.post(`/api/designs/${designId}/sweeps`).send({ parameter: 'hotSide', values: [295, 300] })).body.sweep.id as string;
   await eventually(async () => ((await lab.get(`/api/runs/${runId}`)).body.run.state === 'succeeded' ? true : undefined), 60);
   const orderId = (await lab.post(`/api/runs/${runId}/release`).send({ batch: `Matrix ${Date.now()}` })).body.order.id as string;
-  const ids: Record<string, string> = { '/families/': family.id, '/team/members/': viewer.id, '/team/invitations/': randomUUID(), '/designs/': designId, '/runs/': runId, '/sweeps/': sweepId, '/growth-orders/': orderId };
+  // The run's leg on its own carrier's side; a band family of the other carrier at uniform doping opposite.
+  const other = (await lab.get('/api/families')).body.families.find((f: { carrier: string; kind: string }) => f.carrier !== family.carrier && f.kind === 'band');
+  const fromRun = { kind: 'run', runId };
+  const fromFamily = { kind: 'family', familyId: other.id, perCm3: 2e19, lengthMm: 1.5, areaMm2: 1 };
+  const legs = family.carrier === 'p' ? { p: fromRun, n: fromFamily } : { p: fromFamily, n: fromRun };
+  const moduleRes = await lab.post('/api/modules').send({ name: `Matrix module ${Date.now()}`, ...legs, hotSide: 300, deltaT: 30, couples: 10 });
+  expect(moduleRes.body.errors ?? []).toEqual([]);
+  const moduleId = moduleRes.body.module.id as string;
+  const ids: Record<string, string> = { '/families/': family.id, '/team/members/': viewer.id, '/team/invitations/': randomUUID(), '/designs/': designId, '/runs/': runId, '/sweeps/': sweepId, '/growth-orders/': orderId, '/modules/': moduleId };
   for (const s of specs.filter((x) => x.path.includes(':id'))) {
     const prefix = Object.keys(ids).find((p) => s.path.startsWith(p))!;
     const outsider = await signedIn(ctx, demo.otherTeamAdmin);

@@ -32,8 +32,8 @@ export function spawnWorker(queue: string, staleSeconds = 3): Promise<SpawnedWor
 export async function stopWorker(w: SpawnedWorker): Promise<void> {
   if (w.child.exitCode !== null || w.child.signalCode !== null) return;
   await new Promise<void>((resolve) => {
-    w.child.once('exit', () => resolve());
+    const force = setTimeout(() => w.child.kill('SIGKILL'), 20000);
+    w.child.once('exit', () => { clearTimeout(force); resolve(); });
     w.child.kill('SIGTERM');
-    setTimeout(() => w.child.kill('SIGKILL'), 20000).unref();
   });
 }

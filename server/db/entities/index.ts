@@ -10,3 +10,4 @@ export { Design } from './design';
 export { Run } from './run';
 export { Sweep } from './sweep';
 export { GrowthOrder } from './growth-order';
+export { ModuleDesign } from './module-design';

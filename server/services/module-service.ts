@@ -1,0 +1,93 @@
+import type { DataSource, EntityManager } from 'typeorm';
+import type { z } from 'zod';
+import type { LegSource, ModuleDesign as ModuleDto, moduleInputSchema } from '../../shared/api';
+import { CaseError, legsFromRun, parseModuleCase, runModule, type LegDefinitionInput, type RunResultLegs } from '../../shared/engine';
+import { ModuleDesign, Team } from '../db/entities';
+import { NotFoundError, ValidationError } from '../http/errors';
+import { isUuid } from '../http/validate';
+import { findFamily, findVersion } from './family-store';
+import { findRun } from './run-service';
+
+type ModuleInput = z.output<typeof moduleInputSchema>;
+
+/** A leg source of the caller's team, as the engine's leg definition. */
+async function resolveLeg(m: EntityManager, team: Team, s: LegSource, field: string): Promise<LegDefinitionInput> {
+  if (s.kind === 'run') {
+    const run = await findRun(m, team, s.runId).catch(() => { throw new ValidationError([{ field: `${field}.runId`, message: 'no such run in this team' }]); });
+    if (!run.result) throw new ValidationError([{ field: `${field}.runId`, message: `the run has no result (it is ${run.state})` }]);
+    const legs = legsFromRun(run.caseJson, run.result as unknown as RunResultLegs);
+    const leg = legs[s.leg];
+    if (!leg) throw new ValidationError([{ field: `${field}.leg`, message: `the run has no ${s.leg} leg` }]);
+    return leg;
+  }
+  const family = await findFamily(m, team, s.familyId).catch(() => { throw new ValidationError([{ field: `${field}.familyId`, message: 'no such family in this team' }]); });
+  const version = await findVersion(m, family, s.version);
+  return { length: s.lengthMm * 1e-3, area: s.areaMm2 * 1e-6, material: version.definition as LegDefinitionInput['material'], doping: s.perCm3 };
+}
+
+/** The engine case of a module, checked by the engine so a saved module always computes. */
+async function resolveCase(m: EntityManager, team: Team, input: ModuleInput): Promise<Record<string, unknown>> {
+  const p = await resolveLeg(m, team, input.p, 'p');
+  const n = await resolveLeg(m, team, input.n, 'n');
+  const c = {
+    hotSide: input.hotSide, deltaT: input.deltaT, p, n, couples: input.couples,
+    ...(input.areaRatio !== undefined ? { areaRatio: input.areaRatio, n: { ...n, area: undefined } } : {}),
+    ...(input.contactResistivity !== undefined ? { contactResistivity: input.contactResistivity } : {}),
+    ...(input.coldPlateResistance !== undefined ? { coldPlateResistance: input.coldPlateResistance } : {}),
+    ...(input.hotPlateResistance !== undefined ? { hotPlateResistance: input.hotPlateResistance } : {}),
+    ...(input.currentLimit !== undefined ? { currentLimit: input.currentLimit } : {}),
+  };
+  const json = JSON.parse(JSON.stringify(c)) as Record<string, unknown>;
+  try {
+    parseModuleCase(json);
+  } catch (err) {
+    if (err instanceof CaseError) throw new ValidationError([{ field: err.field, message: err.message }]);
+    throw err;
+  }
+  return json;
+}
+
+async function findModule(m: EntityManager, team: Team, id: unknown): Promise<ModuleDesign> {
+  if (!isUuid(id)) throw new NotFoundError('module');
+  const row = await m.getRepository(ModuleDesign).findOneBy({ id, teamId: team.id });
+  if (!row) throw new NotFoundError('module');
+  return row;
+}
+
+const toDto = (r: ModuleDesign): ModuleDto => ({
+  id: r.id, name: r.name, notes: String((r.input as { notes?: string }).notes ?? ''), input: r.input as ModuleDto['input'], case: r.resolvedCase,
+  createdBy: r.createdBy, createdAt: r.createdAt.toISOString(), updatedAt: r.updatedAt.toISOString(),
+});
+
+export async function listModules(ds: DataSource, team: Team): Promise<Array<Omit<ModuleDto, 'case'>>> {
+  const rows = await ds.getRepository(ModuleDesign).find({ where: { teamId: team.id }, order: { updatedAt: 'DESC' } });
+  return rows.map((r) => { const { case: _c, ...rest } = toDto(r); return rest; });
+}
+
+export async function getModule(ds: DataSource, team: Team, id: unknown): Promise<ModuleDto> {
+  return toDto(await findModule(ds.manager, team, id));
+}
+
+export async function saveModule(ds: DataSource, team: Team, by: string, input: ModuleInput, id?: unknown): Promise<ModuleDto> {
+  return ds.transaction(async (m) => {
+    const existing = id === undefined ? undefined : await findModule(m, team, id);
+    const resolvedCase = await resolveCase(m, team, input);
+    const repo = m.getRepository(ModuleDesign);
+    const row = existing ? Object.assign(existing, { name: input.name, input, resolvedCase }) : repo.create({ teamId: team.id, name: input.name, input, resolvedCase, createdBy: by });
+    return toDto(await repo.save(row));
+  });
+}
+
+const f = (v: number | null | undefined): string => (typeof v === 'number' && Number.isFinite(v) ? Number(v.toPrecision(6)).toString() : '');
+
+/** The module's curves versus current as CSV, computed now with the engine. */
+export async function moduleCurvesCsv(ds: DataSource, team: Team, id: unknown): Promise<{ filename: string; body: string }> {
+  const row = await findModule(ds.manager, team, id);
+  const result = runModule(parseModuleCase(row.resolvedCase));
+  const curve = result.versusCurrent;
+  const head = 'current_A,heat_load_W,heat_rejected_W,voltage_V,power_W,cop,over_current_limit';
+  const lines = curve.currents.map((i, k) => [f(i), f(curve.heatLoad[k]), f(curve.heatRejected[k]), f(curve.voltage[k]), f(curve.power[k]), f(curve.cop[k]), curve.overLimit[k] ? 'yes' : 'no'].join(','));
+  const marks = [`# maximum heat load ${f(curve.maxHeatLoad.heatLoad)} W at ${f(curve.maxHeatLoad.current)} A`, ...(curve.maxCop ? [`# maximum COP ${f(curve.maxCop.cop)} at ${f(curve.maxCop.current)} A`] : [])];
+  const comments = [`# Frostgrade module "${row.name}": ${result.module.couples} couples; model prediction, verify by measurement; modules run at high currents and their hot side can burn`];
+  return { filename: `module-${row.name.replace(/[^A-Za-z0-9._-]+/g, '-')}.csv`, body: `${[...comments, ...marks, head, ...lines].join('\n')}\n` };
+}
