@@ -72,7 +72,9 @@ export function deltaTCurveOf(solver: DeviceSolver, hotSide: number, options: De
       continue;
     }
     const coldSide = hotSide - (deltaTMax * k) / (points - 1);
-    const hint = samples.length > 0 ? samples[samples.length - 1].current : undefined;
+    // The optimum current moves smoothly with ΔT: extrapolate it from the last two points.
+    const [last, before] = [samples[samples.length - 1], samples[samples.length - 2]];
+    const hint = last && before ? 2 * last.current - before.current : last?.current;
     const p = fixed !== undefined ? solver.at(fixed, hotSide, { coldSide }) : maxHeatLoadPoint(solver, hotSide, coldSide, hint);
     if (!p) throw new CaseError(fixed !== undefined ? 'deltaTCurrent' : 'hotSide', `${what} has no steady state at ΔT = ${fmt(hotSide - coldSide)} K`);
     samples.push(p);

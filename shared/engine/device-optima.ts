@@ -11,14 +11,15 @@ import { brentMinimize } from './minimize-scalar';
 export const CURRENT_TOLERANCE = 1e-6;
 /** How far the current bracket may be widened, in units of the reference current. */
 export const MAX_WIDENING = 1e3;
-/** Half-width factor of the bracket around a hinted optimum current. */
-const HINT_WIDTH = 1.3;
+/** A hinted bracket starts at this fraction of the hint (and reaches 1.16 × the hint). */
+const HINT_LOWER = 0.9;
+const GOLDEN = 0.5 * (3 - Math.sqrt(5));
 
 /**
  * The point maximising score over the current: Brent on [0, 2·I_ref],
  * widened while the optimum sits at the edge; if nothing there has a steady
  * state, closer to zero current. With a hint (the optimum of a neighbouring
- * problem) Brent first tries [hint/1.3, 1.3·hint] and keeps that answer
+ * problem) Brent first tries [0.9·hint, 1.16·hint] and keeps that answer
  * unless it lands on the bracket's edge.
  */
 function maximizeOverCurrent(at: (current: number) => DevicePoint | undefined, score: (p: DevicePoint) => number, reference: number, hint?: number): DevicePoint | undefined {
@@ -36,8 +37,9 @@ function maximizeOverCurrent(at: (current: number) => DevicePoint | undefined, s
   };
   const tolerance = CURRENT_TOLERANCE * reference;
   if (hint !== undefined && hint > 0) {
-    const a = hint / HINT_WIDTH;
-    const b = hint * HINT_WIDTH;
+    // Brent's first point is the golden section of the bracket: put it on the hint.
+    const a = hint * HINT_LOWER;
+    const b = hint * (HINT_LOWER + (1 - HINT_LOWER) / GOLDEN);
     const m = brentMinimize(negative, a, b, tolerance);
     if (best && m.x > a + 0.03 * (b - a) && m.x < b - 0.03 * (b - a)) return best;
   }
