@@ -16,7 +16,11 @@ const safeAreaMetrics = {
 /** A fresh client per test: no retries, no cache shared between tests. */
 export function createTestQueryClient(): QueryClient {
   return new QueryClient({
-    defaultOptions: { queries: { retry: false, gcTime: Infinity, refetchInterval: false } },
+    // gcTime Infinity schedules no clean-up timers, so jest exits as soon as the tests end.
+    defaultOptions: {
+      queries: { retry: false, gcTime: Infinity, refetchInterval: false },
+      mutations: { gcTime: Infinity },
+    },
   });
 }
 

@@ -32,7 +32,7 @@ export function InvitationSummary({ preview }: { preview: InvitationPreview }) {
         </AppText>
       </Line>
       <Line label="E-mail">
-        <AppText variant="mono">{preview.email}</AppText>
+        <AppText>{preview.email}</AppText>
       </Line>
       <Line label="Valid until">
         <AppText>{formatDay(preview.expiresAt)}</AppText>
@@ -42,15 +42,14 @@ export function InvitationSummary({ preview }: { preview: InvitationPreview }) {
 }
 
 const styles = StyleSheet.create({
+  // Sunken, not another bordered card: it sits inside the form's card.
   card: {
-    backgroundColor: colors.surface,
-    borderWidth: 1,
-    borderColor: colors.border,
-    borderRadius: radii.lg,
-    padding: spacing.lg,
+    backgroundColor: colors.surfaceSunken,
+    borderRadius: radii.md,
+    padding: spacing.md,
     gap: spacing.md,
   },
-  line: { flexDirection: 'row', gap: spacing.md },
-  label: { width: 76, paddingTop: 3 },
-  value: { flex: 1, gap: spacing.xxs },
+  line: { gap: spacing.xxs },
+  label: { textTransform: 'uppercase', letterSpacing: 0.6 },
+  value: { gap: spacing.xxs },
 });
