@@ -47,6 +47,9 @@ describe('curves and module cases', () => {
     expect(Math.abs(s.heatLoad - curve.heatLoad[1]) / curve.maxHeatLoad.heatLoad).toBeLessThan(1e-9);
     expect(Math.abs(s.voltage - curve.voltage[1]) / curve.voltage[1]).toBeLessThan(1e-9);
     expect(runCurves(c).heatLoad).toEqual(curve.heatLoad);
+    // A checked solve/optimize case is a leg definition as it stands.
+    const fromCase = operatingCurve(parseCase({ ...leg, hotSide: 300, current: 1 }, 'solve'), c.conditions, c.options);
+    expect(fromCase.heatLoad).toEqual(curve.heatLoad);
   });
 
   test.each<[string, string, unknown]>([

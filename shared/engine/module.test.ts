@@ -197,6 +197,41 @@ describe('plates: junction temperatures solved self-consistently', () => {
     expect(bare.coldJunction).toBeUndefined();
   });
 
+  test('constant-property module with a hot plate: ΔTmax against the closed forms maximised over the current', () => {
+    // With Qc = 0 no heat crosses the cold plate (Tc_j = T_load) and the hot
+    // junction sits at T_sink + Θh·P. At a current I, Qc = 0 and that balance
+    // are two linear equations in (Tc, Th_j); ΔTmax is their best over I,
+    // found here by a golden-section search of the closed form.
+    const couples = 10;
+    const thetaH = 0.5;
+    const { s, r, k } = coupleClosedForm();
+    const [S_, R_, K_] = [couples * s, couples * r, couples * k];
+    const loadAt = (I: number) => {
+      // (S·I + K)·Tc − K·Th = I²R/2;  Θh·S·I·Tc + (1 − Θh·S·I)·Th = T_sink + Θh·I²R
+      const a11 = S_ * I + K_;
+      const a12 = -K_;
+      const a21 = thetaH * S_ * I;
+      const a22 = 1 - thetaH * S_ * I;
+      const b1 = 0.5 * I * I * R_;
+      const b2 = TH + thetaH * I * I * R_;
+      return (b1 * a22 - a12 * b2) / (a11 * a22 - a12 * a21);
+    };
+    let [lo, hi] = [0.5, 10];
+    const g = (3 - Math.sqrt(5)) / 2;
+    for (let i = 0; i < 200; i++) {
+      const x1 = lo + g * (hi - lo);
+      const x2 = hi - g * (hi - lo);
+      if (loadAt(x1) < loadAt(x2)) hi = x2;
+      else lo = x1;
+    }
+    const best = 0.5 * (lo + hi);
+    const curve = moduleDeltaTCurve({ p: constant(P, AP), n: constant(N, AN), couples, hotPlateResistance: thetaH }, { hotSide: TH }, { points: 5 });
+    expect(Math.abs(curve.deltaTMax.coldSide - loadAt(best))).toBeLessThan(1e-6);
+    expect(relative(curve.deltaTMax.current, best)).toBeLessThan(1e-4);
+    expect(curve.deltaTMax.coldJunction).toBeCloseTo(curve.deltaTMax.coldSide, 9);
+    expect(Math.abs(curve.deltaTMax.hotJunction - (TH + thetaH * curve.deltaTMax.power))).toBeLessThan(1e-6);
+  });
+
   test('band-model module: each leg solved on its own at the reported junction temperatures gives the module’s Qc and V', () => {
     const couples = 31;
     const module: ModuleDefinition = { p: bandP(1e-6), n: bandN(1.2e-6), couples, coldPlateResistance: 0.08, hotPlateResistance: 0.05 };
