@@ -1,6 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import type { RunSummary } from '@/shared/api/runs';
 import { useRuns } from '@/components/api/runs';
+import { formatDateTime } from '@/components/format/date';
 import { useLiveRuns } from '@/components/realtime/use-live-runs';
 import { spacing } from '@/components/theme';
 import { Section } from '@/components/ui/form-section';
@@ -10,10 +11,14 @@ import { AppText } from '@/components/ui/text';
 import { RunRow } from '../runs/run-row';
 
 /** Sweeps of the design, each once, newest first (runs come newest first). */
-function sweepsOf(runs: RunSummary[]): Array<{ id: string; count: number }> {
-  const counts = new Map<string, number>();
-  for (const r of runs) if (r.sweepId) counts.set(r.sweepId, (counts.get(r.sweepId) ?? 0) + 1);
-  return [...counts].map(([id, count]) => ({ id, count }));
+function sweepsOf(runs: RunSummary[]): Array<{ id: string; count: number; at: string }> {
+  const sweeps = new Map<string, { count: number; at: string }>();
+  for (const r of runs) {
+    if (!r.sweepId) continue;
+    const s = sweeps.get(r.sweepId);
+    sweeps.set(r.sweepId, { count: (s?.count ?? 0) + 1, at: s?.at ?? r.createdAt });
+  }
+  return [...sweeps].map(([id, s]) => ({ id, ...s }));
 }
 
 /** The design's runs (single runs listed, sweeps linked), live while any is going. */
@@ -31,7 +36,7 @@ export function DesignRuns({ designId }: { designId: string }) {
       {sweeps.length > 0 ? (
         <View style={styles.sweeps}>
           {sweeps.map((s, i) => (
-            <LinkButton key={s.id} variant="quiet" href={`/sweeps/${s.id}`} label={`Sweep ${sweeps.length - i} · ${s.count} runs`} />
+            <LinkButton key={s.id} variant="quiet" href={`/sweeps/${s.id}`} label={`Sweep ${sweeps.length - i} · ${s.count} runs · ${formatDateTime(s.at)}`} />
           ))}
         </View>
       ) : null}

@@ -3,10 +3,20 @@ import { StyleSheet, View } from 'react-native';
 import { colors, radii, spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';
 
-/** A titled box around one chart (a hint under the title says how to read it). */
-export function ChartCard({ title, hint, children, testID }: { title: string; hint?: string; children: ReactNode; testID?: string }) {
+export type ChartCardProps = {
+  title: string;
+  /** How to read the chart, under the title. */
+  hint?: string;
+  /** In a wrapping row of cards: share the width, at least ~320 px each. */
+  inGrid?: boolean;
+  children: ReactNode;
+  testID?: string;
+};
+
+/** A titled box around one chart. */
+export function ChartCard({ title, hint, inGrid = false, children, testID }: ChartCardProps) {
   return (
-    <View style={styles.card} testID={testID}>
+    <View style={[styles.card, inGrid && styles.gridItem]} testID={testID}>
       <View style={styles.heading}>
         <AppText variant="bodyStrong" role="heading" aria-level={3}>
           {title}
@@ -24,9 +34,6 @@ export function ChartCard({ title, hint, children, testID }: { title: string; hi
 
 const styles = StyleSheet.create({
   card: {
-    flexGrow: 1,
-    flexBasis: 320,
-    minWidth: 0,
     backgroundColor: colors.surface,
     borderRadius: radii.lg,
     borderWidth: 1,
@@ -34,5 +41,6 @@ const styles = StyleSheet.create({
     padding: spacing.lg,
     gap: spacing.sm,
   },
+  gridItem: { flexGrow: 1, flexBasis: 320, minWidth: 0 },
   heading: { gap: spacing.xxs },
 });

@@ -1,7 +1,7 @@
 import type { RunDetail } from '@/shared/api/runs';
 import type { PlotSeries } from '@/components/charts/series-plot-types';
 import { chartMarks } from '@/components/theme';
-import { doping, formatObjective, objectiveInfo, quantity } from './run-format';
+import { doping, formatObjective, objectiveInfo, quantity, sweepNote } from './run-format';
 import { runStateLook } from './run-state-badge';
 import { parseRunResult, type RunResult } from './run-result';
 
@@ -16,12 +16,13 @@ export function parseIds(raw: string | string[] | undefined): string[] {
   return [...new Set(text.split(',').map((s) => s.trim()).filter((s) => idPattern.test(s)))].slice(0, maxCompared);
 }
 
-export type Compared = { detail: RunDetail; result: RunResult | null; label: string };
+export type Compared = { detail: RunDetail; result: RunResult | null; label: string; note: string };
 
 export function compared(details: RunDetail[]): Compared[] {
   return details.map((detail, i) => {
     const parsed = parseRunResult(detail.result);
-    return { detail, result: parsed?.ok ? parsed.result : null, label: `Run ${i + 1}` };
+    const swept = sweepNote(detail);
+    return { detail, result: parsed?.ok ? parsed.result : null, label: `Run ${i + 1}`, note: swept ? `${detail.run.designName}, ${swept}` : detail.run.designName };
   });
 }
 
@@ -52,7 +53,7 @@ export function compareRows(list: Compared[]): Row[] {
     row('voltage', 'Voltage', res((r) => quantity(r.voltage, 'V'))),
     row('power', 'Input power', res((r) => quantity(r.power, 'W'))),
     row('heatLoad', 'Heat load Qc', res((r) => quantity(r.heatLoad, 'W'))),
-    row('cop', 'COP', res((r) => (r.cop === null ? '–' : quantity(r.cop, '')))),
+    row('cop', 'COP', res((r) => (r.cop === null ? '–' : r.heatLoad === 0 ? '0 (no heat load)' : quantity(r.cop, '')))),
     row('geometry', 'L × A', (c) => `${quantity(c.detail.design.lengthMm, 'mm')} × ${quantity(c.detail.design.areaMm2, 'mm²')}`),
     row('bounds', 'Doping bounds', (c) => `${doping(c.detail.design.minPerCm3)} – ${doping(c.detail.design.maxPerCm3)}`),
     row('nodes', 'Control points', (c) => `${c.detail.design.controlPoints}${c.detail.design.monotone ? ', monotone' : ''}`),
@@ -67,6 +68,6 @@ export function compareSeries(list: Compared[], quantity: 'doping' | 'temperatur
     if (!p) return [];
     const ys = quantity === 'doping' ? p.perCm3 : p.temperature;
     if (!ys) return [];
-    return [{ key: c.detail.run.id, label: `${c.label} · ${c.detail.run.designName}`, mark: chartMarks[i % chartMarks.length], line: p.x.map((x, k) => ({ x: x * 1e3, y: ys[k] })) }];
+    return [{ key: c.detail.run.id, label: `${c.label} · ${c.note}`, mark: chartMarks[i % chartMarks.length], line: p.x.map((x, k) => ({ x: x * 1e3, y: ys[k] })) }];
   });
 }

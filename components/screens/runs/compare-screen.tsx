@@ -20,9 +20,12 @@ function NumbersTable({ list }: { list: Compared[] }) {
         <View role="row" style={styles.row}>
           <View style={styles.labelCell} />
           {list.map((c) => (
-            <AppText key={c.detail.run.id} role="columnheader" variant="label" style={styles.cell}>
-              {c.label}
-            </AppText>
+            <View key={c.detail.run.id} role="columnheader" style={styles.cell}>
+              <AppText variant="label">{c.label}</AppText>
+              <AppText variant="caption" tone="muted">
+                {c.note}
+              </AppText>
+            </View>
           ))}
         </View>
         {rows.map((r) => (
@@ -53,10 +56,10 @@ function Comparison({ details }: { details: RunDetail[] }) {
         <NumbersTable list={list} />
       </Section>
       <View style={styles.charts}>
-        <ChartCard title="Doping along the leg" testID="compare-doping">
+        <ChartCard inGrid title="Doping along the leg" testID="compare-doping">
           <SeriesPlot series={doping} xLabel="Position from the cold end x (mm)" yLabel="n (cm⁻³), log scale" yScale="log" description={`Doping profiles of ${doping.length} runs overlaid`} />
         </ChartCard>
-        <ChartCard title="Temperature along the leg" testID="compare-temperature">
+        <ChartCard inGrid title="Temperature along the leg" testID="compare-temperature">
           <SeriesPlot series={temperature} xLabel="Position from the cold end x (mm)" yLabel="T (K)" description={`Temperature profiles of ${temperature.length} runs overlaid`} />
         </ChartCard>
       </View>

@@ -30,7 +30,7 @@ export function LegPlots({ result, runCase, lengthMm }: LegPlotsProps) {
             const info = legQuantities[q];
             const series = legSeries(q, result, baselines, lengthMm);
             return (
-              <ChartCard key={q} title={`${info.title} along the leg`} testID={`leg-plot-${q}`}>
+              <ChartCard inGrid key={q} title={`${info.title} along the leg`} testID={`leg-plot-${q}`}>
                 <SeriesPlot
                   series={series}
                   xLabel={positionAxis}

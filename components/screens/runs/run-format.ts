@@ -1,5 +1,5 @@
 import type { Objective } from '@/shared/api/designs';
-import type { Sweep } from '@/shared/api/runs';
+import type { RunDetail, Sweep } from '@/shared/api/runs';
 import { formatNumber, formatScientific, withUnit } from '@/components/format/number';
 
 export type ObjectiveInfo = {
@@ -71,4 +71,16 @@ export const sweepParameterInfo: Record<SweepParameter, ParameterInfo> = {
 /** A swept value with its unit ("300 K", "1 × 10²⁰ cm⁻³"). */
 export function formatSweepValue(parameter: SweepParameter, value: number): string {
   return sweepParameterInfo[parameter].scale === 'log' ? doping(value) : quantity(value, sweepParameterInfo[parameter].unit);
+}
+
+/**
+ * "Th = 300 K" for a run of a sweep: the swept parameter is the one whose
+ * value in the run's frozen design equals the run's sweep value.
+ */
+export function sweepNote(detail: Pick<RunDetail, 'run' | 'design'>): string | null {
+  const { run, design: d } = detail;
+  if (!run.sweepId || run.sweepValue === null) return null;
+  const values: Record<SweepParameter, number> = { hotSide: d.hotSide, lengthMm: d.lengthMm, heatLoad: d.heatLoad, maxPerCm3: d.maxPerCm3, minPerCm3: d.minPerCm3 };
+  const parameter = (Object.keys(values) as SweepParameter[]).find((p) => values[p] === run.sweepValue);
+  return parameter ? `${sweepParameterInfo[parameter].symbol} = ${formatSweepValue(parameter, run.sweepValue)}` : 'a sweep run';
 }

@@ -50,7 +50,7 @@ export function RunLive({ detail, live }: { detail: RunDetail; live: RunProgress
         {can('runs.launch') ? <CancelRun runId={detail.run.id} /> : null}
       </Section>
       <View style={styles.charts}>
-        <ChartCard title={`${info.symbol} during the search`} hint="Against elapsed time: every start restarts the iteration count." testID="live-objective">
+        <ChartCard inGrid title={`${info.symbol} during the search`} hint="Against elapsed time: every start restarts the iteration count." testID="live-objective">
           {trace.length > 0 ? (
             <SeriesPlot
               series={chart.series}
@@ -63,7 +63,7 @@ export function RunLive({ detail, live }: { detail: RunDetail; live: RunProgress
             <AppText tone="muted">The first report arrives once the worker has computed the baselines.</AppText>
           )}
         </ChartCard>
-        <ChartCard title="Doping the optimiser holds now" hint="Best point of the start in progress; the run keeps the best start." testID="live-doping">
+        <ChartCard inGrid title="Doping the optimiser holds now" hint="Best point of the start in progress; the run keeps the best start." testID="live-doping">
           <SeriesPlot
             series={liveDopingSeries(p, detail.design)}
             xLabel="Position from the cold end x (mm)"

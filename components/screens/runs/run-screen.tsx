@@ -12,22 +12,12 @@ import { LinkButton } from '@/components/ui/link-button';
 import { ErrorState, LoadingState } from '@/components/ui/state-views';
 import { DesignFacts } from '../designs/design-facts';
 import { ReleaseButton } from '../growth/release-button';
-import { formatSweepValue, objectiveInfo, type SweepParameter } from './run-format';
+import { objectiveInfo, sweepNote } from './run-format';
 import { RunLive } from './run-live';
 import { RunOutcome } from './run-outcome';
 import { RunStateBadge } from './run-state-badge';
 
 const back = { label: 'Runs', href: '/runs' } as const;
-
-/** The design value a sweep run varied, from its frozen design (e.g. "Th = 300 K"). */
-function sweepNote(detail: RunDetail): string | null {
-  const { run } = detail;
-  if (!run.sweepId || run.sweepValue === null) return null;
-  const d = detail.design;
-  const values: Record<SweepParameter, number> = { hotSide: d.hotSide, lengthMm: d.lengthMm, heatLoad: d.heatLoad, maxPerCm3: d.maxPerCm3, minPerCm3: d.minPerCm3 };
-  const parameter = (Object.keys(values) as SweepParameter[]).find((p) => values[p] === run.sweepValue);
-  return parameter ? `Sweep run at ${formatSweepValue(parameter, run.sweepValue)}` : 'Sweep run';
-}
 
 function RunPage({ detail }: { detail: RunDetail }) {
   const { run, design } = detail;
@@ -44,6 +34,7 @@ function RunPage({ detail }: { detail: RunDetail }) {
         <RunStateBadge state={run.state} size="large" testID="run-state" />
         <View style={styles.links}>
           <LinkButton variant="quiet" label="Design" href={`/designs/${run.designId}`} />
+          {run.state === 'succeeded' ? <LinkButton variant="quiet" label="Operating curves" href={`/runs/${run.id}/curves`} testID="run-curves-link" /> : null}
           {run.sweepId ? <LinkButton variant="quiet" label={sweep ?? 'Sweep'} href={`/sweeps/${run.sweepId}`} /> : null}
         </View>
       </View>
