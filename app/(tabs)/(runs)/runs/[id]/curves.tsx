@@ -1,0 +1,1 @@
+export { RunCurvesScreen as default } from '@/components/screens/curves/run-curves-screen';

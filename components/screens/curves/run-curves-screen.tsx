@@ -1,0 +1,41 @@
+import { useLocalSearchParams } from 'expo-router';
+import { ApiError } from '@/components/api/client';
+import { useRunDetail } from '@/components/api/runs';
+import { parseRunResult } from '@/components/screens/runs/run-result';
+import { ScreenFrame } from '@/components/shell/screen-frame';
+import { Notice } from '@/components/ui/notice';
+import { ErrorState, LoadingState } from '@/components/ui/state-views';
+import { AppText } from '@/components/ui/text';
+import { CurvesBody } from './curves-body';
+
+/** `/runs/[id]/curves`: operating curves of a finished run's leg and its baselines, computed in the browser. */
+export function RunCurvesScreen() {
+  const id = useLocalSearchParams<{ id: string }>().id ?? '';
+  const back = { label: 'Run', href: `/runs/${id}` } as const;
+  const query = useRunDetail(id);
+  if (!query.data) {
+    const notFound = query.error instanceof ApiError && query.error.isNotFound;
+    return (
+      <ScreenFrame title="Operating curves" back={back}>
+        {query.isError ? (
+          <ErrorState title={notFound ? 'This run is not in your team' : 'Could not load the run'} message={query.error.message} />
+        ) : (
+          <LoadingState label="Loading the run…" />
+        )}
+      </ScreenFrame>
+    );
+  }
+  const detail = query.data;
+  const parsed = parseRunResult(detail.result);
+  return (
+    <ScreenFrame title="Operating curves" subtitle={`${detail.run.designName}: Qc, COP, voltage and power versus current`} back={back}>
+      {parsed?.ok ? (
+        <CurvesBody runCase={detail.case} result={parsed.result} />
+      ) : (
+        <Notice tone="info" title="No curves yet">
+          <AppText>{parsed ? parsed.message : 'The run has no result yet: curves are drawn once it has finished.'}</AppText>
+        </Notice>
+      )}
+    </ScreenFrame>
+  );
+}
