@@ -42,17 +42,24 @@ function OrderPage({ detail }: { detail: GrowthOrderDetail }) {
   const { order } = detail;
   const { can } = useRole();
   const sheet = readSheet(detail.sheet);
+  const measured = detail.measurements.length > 0;
+  // Once the piece is measured its report is what physicists and readers decide on, so it comes
+  // first; a grower keeps the sheet on top (the page does not jump under them after an upload).
+  const reportFirst = measured && (can('profiles.release') || !can('measurements.upload'));
+  const measurements = <MeasurementsSection detail={detail} sheet={sheet} />;
   useEffect(() => {
     if (typeof document !== 'undefined') document.title = `Growth sheet ${order.batch} · Frostgrade`;
   }, [order.batch]);
   return (
     <ScreenFrame title={`Batch ${order.batch}`} subtitle={`${order.designName} · ${dueText(order)} · released by ${order.releasedBy}`} back={back}>
       <OrderOverview order={order} />
-      <AdvanceOrder orderId={order.id} state={order.state} measured={detail.measurements.length > 0} />
+      <AdvanceOrder orderId={order.id} state={order.state} measured={measured} />
+      {reportFirst ? measurements : null}
+      {reportFirst ? <CloseOrder orderId={order.id} state={order.state} /> : null}
       <SheetBlock detail={detail} />
       {can('profiles.release') && !isClosed(order.state) ? <SheetSettings key={`${order.zones}-${order.lossBudget}-${order.measureTemperature}`} order={order} maxZones={sheet?.steps.length ?? 12} /> : null}
-      <MeasurementsSection detail={detail} sheet={sheet} />
-      <CloseOrder orderId={order.id} state={order.state} />
+      {reportFirst ? null : measurements}
+      {reportFirst ? null : <CloseOrder orderId={order.id} state={order.state} />}
       <Section title="Timeline" hint="Every change, who made it and when (UTC).">
         <OrderTimeline events={detail.timeline} />
       </Section>

@@ -3,6 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import type { GrowthOrderDto } from '@/shared/api/growth';
 import { growthSheetExportUrl } from '@/components/api/growth';
 import type { SheetStep, SheetView } from '@/components/api/growth-schemas';
+import { formatDateTime, formatDay } from '@/components/format/date';
 import { colors, radii, spacing } from '@/components/theme';
 import { DownloadLink } from '@/components/ui/download-link';
 import { Notice } from '@/components/ui/notice';
@@ -81,7 +82,7 @@ export function GrowthSheetView({ order, sheet }: GrowthSheetViewProps) {
         <ZoneCountChart sheet={sheet} chosen={step.zones} />
       </Part>
       <SheetCaution />
-      <AppText variant="caption" tone="muted">{`Order ${order.id} · sheet of the run released ${order.createdAt.slice(0, 10)}`}</AppText>
+      <AppText variant="caption" tone="muted">{`Order ${order.id} · released ${formatDay(order.createdAt)} · sheet as of ${formatDateTime(order.updatedAt)}`}</AppText>
     </View>
   );
 }

@@ -67,7 +67,7 @@ export function MeasurementUpload({ orderId, lengthMm, measureTemperature, onSav
   const serverIssues = upload.error instanceof ApiError ? upload.error.fieldErrors.filter((e) => e.field.startsWith('file')).map((e) => issueFromField(e.field, e.message)) : [];
   return (
     <View style={styles.wrap} testID="measurement-upload">
-      <MeasurementFormatHelp />
+      {chosen ? null : <MeasurementFormatHelp />}
       <View style={styles.row}>
         <Button label={picking ? 'Choosing…' : chosen ? 'Choose another file' : 'Choose CSV file'} onPress={() => void choose()} disabled={picking || upload.isPending} />
         {chosen ? <AppText variant="mono" tone="muted" testID="chosen-measurements">{chosen.file.name}</AppText> : null}

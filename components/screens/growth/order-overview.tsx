@@ -38,5 +38,5 @@ export function OrderOverview({ order }: { order: GrowthOrderDto }) {
 const styles = StyleSheet.create({
   wrap: { gap: spacing.md },
   status: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', gap: spacing.md },
-  pills: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: spacing.sm },
+  pills: { flexShrink: 1, flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: spacing.sm },
 });

@@ -39,6 +39,9 @@ function ReleaseForm({ runId, onClose }: { runId: string; onClose: () => void })
   };
   return (
     <View style={styles.panel} testID="release-form">
+      <AppText variant="heading" role="heading" aria-level={2}>
+        Release to grower
+      </AppText>
       <AppText tone="muted">Growers of the team are e-mailed; a worker computes the growth sheet (zones, tolerance bands, room-temperature checks).</AppText>
       <View style={styles.fields}>
         {fields.map((f) => (

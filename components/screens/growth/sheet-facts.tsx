@@ -5,6 +5,7 @@ import { formatDay } from '@/components/format/date';
 import { colors, spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';
 import { ampere, kelvin, mm } from './growth-format';
+import { paperOnlyMark } from './print-marks';
 
 export type SheetFactsProps = { order: GrowthOrderDto; sheet: SheetView; step: SheetStep };
 
@@ -20,10 +21,12 @@ export function SheetFacts({ order, sheet, step }: SheetFactsProps) {
     ['budget', 'Tolerance', `each band edge loses ≤ ${kelvin(sheet.lossBudget)} of ΔT`],
     ['check', 'Checks measured at', kelvin(sheet.measureTemperature)],
   ];
+  if (order.notes) facts.push(['notes', `Notes from ${order.releasedBy}`, order.notes]);
   return (
     <View style={styles.grid} testID="sheet-facts">
       {facts.map(([key, term, value]) => (
-        <View key={key} style={styles.fact} testID={`sheet-fact-${key}`}>
+        // The notes are shown above the sheet on screen; on paper they travel with it.
+        <View key={key} style={[styles.fact, key === 'notes' && styles.wide]} testID={`sheet-fact-${key}`} {...(key === 'notes' ? paperOnlyMark : {})}>
           <AppText variant="caption" tone="muted">
             {term}
           </AppText>
@@ -37,4 +40,5 @@ export function SheetFacts({ order, sheet, step }: SheetFactsProps) {
 const styles = StyleSheet.create({
   grid: { flexDirection: 'row', flexWrap: 'wrap', columnGap: spacing.lg, rowGap: spacing.sm, borderTopWidth: 1, borderTopColor: colors.border, paddingTop: spacing.sm },
   fact: { flexGrow: 1, flexBasis: 200, gap: spacing.xxs },
+  wide: { flexBasis: '100%' },
 });

@@ -1,5 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 import { growerStates, type GrowthState } from '@/shared/api/growth';
+import { useIsWide } from '@/components/shell/use-is-wide';
 import { colors, radii, spacing } from '@/components/theme';
 import { Glyph, type GlyphName } from '@/components/ui/glyph';
 import { AppText } from '@/components/ui/text';
@@ -28,15 +29,17 @@ const statusWord = { done: 'done', current: 'now', todo: 'to do' } as const;
 /** Where the order stands: requested → accepted → growing → grown → measured → verdict. */
 export function StateStepper({ state }: { state: GrowthState }) {
   const steps = stepsOf(state);
+  // Connectors read as a line only on one row; wrapped on a phone, the numbers carry the order.
+  const wide = useIsWide();
   return (
     <View style={styles.row} role="list" aria-label="Order progress" testID="state-stepper">
       {steps.map((s, i) => (
         <View key={s.key} style={styles.item} role="listitem" aria-current={s.status === 'current' ? 'step' : undefined}>
-          {i > 0 ? <View style={[styles.link, s.status !== 'todo' && styles.linkDone]} /> : null}
+          {i > 0 && wide ? <View style={[styles.link, s.status !== 'todo' && styles.linkDone]} /> : null}
           <View style={[styles.step, s.status === 'current' && [styles.current, { borderColor: s.color }]]}>
             <Glyph name={s.glyph} color={s.color} />
             <AppText variant="label" style={s.status === 'todo' ? styles.todoText : { color: s.status === 'current' ? s.color : colors.text }}>
-              {s.label}
+              {`${i + 1} ${s.label}`}
             </AppText>
             <AppText variant="caption" tone="muted">
               {statusWord[s.status]}
@@ -49,10 +52,10 @@ export function StateStepper({ state }: { state: GrowthState }) {
 }
 
 const styles = StyleSheet.create({
-  row: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', rowGap: spacing.sm },
+  row: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', rowGap: spacing.sm, columnGap: spacing.xs },
   item: { flexDirection: 'row', alignItems: 'center' },
-  link: { width: spacing.md, height: 2, backgroundColor: colors.border },
-  linkDone: { backgroundColor: colors.primary },
+  link: { width: spacing.sm, height: 0, borderTopWidth: 2, borderColor: colors.border },
+  linkDone: { borderColor: colors.primary },
   step: {
     flexDirection: 'row',
     alignItems: 'center',

@@ -60,9 +60,9 @@ export function ZoneCountChart({ sheet, chosen }: ZoneCountChartProps) {
       <View style={styles.row}>
         <View style={styles.k} />
         <View style={styles.axis}>
-          {ticks.map((t) => (
+          {ticks.map((t, i) => (
             <AppText key={t} variant="caption" tone="muted" style={[styles.tick, { left: pct(t, lo, hi) }]}>
-              {formatNumber(t, 4)}
+              {i === ticks.length - 1 ? kelvin(t, 4) : formatNumber(t, 4)}
             </AppText>
           ))}
         </View>
@@ -70,7 +70,7 @@ export function ZoneCountChart({ sheet, chosen }: ZoneCountChartProps) {
       </View>
       <View style={styles.legend}>
         <View style={styles.legendDash} />
-        <AppText variant="caption" tone="muted">{`Continuous profile ${kelvin(cont)} · ΔT axis in K · filled square: the order's K`}</AppText>
+        <AppText variant="caption" tone="muted">{`Continuous profile, ΔT ${kelvin(cont)} · filled square: the order's K`}</AppText>
       </View>
     </View>
   );
@@ -85,8 +85,8 @@ const styles = StyleSheet.create({
   track: { flex: 1, height: 24, justifyContent: 'center' },
   reference: { position: 'absolute', top: 0, bottom: 0, width: 0, borderLeftWidth: 1.5, borderStyle: 'dashed', borderColor: colors.text },
   // Lines and marks are borders, not fills: browsers leave backgrounds off paper.
-  stem: { height: 0, borderTopWidth: 2, borderColor: colors.border },
-  stemChosen: { borderColor: colors.text },
+  stem: { height: 0, borderTopWidth: 1, borderColor: colors.border },
+  stemChosen: { borderTopWidth: 3, borderColor: colors.text },
   dot: { position: 'absolute', width: dot, height: dot, marginLeft: -dot / 2, borderRadius: dot / 2, borderWidth: 2, borderColor: colors.primary, backgroundColor: colors.surface },
   dotChosen: { borderRadius: radii.sm / 2, borderWidth: (dot + 2) / 2, borderColor: colors.text, width: dot + 2, height: dot + 2, marginLeft: -(dot + 2) / 2 },
   value: { width: 108 },

@@ -3,6 +3,7 @@ import type { SheetZone } from '@/components/api/growth-schemas';
 import { useIsWide } from '@/components/shell/use-is-wide';
 import { colors, radii, spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';
+import { formatNumber } from '@/components/format/number';
 import { bandEdges, microVoltPerK, mm, perCm3, rangeText, siemensPerCm, zoneName } from './growth-format';
 
 export type ZoneTableProps = { rows: SheetZone[]; measureTemperature: number; lossBudget: number };
@@ -13,7 +14,7 @@ type Column = { key: string; head: string; flex: number; cell: (z: SheetZone, la
 function columns(t: number, budget: number): Column[] {
   return [
     { key: 'zone', head: 'Zone', flex: 0.6, cell: (z, last) => ({ main: String(z.index + 1), sub: z.index === 0 ? 'cold end' : last ? 'hot end' : '' }) },
-    { key: 'position', head: 'From – to', flex: 1.25, cell: (z) => ({ main: `${mm(z.startMm)} –\n${mm(z.endMm)}`, sub: `${mm(z.endMm - z.startMm)} long` }) },
+    { key: 'position', head: 'From – to', flex: 1.25, cell: (z) => ({ main: `${formatNumber(z.startMm, 3)}–${mm(z.endMm)}`, sub: `${mm(z.endMm - z.startMm)} long` }) },
     { key: 'target', head: 'Target n', flex: 1.35, cell: (z) => ({ main: perCm3(z.perCm3), sub: '' }) },
     { key: 'band', head: `Band n (loss ≤ ${budget} K)`, flex: 1.5, cell: (z) => ({ main: `${bandEdges(z).low} –\n${bandEdges(z).high} cm⁻³`, sub: '' }) },
     { key: 'seebeck', head: `S at ${t} K`, flex: 1.15, cell: (z) => ({ main: microVoltPerK(z.seebeckUvK), sub: `band ${rangeText(z.seebeckBandUvK, 'µV/K')}` }) },
@@ -45,7 +46,7 @@ export function ZoneTable({ rows, measureTemperature, lossBudget }: ZoneTablePro
                     {c.head}
                   </AppText>
                   <View style={styles.cardValue}>
-                    <AppText variant="mono">{cell.main.replace('\n', ' ')}</AppText>
+                    <AppText>{cell.main}</AppText>
                     {cell.sub ? <AppText variant="caption" tone="muted">{cell.sub}</AppText> : null}
                   </View>
                 </View>
@@ -71,7 +72,7 @@ export function ZoneTable({ rows, measureTemperature, lossBudget }: ZoneTablePro
             const cell = c.cell(z, i === last);
             return (
               <View key={c.key} role="cell" style={[styles.cell, { flex: c.flex }]}>
-                <AppText variant="mono">{cell.main}</AppText>
+                <AppText>{cell.main}</AppText>
                 {cell.sub ? <AppText variant="caption" tone="muted">{cell.sub}</AppText> : null}
               </View>
             );

@@ -35,7 +35,7 @@ export function ZoneVerdicts({ verdicts, rows }: ZoneVerdictsProps) {
                 {look.label}
               </AppText>
             </View>
-            <AppText variant="mono">
+            <AppText>
               {v.measured !== null ? `measured ${perCm3(v.measured)} (${v.points} ${v.points === 1 ? 'position' : 'positions'})` : 'no measured position'}
             </AppText>
             {row ? <AppText variant="caption" tone="muted">{`target ${perCm3(row.perCm3)} · band ${bandText(row)}`}</AppText> : null}
