@@ -100,6 +100,18 @@ describe('accounts in a real browser', () => {
     await expectText(visible(adminPage, `member-${grower}`), /Gus Newgrow[\s\S]*GROWER/);
     await expectText(visible(adminPage, `invitation-${grower}`), /Accepted/);
     await adminPage.close();
+
+    // Removing asks first; "Keep" leaves the member in place.
+    const phone = await adminSession.newPage('phone');
+    await phone.goto(`${baseUrl}/team`);
+    const row = visible(phone, `member-${grower}`);
+    await row.getByRole('button', { name: 'Remove Gus Newgrow' }).click();
+    await expectText(row.getByTestId('confirm-remove'), /Remove Gus Newgrow from the team\?/);
+    await row.getByTestId('confirm-remove').scrollIntoViewIfNeeded();
+    await saveScreenshot(phone, 'team-remove-confirm-phone');
+    await row.getByTestId('cancel').click();
+    expect(await row.getByTestId('confirm-remove').count()).toBe(0);
+    await phone.close();
   });
 
   it('resets a password through the e-mailed link: the old one is refused, the new one works', async () => {
@@ -226,6 +238,15 @@ describe('accounts in a real browser', () => {
       await expectText(visible(page, 'members'), /1 member,[\s\S]*Fern Founder · you[\s\S]*ADMIN/);
       expect(await page.getByRole('tab', { name: 'Outbox' }).filter({ visible: true }).count()).toBe(1);
       await saveScreenshot(page, 'team-founder-desktop');
+
+      // The only admin cannot step down: the API's 409 is said in the row.
+      await page.getByRole('button', { name: 'Change role of Fern Founder' }).click();
+      await visible(page, 'role-editor').getByRole('radio', { name: 'Viewer' }).click();
+      await visible(page, 'save-role').click();
+      await expectText(visible(page, 'role-problem'), /The team needs at least one admin/);
+      await visible(page, 'role-problem').scrollIntoViewIfNeeded();
+      await saveScreenshot(page, 'team-last-admin-desktop');
+      await expectText(visible(page, 'account-panel'), /ADMIN/);
     } finally {
       await visitor.close();
     }

@@ -50,16 +50,14 @@ export function InvitationRow({ invitation, manage }: { invitation: Invitation; 
   return (
     <View style={styles.row} role="listitem" aria-label={`Invitation to ${invitation.email}`} testID={`invitation-${invitation.email}`}>
       <View style={styles.main}>
-        <View style={styles.who}>
-          <AppText variant="mono">{invitation.email}</AppText>
-          <AppText variant="caption" tone="faint">
-            {when(invitation)}
-          </AppText>
-        </View>
+        <AppText variant="bodyStrong">{invitation.email}</AppText>
         <View style={styles.tags}>
           <RoleBadge role={invitation.role} />
           <StateTag state={invitation.state} />
         </View>
+        <AppText variant="caption" tone="faint">
+          {when(invitation)}
+        </AppText>
       </View>
       {canRevoke && !confirming ? (
         <View style={styles.actions}>
@@ -89,9 +87,8 @@ export function InvitationRow({ invitation, manage }: { invitation: Invitation; 
 
 const styles = StyleSheet.create({
   row: { gap: spacing.md, paddingVertical: spacing.md, borderTopWidth: 1, borderTopColor: colors.border },
-  main: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-start', gap: spacing.md },
-  who: { flexGrow: 1, flexBasis: 220, gap: spacing.xxs },
-  tags: { alignItems: 'flex-end', gap: spacing.xs },
+  main: { gap: spacing.xs },
+  tags: { flexDirection: 'row', alignItems: 'center', gap: spacing.md },
   state: { flexDirection: 'row', alignItems: 'center', gap: spacing.xs },
   actions: { flexDirection: 'row', gap: spacing.sm },
 });

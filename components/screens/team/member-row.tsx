@@ -55,18 +55,18 @@ export function MemberRow({ member, isYou, manage }: MemberRowProps) {
       <View style={styles.main}>
         <Initials name={member.displayName} size={36} />
         <View style={styles.who}>
-          <AppText variant="bodyStrong">
-            {member.displayName}
-            {isYou ? <AppText tone="muted">{' · you'}</AppText> : null}
-          </AppText>
-          <AppText variant="mono" tone="muted">
-            {member.email}
-          </AppText>
+          <View style={styles.nameLine}>
+            <AppText variant="bodyStrong" style={styles.name}>
+              {member.displayName}
+              {isYou ? <AppText tone="muted">{' · you'}</AppText> : null}
+            </AppText>
+            <RoleBadge role={member.role} />
+          </View>
+          <AppText tone="muted">{member.email}</AppText>
           <AppText variant="caption" tone="faint">
             Joined {formatDay(member.joinedAt)}
           </AppText>
         </View>
-        <RoleBadge role={member.role} />
       </View>
       {manage && mode === 'view' ? (
         <View style={styles.actions}>
@@ -91,5 +91,7 @@ const styles = StyleSheet.create({
   },
   main: { flexDirection: 'row', alignItems: 'flex-start', gap: spacing.md },
   who: { flex: 1, gap: spacing.xxs },
+  nameLine: { flexDirection: 'row', alignItems: 'flex-start', gap: spacing.sm },
+  name: { flex: 1 },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm, paddingLeft: 36 + spacing.md },
 });

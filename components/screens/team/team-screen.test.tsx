@@ -39,7 +39,7 @@ describe('TeamScreen', () => {
     renderWithProviders(<TeamScreen />, { session: sessionAs('viewer', 'Vic Oduya') });
 
     const piet = await screen.findByTestId('member-piet@northlight.example');
-    expect(piet).toHaveTextContent(/Piet Jansen.*piet@northlight\.example.*Joined 2 Nov 2026.*PHYSICIST/);
+    expect(piet).toHaveTextContent(/Piet Jansen.*PHYSICIST.*piet@northlight\.example.*Joined 2 Nov 2026/);
     expect(screen.getByTestId('invitation-new.grower@northlight.example')).toHaveTextContent(/GROWER.*Pending/);
     expect(screen.getByTestId('invitation-old@northlight.example')).toHaveTextContent(/Expired/);
     expect(screen.getByTestId('role-note')).toHaveTextContent(/Your role: Viewer/);
