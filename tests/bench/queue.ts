@@ -11,7 +11,7 @@ import { readEnv } from '../../server/config/env';
 import { createAuth } from '../../server/auth/auth-pool';
 import { createDataSource } from '../../server/db/data-source';
 import { prepareDatabase } from '../../server/ops/database';
-import { startServices, waitForHealth, type Service } from '../../server/ops/stack';
+import { startServices, type Service } from '../../server/ops/stack';
 import type { RunProgress } from '../../shared/api';
 
 const settings = { FROSTGRADE_PROFILE: 'test', NODE_ENV: 'test', PORT: '8391', SMTP_PORT: '2591', RUN_QUEUE: 'bench-runs', DATABASE_URL: 'postgres://postgres@127.0.0.1:54339/frostgrade_bench' };
@@ -26,13 +26,19 @@ async function main(): Promise<void> {
   const services: Service[] = [{ name: 'mail', entry: 'server/mail/catcher-main.ts' }, { name: 'api', entry: 'server/main.ts' }];
   const quiet = (line: string): boolean => line.includes('[worker] run ');
   const core = startServices(services, childEnv, (name) => { throw new Error(`${name} died`); });
-  await waitForHealth(`${env.appOrigin}/api/health`, 60).catch(() => undefined); // no worker yet: health says degraded
+  // No worker yet, so health answers 503 (degraded); wait only until the API answers at all.
+  for (let i = 0; i < 120; i += 1) {
+    const up = await fetch(`${env.appOrigin}/api/health`).then(() => true, () => false);
+    if (up) break;
+    await new Promise((r) => setTimeout(r, 500));
+  }
   const ds = await createDataSource(env.databaseUrl, 'frostgrade-bench').initialize();
   const { auth, pool } = createAuth(env);
   const [user] = await ds.query(`SELECT id FROM app_user WHERE email = 'piet@northlight.example'`);
   const cookie = auth.createSessionCookie((await auth.createSession(user.id, {})).id).serialize();
   const api = async (method: string, path: string, body?: unknown) => {
     const res = await fetch(`${env.appOrigin}/api${path}`, { method, headers: { cookie, origin: env.appOrigin, 'content-type': 'application/json' }, body: body ? JSON.stringify(body) : undefined });
+    if (!res.ok) throw new Error(`${method} ${path} answered ${res.status}: ${await res.text()}`);
     return res.json() as Promise<Record<string, never>>;
   };
   const family = ((await api('GET', '/families')).families as Array<{ id: string; name: string }>).find((f) => f.name.startsWith('NL-P7 (Bi,Sb)'))!;
