@@ -4,9 +4,8 @@ import { roleLabels, roleSummaries } from '@/components/auth/permissions';
 import { useTeam } from '@/components/api/team';
 import { ScreenFrame } from '@/components/shell/screen-frame';
 import { ErrorState, LoadingState } from '@/components/ui/state-views';
-import { InviteForm } from './invite-form';
+import { InviteSection } from './invite-section';
 import { InvitationList, MemberList } from './team-lists';
-import { TeamSection } from './team-section';
 
 /** Members and invitations of your team; admins invite, change roles, remove and revoke. */
 export function TeamScreen() {
@@ -22,11 +21,7 @@ export function TeamScreen() {
           {`${roleSummaries[role]}. Admins invite members and change roles.`}
         </FormAlert>
       ) : null}
-      {manage ? (
-        <TeamSection title="Invite a teammate" hint="They get an e-mail with a link to choose their name and password.">
-          <InviteForm />
-        </TeamSection>
-      ) : null}
+      {manage ? <InviteSection /> : null}
       {query.isPending ? <LoadingState label="Loading the team…" /> : null}
       {query.isError ? (
         <ErrorState title="Could not load the team" message={query.error.message} onRetry={refresh} retrying={query.isFetching} />
