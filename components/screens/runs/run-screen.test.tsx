@@ -4,7 +4,7 @@ import type { RunDetail } from '@/shared/api/runs';
 import { lastSocket, sockets } from '@/components/realtime/test-socket';
 import { renderRoutes } from '@/components/test-router';
 import { sessionAs } from '@/components/test-utils';
-import { ids, progress, routeFetch, runDetail, runSummary, type Reply } from './test-fixtures';
+import { engineResult, ids, progress, routeFetch, runDetail, runSummary, type Reply } from './test-fixtures';
 import { RunScreen } from './run-screen';
 
 jest.mock('@/components/charts/series-plot', () => jest.requireActual('@/components/charts/test-series-plot'));
@@ -24,6 +24,12 @@ function show(detail: RunDetail | (() => RunDetail), role: 'physicist' | 'viewer
   renderRoutes(routes, `/runs/${ids.run}`, sessionAs(role));
   return fetched;
 }
+
+// The fixture's result is the engine's own optimisation, computed once; a busy machine needs time for it.
+jest.setTimeout(30_000);
+beforeAll(() => {
+  engineResult();
+}, 120_000);
 
 afterEach(() => {
   sockets.length = 0;
