@@ -4,6 +4,7 @@ import { useRunDetail } from '@/components/api/runs';
 import { parseRunResult } from '@/components/screens/runs/run-result';
 import { ScreenFrame } from '@/components/shell/screen-frame';
 import { Notice } from '@/components/ui/notice';
+import { LinkButton } from '@/components/ui/link-button';
 import { ErrorState, LoadingState } from '@/components/ui/state-views';
 import { AppText } from '@/components/ui/text';
 import { CurvesBody } from './curves-body';
@@ -30,7 +31,10 @@ export function RunCurvesScreen() {
   return (
     <ScreenFrame title="Operating curves" subtitle={`${detail.run.designName}: Qc, COP, voltage and power versus current`} back={back}>
       {parsed?.ok ? (
-        <CurvesBody runCase={detail.case} result={parsed.result} />
+        <>
+          <LinkButton variant="quiet" label="Build a module with this leg" href={`/modules/new?p=${detail.run.id}`} testID="curves-build-module" />
+          <CurvesBody runCase={detail.case} result={parsed.result} />
+        </>
       ) : (
         <Notice tone="info" title="No curves yet">
           <AppText>{parsed ? parsed.message : 'The run has no result yet: curves are drawn once it has finished.'}</AppText>

@@ -1,0 +1,1 @@
+export { ModuleScreen as default } from '@/components/screens/modules/module-screen';

@@ -1,0 +1,1 @@
+export { NewModuleScreen as default } from '@/components/screens/modules/module-screen';

@@ -1,0 +1,42 @@
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { moduleResponseSchema, modulesResponseSchema, type ModuleInput } from '@/shared/api/modules';
+import { apiBaseUrl, apiGet, apiSend } from './client';
+
+export const modulesQueryKey = ['modules'] as const;
+export const moduleDetailKey = (id: string) => [...modulesQueryKey, 'detail', id] as const;
+
+const modulePath = (id: string) => `/api/modules/${encodeURIComponent(id)}`;
+
+/** `GET /api/modules`: the team's saved couples and modules. */
+export function useModules() {
+  return useQuery({
+    queryKey: [...modulesQueryKey, 'list'],
+    queryFn: ({ signal }) => apiGet('/api/modules', modulesResponseSchema, { signal }),
+  });
+}
+
+/** `GET /api/modules/:id`: the saved input and the resolved engine case. */
+export function useModuleDetail(id: string) {
+  return useQuery({
+    enabled: id.length > 0,
+    queryKey: moduleDetailKey(id),
+    queryFn: ({ signal }) => apiGet(modulePath(id), moduleResponseSchema, { signal }),
+  });
+}
+
+export type SaveModuleVariables = { id: string | null; body: ModuleInput };
+
+/** `POST /api/modules` (new) or `PUT /api/modules/:id`; 400 answers name the field. */
+export function useSaveModule() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, body }: SaveModuleVariables) =>
+      id === null ? apiSend('POST', '/api/modules', { json: body }, moduleResponseSchema) : apiSend('PUT', modulePath(id), { json: body }, moduleResponseSchema),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: modulesQueryKey }),
+  });
+}
+
+/** `GET /api/modules/:id/curves.csv`: the module's curves as CSV. */
+export function moduleCsvUrl(id: string): string {
+  return `${apiBaseUrl()}${modulePath(id)}/curves.csv`;
+}

@@ -1,0 +1,35 @@
+import { StyleSheet, View } from 'react-native';
+import { spacing } from '@/components/theme';
+import { TextField } from '@/components/ui/text-field';
+import type { FieldErrors, ModuleText } from './module-form-model';
+
+type Key = Exclude<keyof ModuleText, 'p' | 'n' | 'name'>;
+
+const fields: [Key, string, string, string?][] = [
+  ['hotSide', 'Hot side Th', 'K'],
+  ['deltaT', 'ΔT', 'K'],
+  ['couples', 'Couples N', 'couples'],
+  ['areaRatio', 'Area ratio A_n / A_p (optional)', '–', 'Default: the legs’ own areas'],
+  ['contactResistivity', 'Contact resistivity per junction (optional)', 'Ω·m²', 'e.g. 1e-10'],
+  ['coldPlateResistance', 'Cold plate thermal resistance (optional)', 'K/W'],
+  ['hotPlateResistance', 'Hot plate thermal resistance (optional)', 'K/W'],
+  ['currentLimit', 'Supply or wire current limit (optional)', 'A', 'Currents above it are flagged'],
+];
+
+/** The module's numbers: conditions, couples, contacts, plates and the current limit. */
+export function ModuleFields({ value, onChange, errors }: { value: ModuleText; onChange: (v: ModuleText) => void; errors: FieldErrors }) {
+  return (
+    <View style={styles.grid}>
+      {fields.map(([key, label, unit, help]) => (
+        <View key={key} style={styles.field}>
+          <TextField id={`module-${key}`} label={label} unit={unit} help={help} mono value={value[key]} onChangeText={(t) => onChange({ ...value, [key]: t })} error={errors[key]} />
+        </View>
+      ))}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  grid: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
+  field: { flexGrow: 1, flexBasis: 200 },
+});

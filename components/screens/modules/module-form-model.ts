@@ -1,0 +1,99 @@
+import type { ModuleInput } from '@/shared/api/modules';
+
+export type LegText = { kind: 'run' | 'family'; runId: string; leg: 'optimum' | 'uniform' | 'localBestZt'; familyId: string; perCm3: string; lengthMm: string; areaMm2: string };
+
+export type ModuleText = {
+  name: string;
+  p: LegText;
+  n: LegText;
+  hotSide: string;
+  deltaT: string;
+  couples: string;
+  areaRatio: string;
+  contactResistivity: string;
+  coldPlateResistance: string;
+  hotPlateResistance: string;
+  currentLimit: string;
+};
+
+export const emptyLeg = (kind: LegText['kind'], runId = ''): LegText => ({ kind, runId, leg: 'optimum', familyId: '', perCm3: '2e19', lengthMm: '1.5', areaMm2: '1' });
+
+export const defaultModuleText = (pRunId = ''): ModuleText => ({
+  name: '',
+  p: emptyLeg(pRunId ? 'run' : 'family', pRunId),
+  n: emptyLeg('family'),
+  hotSide: '300',
+  deltaT: '30',
+  couples: '31',
+  areaRatio: '',
+  contactResistivity: '',
+  coldPlateResistance: '',
+  hotPlateResistance: '',
+  currentLimit: '',
+});
+
+export type FieldErrors = Record<string, string>;
+
+/** The form's text as a module input; messages name the field and its unit. */
+export function moduleInputFrom(t: ModuleText): { input: ModuleInput | null; errors: FieldErrors } {
+  const errors: FieldErrors = {};
+  const num = (field: string, text: string, what: string, optional = false): number | undefined => {
+    if (text.trim() === '') {
+      if (!optional) errors[field] = `${what} is required`;
+      return undefined;
+    }
+    const v = Number(text);
+    if (!Number.isFinite(v)) errors[field] = `${what} must be a number`;
+    return v;
+  };
+  const leg = (side: 'p' | 'n', l: LegText): ModuleInput['p'] | null => {
+    if (l.kind === 'run') {
+      if (l.runId.trim() === '') errors[`${side}.runId`] = `${side}-type leg: pick a run`;
+      return { kind: 'run', runId: l.runId.trim(), leg: l.leg };
+    }
+    if (l.familyId === '') errors[`${side}.familyId`] = `${side}-type leg: pick a family`;
+    const perCm3 = num(`${side}.perCm3`, l.perCm3, 'Doping (cm⁻³)');
+    const lengthMm = num(`${side}.lengthMm`, l.lengthMm, 'Leg length (mm)');
+    const areaMm2 = num(`${side}.areaMm2`, l.areaMm2, 'Leg area (mm²)');
+    if (perCm3 === undefined || lengthMm === undefined || areaMm2 === undefined) return null;
+    return { kind: 'family', familyId: l.familyId, perCm3, lengthMm, areaMm2 };
+  };
+  if (t.name.trim() === '') errors.name = 'Name is required';
+  const p = leg('p', t.p);
+  const n = leg('n', t.n);
+  const hotSide = num('hotSide', t.hotSide, 'Hot side Th (K)');
+  const deltaT = num('deltaT', t.deltaT, 'ΔT (K)');
+  const couples = num('couples', t.couples, 'Couples N');
+  const optional = {
+    areaRatio: num('areaRatio', t.areaRatio, 'Area ratio', true),
+    contactResistivity: num('contactResistivity', t.contactResistivity, 'Contact resistivity (Ω·m²)', true),
+    coldPlateResistance: num('coldPlateResistance', t.coldPlateResistance, 'Cold plate resistance (K/W)', true),
+    hotPlateResistance: num('hotPlateResistance', t.hotPlateResistance, 'Hot plate resistance (K/W)', true),
+    currentLimit: num('currentLimit', t.currentLimit, 'Current limit (A)', true),
+  };
+  if (Object.keys(errors).length > 0 || !p || !n || hotSide === undefined || deltaT === undefined || couples === undefined) return { input: null, errors };
+  const set = Object.fromEntries(Object.entries(optional).filter(([, v]) => v !== undefined));
+  return { input: { name: t.name.trim(), p, n, hotSide, deltaT, couples, ...set }, errors };
+}
+
+/** A saved input back into the form's text. */
+export function textFrom(input: ModuleInput): ModuleText {
+  const leg = (s: ModuleInput['p']): LegText =>
+    s.kind === 'run'
+      ? { ...emptyLeg('run', s.runId), leg: s.leg ?? 'optimum' }
+      : { ...emptyLeg('family'), familyId: s.familyId, perCm3: String(s.perCm3), lengthMm: String(s.lengthMm), areaMm2: String(s.areaMm2) };
+  const opt = (v: number | undefined) => (v === undefined ? '' : String(v));
+  return {
+    name: input.name,
+    p: leg(input.p),
+    n: leg(input.n),
+    hotSide: String(input.hotSide),
+    deltaT: String(input.deltaT),
+    couples: opt(input.couples),
+    areaRatio: opt(input.areaRatio),
+    contactResistivity: opt(input.contactResistivity),
+    coldPlateResistance: opt(input.coldPlateResistance),
+    hotPlateResistance: opt(input.hotPlateResistance),
+    currentLimit: opt(input.currentLimit),
+  };
+}

@@ -1,0 +1,36 @@
+import { router, useLocalSearchParams } from 'expo-router';
+import { useModuleDetail } from '@/components/api/modules';
+import { ScreenFrame } from '@/components/shell/screen-frame';
+import { ErrorState, LoadingState } from '@/components/ui/state-views';
+import { ModuleEditor } from './module-editor';
+import { defaultModuleText, textFrom } from './module-form-model';
+
+const back = { label: 'Runs', href: '/runs' } as const;
+
+/** `/modules/new?p=<runId>`: a new couple or module, its p leg from a run when given. */
+export function NewModuleScreen() {
+  const p = useLocalSearchParams<{ p?: string }>().p ?? '';
+  return (
+    <ScreenFrame title="New module" subtitle="Couples and modules from run legs or families at uniform doping" back={back}>
+      <ModuleEditor initial={defaultModuleText(p)} saved={null} onSaved={(m) => router.replace(`/modules/${m.id}`)} />
+    </ScreenFrame>
+  );
+}
+
+/** `/modules/[id]`: a saved module, its curves and CSV export. */
+export function ModuleScreen() {
+  const id = useLocalSearchParams<{ id: string }>().id ?? '';
+  const query = useModuleDetail(id);
+  const m = query.data?.module;
+  return (
+    <ScreenFrame title={m?.name ?? 'Module'} subtitle="Module: Qc, COP, voltage and current versus current and ΔT" back={back}>
+      {m ? (
+        <ModuleEditor key={m.updatedAt} initial={textFrom(m.input)} saved={m} onSaved={() => void query.refetch()} />
+      ) : query.isError ? (
+        <ErrorState title="Could not load the module" message={query.error.message} />
+      ) : (
+        <LoadingState label="Loading the module…" />
+      )}
+    </ScreenFrame>
+  );
+}

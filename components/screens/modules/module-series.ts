@@ -1,0 +1,53 @@
+import type { PlotSeries } from '@/components/charts/series-plot-types';
+import type { ModuleResult } from '@/shared/engine';
+import { chartMarks } from '@/components/theme';
+
+type Curve = { x: number[]; y: (number | null)[] };
+
+const line = ({ x, y }: Curve) => x.flatMap((xi, i) => (y[i] !== null && Number.isFinite(y[i]) ? [{ x: xi, y: y[i] as number }] : []));
+
+export type ModulePlotSpec = { key: string; title: string; xLabel: string; yLabel: string; series: PlotSeries[]; note?: string };
+
+/** Within the limit solid, over it dashed with its own legend words: the flag reads without colour. */
+function splitByLimit(label: string, x: number[], y: (number | null)[], over: boolean[]): PlotSeries[] {
+  const within = { x: x.filter((_, i) => !over[i]), y: y.filter((_, i) => !over[i]) };
+  const above = { x: x.filter((_, i) => over[i]), y: y.filter((_, i) => over[i]) };
+  const out: PlotSeries[] = [{ key: 'within', label, mark: chartMarks[0], line: line(within) }];
+  if (above.x.length > 0) out.push({ key: 'over', label: `${label}, over the current limit`, mark: chartMarks[2], line: [], points: line(above) });
+  return out;
+}
+
+/** The module's plots: Qc, COP, V, P versus current; Qc versus ΔT; voltage against current as N changes. */
+export function modulePlots(r: ModuleResult): ModulePlotSpec[] {
+  const c = r.versusCurrent;
+  const byCurrent = (key: string, title: string, yLabel: string, y: (number | null)[]): ModulePlotSpec => ({
+    key,
+    title: `${title} versus current`,
+    xLabel: 'Current I (A)',
+    yLabel,
+    series: splitByLimit(title, c.currents, y, c.overLimit),
+  });
+  const d = r.versusDeltaT;
+  const trade = r.trade.rows.map((row) => ({ x: row.maxHeatLoad.current, y: row.maxHeatLoad.voltage }));
+  return [
+    byCurrent('heatLoad', 'Heat load Qc', 'Qc (W)', c.heatLoad),
+    byCurrent('cop', 'COP', 'COP (dimensionless)', c.cop),
+    byCurrent('voltage', 'Voltage', 'V (V)', c.voltage),
+    byCurrent('power', 'Input power', 'P (W)', c.power),
+    {
+      key: 'deltaT',
+      title: 'Heat load versus ΔT',
+      xLabel: 'ΔT (K)',
+      yLabel: 'Qc (W)',
+      series: [{ key: 'qc', label: 'Qc at the current of maximum Qc', mark: chartMarks[0], line: line({ x: d.deltaT, y: d.heatLoad }) }],
+    },
+    {
+      key: 'trade',
+      title: 'Voltage against current as N changes',
+      xLabel: 'Current at maximum Qc (A)',
+      yLabel: 'Voltage at maximum Qc (V)',
+      series: [{ key: 'trade', label: 'Same total leg area, N couples', mark: chartMarks[1], line: trade, points: trade }],
+      note: 'One marker per couple count N (see the table).',
+    },
+  ];
+}
