@@ -4,7 +4,7 @@ import type { Role } from '@/shared/api/auth';
 import { renderRoutes } from '@/components/test-router';
 import { sessionAs } from '@/components/test-utils';
 import { ReleaseButton } from './release-button';
-import { ids, order, routeFetch } from './test-fixtures';
+import { ids, order, routeFetch, type Reply } from './test-fixtures';
 
 const routes = {
   'runs/[id]': () => <ReleaseButton runId={ids.run} />,
@@ -13,7 +13,7 @@ const routes = {
 
 const releaseUrl = `POST /api/runs/${ids.run}/release`;
 
-function show(role: Role, reply = { status: 201, body: { order: order() } }) {
+function show(role: Role, reply: Reply = { status: 201, body: { order: order() } }) {
   const fetched = routeFetch({ [releaseUrl]: reply });
   const result = renderRoutes(routes, `/runs/${ids.run}`, sessionAs(role));
   return { ...fetched, result };
