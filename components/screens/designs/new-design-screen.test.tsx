@@ -5,6 +5,9 @@ import { sessionAs } from '@/components/test-utils';
 import { design, familiesResponse, familyDetail, ids, routeFetch, type Reply, type SentRequest } from '../runs/test-fixtures';
 import { NewDesignScreen } from './new-design-screen';
 
+// The quick estimate runs the engine in the test (band tables on first use): room for a busy machine.
+jest.setTimeout(30_000);
+
 const routes = {
   'designs/new': NewDesignScreen,
   'designs/index': () => <Text>Designs list</Text>,
