@@ -163,3 +163,13 @@ it('a member of another team can neither watch a run nor read it', async () => {
   expect((await (await signedIn(ctx, demo.otherTeamAdmin)).get(`/api/runs/${runId}`)).status).toBe(404);
   expect((await (await signedIn(ctx, demo.grower)).get(`/api/runs/${runId}`)).status).toBe(403);
 });
+
+it('a sweep with a value the engine refuses queues nothing and names the value', async () => {
+  const api = await signedIn(ctx, demo.physicist);
+  const designId = await design(api, `Bad sweep ${Date.now()}`, 1);
+  const before = (await api.get(`/api/runs?designId=${designId}`)).body.runs.length;
+  const res = await api.post(`/api/designs/${designId}/sweeps`).send({ parameter: 'hotSide', values: [290, 300, 6000] });
+  expect(res.status).toBe(400);
+  expect(res.body.errors[0].field).toBe('values[2]');
+  expect((await api.get(`/api/runs?designId=${designId}`)).body.runs.length).toBe(before);
+});
