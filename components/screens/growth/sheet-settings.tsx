@@ -40,7 +40,10 @@ export function SheetSettings({ order, maxZones }: SheetSettingsProps) {
   const serverField = (f: string) => (update.error instanceof ApiError ? update.error.fieldErrors.find((e) => e.field === f)?.message : undefined);
   const apply = () => {
     const checked = checkSettings(draft);
-    if (!checked.ok) return setProblems(checked.problems);
+    if (!checked.ok) {
+      setProblems(checked.problems);
+      return;
+    }
     setProblems({});
     update.mutate(checked.value);
   };
