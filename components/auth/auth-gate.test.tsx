@@ -105,4 +105,16 @@ describe('the auth gate', () => {
     expect(router.getSearchParams()).toEqual({});
     expect(requests.map((r) => `${r.method} ${r.url}`)).toEqual(['GET /api/auth/me', 'POST /api/auth/sign-out']);
   });
+
+  it('says so when the server cannot be reached at start, and offers a retry', async () => {
+    global.fetch = jest.fn(async () => {
+      throw new TypeError('Failed to fetch');
+    }) as unknown as typeof fetch;
+    renderRouter(routes, { initialUrl: '/' });
+
+    expect(await screen.findByText('Frostgrade is not answering')).toBeOnTheScreen();
+    expect(screen.getByText(/Could not reach the Frostgrade server/)).toBeOnTheScreen();
+    expect(screen.getByRole('button', { name: 'Try again' })).toBeOnTheScreen();
+    expect(screen.queryByText('Materials home')).toBeNull();
+  });
 });

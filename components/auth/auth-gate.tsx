@@ -30,12 +30,13 @@ function Splash() {
 export function AuthGate({ children }: { children: ReactNode }) {
   const me = useMe();
   if (me.isPending) return <Splash />;
-  if (me.isError) {
+  // A failed re-check (say, on window focus while offline) keeps the last answer.
+  if (me.data === undefined) {
     return (
       <View style={styles.failed}>
         <ErrorState
           title="Frostgrade is not answering"
-          message={me.error.message}
+          message={me.error?.message ?? 'No answer from the server.'}
           onRetry={() => void me.refetch()}
           retrying={me.isFetching}
         />
