@@ -5,6 +5,7 @@ import { Slot } from 'expo-router';
 import { fireEvent, renderRouter, screen } from 'expo-router/testing-library';
 import { SafeAreaProvider } from 'react-native-safe-area-context';
 import { ScreenFrame } from '@/components/shell/screen-frame';
+import { tabs } from '@/components/shell/tabs';
 import { createTestQueryClient, mockFetch, sessionAs } from '@/components/test-utils';
 import { AuthGate } from './auth-gate';
 import { AuthLayout } from './auth-layout';
@@ -32,6 +33,22 @@ const page = (text: string) =>
     return <Text>{text}</Text>;
   };
 
+/** A stand-in page (or group with its layout) for every tab of the shell, so every trigger has a route. */
+function tabRoutes(): Record<string, () => ReactNode> {
+  const found: Record<string, () => ReactNode> = {};
+  for (const tab of tabs) {
+    const href = String(tab.href);
+    if (tab.name === 'team') continue;
+    if (!tab.name.startsWith('(')) {
+      found[`(tabs)/${tab.name}`] = page(`${tab.label} page`);
+      continue;
+    }
+    found[`(tabs)/${tab.name}/_layout`] = () => <Slot />;
+    found[`(tabs)/${tab.name}${href === '/' ? '' : href}/index`] = page(tab.label === 'Materials' ? 'Materials home' : `${tab.label} page`);
+  }
+  return found;
+}
+
 /** The real layouts and sign-in page; the tab pages are stand-ins. */
 const routes = {
   _layout: Root,
@@ -40,15 +57,12 @@ const routes = {
   '(auth)/sign-up': page('Sign-up page'),
   '(auth)/forgot-password': page('Forgot page'),
   '(tabs)/_layout': SignedInShell,
-  '(tabs)/(materials)/_layout': () => <Slot />,
-  '(tabs)/(materials)/index': page('Materials home'),
+  ...tabRoutes(),
   '(tabs)/team': () => (
     <ScreenFrame title="Team page">
       <Text>Members</Text>
     </ScreenFrame>
   ),
-  '(tabs)/outbox': page('Outbox page'),
-  '(tabs)/system': page('System page'),
 };
 
 const unauthorized = { status: 401, body: { name: 'Unauthorized', message: 'Sign in first.' } };
