@@ -1,4 +1,4 @@
-import { admins } from '../http/access';
+import { admins, requireTeam } from '../http/access';
 import { NotFoundError } from '../http/errors';
 import { route, type RouteSpec } from '../http/route-table';
 import { checkHealth, type HealthDeps } from '../services/health-service';
@@ -12,9 +12,9 @@ export function systemRoutes(deps: HealthDeps & { mailCatcher: boolean }): Route
       res.status(health.status === 'ok' ? 200 : 503).json(health);
     }),
     // The outbox exists only where the local catcher does (never in production).
-    route('get', '/outbox', admins, async (_req, res) => {
+    route('get', '/outbox', admins, async (req, res) => {
       if (!deps.mailCatcher) throw new NotFoundError('outbox');
-      res.json(await listOutbox(deps.ds));
+      res.json(await listOutbox(deps.ds, requireTeam(req)));
     }),
   ];
 }

@@ -1,9 +1,17 @@
 import type { DataSource } from 'typeorm';
-import { CapturedMail } from '../db/entities';
+import { CapturedMail, Team } from '../db/entities';
 
-/** The newest captured messages first; capped so the screen stays light. */
-export async function listOutbox(ds: DataSource, limit = 200) {
-  const rows = await ds.getRepository(CapturedMail).find({ order: { receivedAt: 'DESC' }, take: limit });
+/**
+ * The newest captured messages addressed to the caller's team — its members
+ * and the addresses it invited — never another team's (they carry sign-in
+ * links). Capped so the screen stays light.
+ */
+export async function listOutbox(ds: DataSource, team: Team, limit = 200) {
+  const rows = await ds.getRepository(CapturedMail).createQueryBuilder('m')
+    .where(`m.to && ARRAY(SELECT lower(email) FROM app_user WHERE team_id = :team UNION SELECT lower(email) FROM invitation WHERE team_id = :team)`, { team: team.id })
+    .orderBy('m.receivedAt', 'DESC')
+    .take(limit)
+    .getMany();
   return {
     messages: rows.map((m) => ({ id: m.id, receivedAt: m.receivedAt.toISOString(), from: m.from, to: m.to, subject: m.subject, text: m.text })),
   };

@@ -24,13 +24,16 @@ it('a job sent to the queue is worked by the separate worker process', async () 
 
 it('mail sent through nodemailer is caught by the local SMTP catcher and shown in the outbox', async () => {
   const subject = `Probe ${Date.now()}`;
-  await ctx.mailer.send({ to: ['grower@northlight.example'], subject, text: 'Zone 3 measured: 2.1e19 cm^-3.' });
+  await ctx.mailer.send({ to: [demo.grower], subject, text: 'Zone 3 measured: 2.1e19 cm^-3.' });
   const found = await eventually(async () => {
     const body = outboxResponseSchema.parse((await (await signedIn(ctx, demo.admin)).get('/api/outbox')).body);
     return body.messages.find((m) => m.subject === subject);
   });
-  expect(found.to).toEqual(['grower@northlight.example']);
+  expect(found.to).toEqual([demo.grower]);
   expect(found.text).toContain('2.1e19');
+  // Another team's admin never reads it: captured mail carries sign-in links.
+  const theirs = outboxResponseSchema.parse((await (await signedIn(ctx, demo.otherTeamAdmin)).get('/api/outbox')).body);
+  expect(theirs.messages.map((m) => m.subject)).not.toContain(subject);
 });
 
 it('hides the outbox where no catcher runs (production)', async () => {
