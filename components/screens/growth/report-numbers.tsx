@@ -31,23 +31,29 @@ export function reportFigures(report: ReportView): Figure[] {
 /** The three numbers the physicist decides on, each with its unit and its difference to the target. */
 export function ReportNumbers({ report }: { report: ReportView }) {
   return (
-    <View style={styles.row} testID="report-numbers">
-      {reportFigures(report).map((f) => (
-        <View key={f.key} style={[styles.box, f.key === 'design-current' && styles.main]} testID={`report-${f.key}`}>
-          <AppText variant="caption" tone="muted">
-            {f.term}
-          </AppText>
-          <AppText variant="title">{f.value}</AppText>
-          <AppText variant="caption" tone="muted">
-            {f.note}
-          </AppText>
-        </View>
-      ))}
+    <View style={styles.wrap}>
+      <View style={styles.row} testID="report-numbers">
+        {reportFigures(report).map((f) => (
+          <View key={f.key} style={[styles.box, f.key === 'design-current' && styles.main]} testID={`report-${f.key}`}>
+            <AppText variant="caption" tone="muted">
+              {f.term}
+            </AppText>
+            <AppText variant="title">{f.value}</AppText>
+            <AppText variant="caption" tone="muted">
+              {f.note}
+            </AppText>
+          </View>
+        ))}
+      </View>
+      <AppText variant="caption" tone="muted" testID="report-caution">
+        Predicted by the leg model from the doping inferred at each measured position, not measured: confirm with a device measurement before building.
+      </AppText>
     </View>
   );
 }
 
 const styles = StyleSheet.create({
+  wrap: { gap: spacing.xs },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
   box: { flexGrow: 1, flexBasis: 180, gap: spacing.xxs, padding: spacing.md, borderWidth: 1, borderColor: colors.border, borderRadius: radii.md, backgroundColor: colors.background },
   main: { borderColor: colors.primary, borderWidth: 2 },
