@@ -3,7 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import { useIsWide } from '@/components/shell/use-is-wide';
 import { InviteForm } from './invite-form';
 import { RowButton } from './row-button';
-import { TeamSection } from './team-section';
+import { Section as TeamSection } from '@/components/ui/form-section';
 
 /**
  * Admins: the invitation form. Open on a wide screen; on a phone it waits

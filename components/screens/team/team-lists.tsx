@@ -3,7 +3,7 @@ import type { TeamResponse } from '@/shared/api/auth';
 import { AppText } from '@/components/ui/text';
 import { InvitationRow } from './invitation-row';
 import { MemberRow } from './member-row';
-import { TeamSection } from './team-section';
+import { Section as TeamSection } from '@/components/ui/form-section';
 
 type ListProps = { team: TeamResponse; manage: boolean };
 
