@@ -1,4 +1,4 @@
-import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQueries, useQuery, useQueryClient } from '@tanstack/react-query';
 import { moduleResponseSchema, modulesResponseSchema, type ModuleInput } from '@/shared/api/modules';
 import { apiBaseUrl, apiGet, apiSend } from './client';
 
@@ -15,13 +15,20 @@ export function useModules() {
   });
 }
 
+const moduleDetailQuery = (id: string) => ({
+  enabled: id.length > 0,
+  queryKey: moduleDetailKey(id),
+  queryFn: ({ signal }: { signal: AbortSignal }) => apiGet(modulePath(id), moduleResponseSchema, { signal }),
+});
+
 /** `GET /api/modules/:id`: the saved input and the resolved engine case. */
 export function useModuleDetail(id: string) {
-  return useQuery({
-    enabled: id.length > 0,
-    queryKey: moduleDetailKey(id),
-    queryFn: ({ signal }) => apiGet(modulePath(id), moduleResponseSchema, { signal }),
-  });
+  return useQuery(moduleDetailQuery(id));
+}
+
+/** Several modules at once (the comparison). */
+export function useModuleDetails(ids: readonly string[]) {
+  return useQueries({ queries: ids.map(moduleDetailQuery) });
 }
 
 export type SaveModuleVariables = { id: string | null; body: ModuleInput };

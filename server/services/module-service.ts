@@ -1,8 +1,8 @@
-import type { DataSource, EntityManager } from 'typeorm';
+import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { z } from 'zod';
-import type { LegSource, ModuleDesign as ModuleDto, moduleInputSchema } from '../../shared/api';
+import type { LegSource, ModuleDesign as ModuleDto, ModuleSummary, moduleInputSchema } from '../../shared/api';
 import { CaseError, legsFromRun, parseModuleCase, runModule, type LegDefinitionInput, type RunResultLegs } from '../../shared/engine';
-import { ModuleDesign, Team } from '../db/entities';
+import { MaterialFamily, ModuleDesign, Run, Team } from '../db/entities';
 import { NotFoundError, ValidationError } from '../http/errors';
 import { isUuid } from '../http/validate';
 import { findFamily, findVersion } from './family-store';
@@ -59,9 +59,26 @@ const toDto = (r: ModuleDesign): ModuleDto => ({
   createdBy: r.createdBy, createdAt: r.createdAt.toISOString(), updatedAt: r.updatedAt.toISOString(),
 });
 
-export async function listModules(ds: DataSource, team: Team): Promise<Array<Omit<ModuleDto, 'case'>>> {
+/** The name of each leg's source (run → its design, family → the family); null for one deleted since. */
+async function sourceNamer(ds: DataSource, team: Team, inputs: ModuleInput[]): Promise<(s: LegSource) => string | null> {
+  const sources = inputs.flatMap((i) => [i.p, i.n]);
+  const runIds = [...new Set(sources.flatMap((s) => (s.kind === 'run' ? [s.runId] : [])))];
+  const familyIds = [...new Set(sources.flatMap((s) => (s.kind === 'family' ? [s.familyId] : [])))];
+  const runs = runIds.length ? await ds.getRepository(Run).findBy({ teamId: team.id, id: In(runIds) }) : [];
+  const families = familyIds.length ? await ds.getRepository(MaterialFamily).findBy({ teamId: team.id, id: In(familyIds) }) : [];
+  const runName = new Map(runs.map((r) => [r.id, String(r.designSnapshot.name)]));
+  const familyName = new Map(families.map((f) => [f.id, f.name]));
+  return (s) => (s.kind === 'run' ? runName.get(s.runId) : familyName.get(s.familyId)) ?? null;
+}
+
+export async function listModules(ds: DataSource, team: Team): Promise<ModuleSummary[]> {
   const rows = await ds.getRepository(ModuleDesign).find({ where: { teamId: team.id }, order: { updatedAt: 'DESC' } });
-  return rows.map((r) => { const { case: _c, ...rest } = toDto(r); return rest; });
+  const nameOf = await sourceNamer(ds, team, rows.map((r) => r.input as unknown as ModuleInput));
+  return rows.map((r) => {
+    const { case: _c, ...rest } = toDto(r);
+    const input = r.input as unknown as ModuleInput;
+    return { ...rest, sourceNames: { p: nameOf(input.p), n: nameOf(input.n) } };
+  });
 }
 
 export async function getModule(ds: DataSource, team: Team, id: unknown): Promise<ModuleDto> {

@@ -45,9 +45,15 @@ export const moduleDesignSchema = z.object({
   updatedAt: isoDateTimeSchema,
 });
 
-export const modulesResponseSchema = z.object({ modules: z.array(moduleDesignSchema.omit({ case: true })) });
+/** A list entry: the saved input and the name of each leg's source (the run's design or the family; null when gone), no engine case. */
+export const moduleSummarySchema = moduleDesignSchema.omit({ case: true }).extend({
+  sourceNames: z.object({ p: z.string().nullable(), n: z.string().nullable() }),
+});
+
+export const modulesResponseSchema = z.object({ modules: z.array(moduleSummarySchema) });
 export const moduleResponseSchema = z.object({ module: moduleDesignSchema });
 
 export type LegSource = z.infer<typeof legSourceSchema>;
 export type ModuleInput = z.input<typeof moduleInputSchema>;
 export type ModuleDesign = z.infer<typeof moduleDesignSchema>;
+export type ModuleSummary = z.infer<typeof moduleSummarySchema>;

@@ -1,4 +1,4 @@
-import { moduleResponseSchema } from '../../shared/api';
+import { moduleResponseSchema, modulesResponseSchema } from '../../shared/api';
 import { parseModuleCase, runModule } from '../../shared/engine';
 import { demo, eventually, openContext, signedIn, type TestContext } from './context';
 
@@ -28,6 +28,11 @@ it('saves a module from a run and a family, resolves it to an engine case, and e
   expect(csv.status).toBe(200);
   expect(csv.text).toMatch(/maximum heat load .* W at .* A/);
   expect(csv.text).toMatch(/,yes$/m); // currents above the 3 A limit are flagged
+
+  // The list names each leg's source: the run's design, the family.
+  const listed = modulesResponseSchema.parse((await api.get('/api/modules')).body).modules.find((x) => x.id === m.id)!;
+  expect(listed.sourceNames).toEqual({ p: design.body.design.name, n: n.name });
+  expect(listed).not.toHaveProperty('case');
 
   const wrongLeg = await api.post('/api/modules').send({ ...input, p: { kind: 'run', runId: '00000000-0000-4000-8000-000000000000' } });
   expect(wrongLeg.status).toBe(400);

@@ -1,11 +1,13 @@
 import { router, useLocalSearchParams } from 'expo-router';
 import { useModuleDetail } from '@/components/api/modules';
+import { compareHref } from '@/components/screens/runs/compare-model';
 import { ScreenFrame } from '@/components/shell/screen-frame';
+import { LinkButton } from '@/components/ui/link-button';
 import { ErrorState, LoadingState } from '@/components/ui/state-views';
 import { ModuleEditor } from './module-editor';
 import { defaultModuleText, textFrom } from './module-form-model';
 
-const back = { label: 'Runs', href: '/runs' } as const;
+const back = { label: 'Modules', href: '/modules' } as const;
 
 /** `/modules/new?p=<runId>`: a new couple or module, its p leg from a run when given. */
 export function NewModuleScreen() {
@@ -24,6 +26,7 @@ export function ModuleScreen() {
   const m = query.data?.module;
   return (
     <ScreenFrame title={m?.name ?? 'Module'} subtitle="Module: Qc, COP, voltage and current versus current and ΔT" back={back}>
+      {m ? <LinkButton variant="quiet" label="Compare with runs or modules" href={compareHref([], [m.id])} testID="module-compare" /> : null}
       {m ? (
         <ModuleEditor key={m.updatedAt} initial={textFrom(m.input)} saved={m} onSaved={() => void query.refetch()} />
       ) : query.isError ? (

@@ -16,6 +16,12 @@ export function parseIds(raw: string | string[] | undefined): string[] {
   return [...new Set(text.split(',').map((s) => s.trim()).filter((s) => idPattern.test(s)))].slice(0, maxCompared);
 }
 
+/** `/runs/compare?ids=…&modules=…`, leaving out an empty list. */
+export function compareHref(runIds: readonly string[], moduleIds: readonly string[]): string {
+  const parts = [runIds.length ? `ids=${runIds.join(',')}` : '', moduleIds.length ? `modules=${moduleIds.join(',')}` : ''].filter(Boolean);
+  return `/runs/compare${parts.length ? `?${parts.join('&')}` : ''}`;
+}
+
 export type Compared = { detail: RunDetail; result: RunResult | null; label: string; note: string };
 
 export function compared(details: RunDetail[]): Compared[] {

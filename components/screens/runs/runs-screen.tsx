@@ -10,7 +10,7 @@ import { LinkButton } from '@/components/ui/link-button';
 import { EmptyState, ErrorState, LoadingState } from '@/components/ui/state-views';
 import { AppText } from '@/components/ui/text';
 import { ConnectionLine } from './connection-line';
-import { maxCompared } from './compare-model';
+import { compareHref, maxCompared } from './compare-model';
 import { RunRow } from './run-row';
 
 type Filter = 'all' | 'active' | 'finished';
@@ -29,7 +29,7 @@ function CompareBar({ selected, onClear }: { selected: string[]; onClear: () => 
   return (
     <View style={styles.compareBar} testID="compare-bar">
       <AppText variant="label">{n === 0 ? `Tick up to ${maxCompared} finished runs to compare them side by side.` : `${n} selected`}</AppText>
-      {n >= 2 ? <LinkButton label={`Compare ${n} runs`} href={`/runs/compare?ids=${selected.join(',')}`} testID="compare-link" /> : null}
+      {n >= 2 ? <LinkButton label={`Compare ${n} runs`} href={compareHref(selected, [])} testID="compare-link" /> : null}
       {n > 0 ? <Chip label="Clear" selected={false} onPress={onClear} /> : null}
     </View>
   );
@@ -47,7 +47,11 @@ export function RunsScreen() {
   const shown = (runs ?? []).filter(keep(filter));
   const anyActive = (runs ?? []).some((r) => !isFinished(r.state));
   return (
-    <ScreenFrame title="Runs" subtitle="Optimisation runs of your team, newest first" refreshing={query.isRefetching} onRefresh={() => void query.refetch()}>
+    <ScreenFrame
+      title="Runs"
+      subtitle="Optimisation runs of your team, newest first"
+      accessory={<LinkButton variant="quiet" label="Modules" href="/modules" testID="modules-link" />}
+      refreshing={query.isRefetching} onRefresh={() => void query.refetch()}>
       <View style={styles.toolbar}>
         <View style={styles.filters} role="tablist" aria-label="Which runs">
           {filters.map((f) => (

@@ -1,0 +1,1 @@
+export { ModulesScreen as default } from '@/components/screens/modules/modules-screen';
