@@ -13,7 +13,7 @@ export function CurvePlots({ legs, deltaT }: { legs: LegCurve[]; deltaT: number 
         const info = curveQuantities[q];
         const series = curveSeries(q, legs);
         return (
-          <ChartCard key={q} title={`${info.title} versus current`} testID={`curve-plot-${q}`}>
+          <ChartCard inGrid key={q} title={`${info.title} versus current`} testID={`curve-plot-${q}`}>
             <SeriesPlot
               series={series}
               xLabel={currentAxis}

@@ -40,6 +40,16 @@ describe('MarkedCurrentsTable', () => {
     renderWithProviders(<MarkedCurrentsTable rows={[{ key: 'uniform', label: 'Best uniform', maxHeatLoad: point(3, false), maxCop: null }]} />);
     expect(within(screen.getByTestId('marked-currents-uniform-cop')).getByText('none at ΔT = 0 K')).toBeOnTheScreen();
   });
+
+  it('leaves the device column out for a single device named around the table', () => {
+    renderWithProviders(
+      <MarkedCurrentsTable rows={[{ key: 'module', label: 'Module', maxHeatLoad: point(3, false), maxCop: point(1.2, false) }]} deviceHead={null} testID="module-marked" />,
+    );
+    expect(screen.queryByText('Leg')).toBeNull();
+    expect(screen.queryByText('Module')).toBeNull();
+    expect(within(screen.getByTestId('module-marked-module-qc')).getByText('Maximum Qc')).toBeOnTheScreen();
+    expect(within(screen.getByTestId('module-marked-module-cop')).getByText('1.2')).toBeOnTheScreen();
+  });
 });
 
 describe('CurvesBody', () => {

@@ -2,6 +2,7 @@ import { ScrollView, StyleSheet, View } from 'react-native';
 import type { OperatingPoint } from '@/shared/engine';
 import { formatNumber } from '@/components/format/number';
 import { colors, spacing } from '@/components/theme';
+import { useIsWide } from '@/components/shell/use-is-wide';
 import { AppText } from '@/components/ui/text';
 
 /** One row: a device (leg or module) and its two marked currents. */
@@ -28,14 +29,29 @@ function cells(p: OperatingPoint): string[] {
   return [limitWords(p), formatNumber(p.heatLoad, 4), cop(p), formatNumber(p.voltage, 4), formatNumber(p.power, 4)];
 }
 
-/** The currents of maximum Qc and of maximum COP with the device there, in A, W and V. */
-export function MarkedCurrentsTable({ rows, testID = 'marked-currents' }: { rows: MarkedRow[]; testID?: string }) {
+type TableProps = {
+  rows: MarkedRow[];
+  testID?: string;
+  /** Head of the first column ("Leg"); null leaves the column out (one device, named around the table). */
+  deviceHead?: string | null;
+};
+
+/**
+ * The currents of maximum Qc and of maximum COP with the device there, in A,
+ * W and V. Narrow windows get narrower columns, so the next column peeks in
+ * and says the table scrolls sideways.
+ */
+export function MarkedCurrentsTable({ rows, testID = 'marked-currents', deviceHead = 'Leg' }: TableProps) {
+  const wide = useIsWide();
+  const labelStyle = wide ? styles.wide : styles.wideNarrow;
+  const cellStyle = wide ? styles.cell : styles.cellNarrow;
+  const shown = deviceHead === null ? columns.filter((c) => c.key !== 'device') : columns.map((c) => (c.key === 'device' ? { ...c, head: deviceHead } : c));
   return (
     <ScrollView horizontal>
       <View role="table" aria-label="Marked currents" testID={testID}>
         <View role="row" style={[styles.row, styles.headRow]}>
-          {columns.map((c) => (
-            <View key={c.key} role="columnheader" style={c.key === 'device' || c.key === 'mark' ? styles.wide : styles.cell}>
+          {shown.map((c) => (
+            <View key={c.key} role="columnheader" style={c.key === 'device' || c.key === 'mark' ? labelStyle : cellStyle}>
               <AppText variant="label">{c.head}</AppText>
               <AppText variant="caption" tone="muted">
                 {c.unit || ' '}
@@ -50,14 +66,16 @@ export function MarkedCurrentsTable({ rows, testID = 'marked-currents' }: { rows
           ];
           return marks.map(([k, name, p]) => (
             <View key={`${r.key}-${k}`} role="row" style={styles.row} testID={`${testID}-${r.key}-${k}`}>
-              <AppText role="cell" style={styles.wide}>
-                {r.label}
-              </AppText>
-              <AppText role="cell" style={styles.wide}>
+              {deviceHead === null ? null : (
+                <AppText role="cell" style={labelStyle}>
+                  {r.label}
+                </AppText>
+              )}
+              <AppText role="cell" style={labelStyle}>
                 {name}
               </AppText>
               {(p ? cells(p) : ['none at ΔT = 0 K', '', '', '', '']).map((text, i) => (
-                <AppText key={i} role="cell" variant="mono" style={styles.cell}>
+                <AppText key={i} role="cell" variant="mono" style={cellStyle}>
                   {text}
                 </AppText>
               ))}
@@ -74,4 +92,6 @@ const styles = StyleSheet.create({
   headRow: { borderTopWidth: 0 },
   cell: { width: 104, paddingVertical: spacing.xs, paddingRight: spacing.sm },
   wide: { width: 132, paddingVertical: spacing.xs, paddingRight: spacing.sm },
+  cellNarrow: { width: 84, paddingVertical: spacing.xs, paddingRight: spacing.sm },
+  wideNarrow: { width: 112, paddingVertical: spacing.xs, paddingRight: spacing.sm },
 });

@@ -30,6 +30,8 @@ export function ModuleFields({ value, onChange, errors }: { value: ModuleText; o
 }
 
 const styles = StyleSheet.create({
-  grid: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
-  field: { flexGrow: 1, flexBasis: 200 },
+  // Inputs line up along each row even where a label wraps or a field has a help line.
+  grid: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-end', gap: spacing.md },
+  // Room for the input's own minimum width and a unit as long as "couples" or "Ω·m²" beside it.
+  field: { flexGrow: 1, flexBasis: 280 },
 });

@@ -48,7 +48,7 @@ export function ModuleResults({ moduleCase }: { moduleCase: Record<string, unkno
     <View style={styles.wrap} testID="module-results">
       <CautionNotice testID="module-caution" />
       <Section title="Marked currents" hint={`${r.module.couples} couples at ΔT = ${formatNumber(c.deltaT, 4)} K, pumping from ${formatNumber(c.pumpingRange[0], 4)} A to ${formatNumber(c.pumpingRange[1], 4)} A.`}>
-        <MarkedCurrentsTable rows={[{ key: 'module', label: 'Module', maxHeatLoad: c.maxHeatLoad, maxCop: c.maxCop }]} testID="module-marked" />
+        <MarkedCurrentsTable rows={[{ key: 'module', label: 'Module', maxHeatLoad: c.maxHeatLoad, maxCop: c.maxCop }]} testID="module-marked" deviceHead={null} />
         {over ? (
           <Notice tone="warning" title="Over the current limit" testID="module-over-limit">
             <AppText>{over}</AppText>
@@ -57,7 +57,7 @@ export function ModuleResults({ moduleCase }: { moduleCase: Record<string, unkno
       </Section>
       <View style={styles.grid}>
         {modulePlots(r).map((p) => (
-          <ChartCard key={p.key} title={p.title} testID={`module-plot-${p.key}`}>
+          <ChartCard inGrid key={p.key} title={p.title} testID={`module-plot-${p.key}`}>
             <SeriesPlot series={p.series} xLabel={p.xLabel} yLabel={p.yLabel} description={`${p.title}: ${p.series.map((s) => s.label).join(', ')}`} note={p.note} />
           </ChartCard>
         ))}

@@ -46,7 +46,7 @@ export function modulePlots(r: ModuleResult): ModulePlotSpec[] {
       title: 'Voltage against current as N changes',
       xLabel: 'Current at maximum Qc (A)',
       yLabel: 'Voltage at maximum Qc (V)',
-      series: [{ key: 'trade', label: 'Same total leg area, N couples', mark: chartMarks[1], line: trade, points: trade }],
+      series: [{ key: 'trade', label: 'N couples, same total area', mark: chartMarks[1], line: trade, points: trade }],
       note: 'One marker per couple count N (see the table).',
     },
   ];
