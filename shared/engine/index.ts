@@ -25,8 +25,8 @@ export { parseCase, familyFromMaterial, fieldPath, DEFAULT_CONTROL_POINTS, MIN_P
 export type { CheckedCase, CheckedLeg, Mode } from './check-case';
 export { caseSchema, materialSchema, segmentSchema, tableRowSchema, dopingSchema } from './case-schema';
 export type { CaseInput, MaterialInput } from './case-schema';
-export { solveLeg, optimizeLeg } from './run-case';
-export type { CaseSolution, OptimizeResult, OptimizeOptions, OptimizeProgress, OptimizerState, BaselineReport, SegmentBaselineReport } from './run-case';
+export { solveLeg, optimizeLeg, dopingBaselines } from './run-case';
+export type { CaseSolution, OptimizeResult, OptimizeOptions, OptimizeProgress, OptimizerState, BaselineReport, SegmentBaselineReport, DopingBaselines } from './run-case';
 export type { LegProfile, SolveOptions } from './solve-leg';
 export type { NodeSensitivity } from './sensitivity';
 export type { Objective } from './evaluate-design';

@@ -16,7 +16,7 @@ import { minimizeBox } from './box-bfgs';
 import { implicitGradient, newWarmStart, referenceCurrent, scoreDesign, type DesignPoint, type DesignScore } from './evaluate-design';
 import { currentIsFree, legFor, nodeFractions, type Counter, type DopingProblem } from './doping-problem';
 import { profileAt } from './leg-profile';
-import type { LocalZtBaseline, UniformBaseline } from './baselines';
+import { scoreWithBestCurrent, type LocalZtBaseline, type UniformBaseline } from './baselines';
 
 export type Progress = {
   /** Iterations so far over all starts. */
@@ -106,6 +106,12 @@ export type DopingRunOptions = {
   onProgress?: (p: Progress) => void;
   shouldStop?: () => boolean;
   start?: DopingState;
+  /**
+   * Search from `start` alone, not also from the two baselines. A multi-start
+   * search sets this after its first start: the local search from a baseline
+   * is deterministic, so repeating it at every start only repeats work.
+   */
+  startOnly?: boolean;
 };
 
 export function optimizeDoping(problem: DopingProblem, uniform: UniformBaseline, localZt: LocalZtBaseline, counter: Counter, options: DopingRunOptions = {}): DopingOptimum {
@@ -127,7 +133,8 @@ export function optimizeDoping(problem: DopingProblem, uniform: UniformBaseline,
     { log10: x.map(() => uniform.log10), current: uniform.score.current },
     { log10: x.map((f) => profileAt(localZt.x, localZt.log10, f)), current: localZt.score.current },
   ];
-  if (options.start) starts.unshift(options.start);
+  if (options.start && options.startOnly) starts.splice(0, starts.length, options.start);
+  else if (options.start) starts.unshift(options.start);
 
   const parametrisations = problem.monotone ? [monotoneParametrisation(n, lo, hi, true), monotoneParametrisation(n, lo, hi, false)] : [freeParametrisation(n, lo, hi)];
   for (const p of parametrisations) {
@@ -170,6 +177,16 @@ export function optimizeDoping(problem: DopingProblem, uniform: UniformBaseline,
         );
         return g?.map((d) => -d / scale);
       };
+      // A search's random start comes with somebody else's current: at it the
+      // profile may have no steady state or a cold end hotter than the hot
+      // one, where the search crawls through slow, failing solves. Give the
+      // start its own best current first (a 1-D search), or skip it.
+      if (freeCurrent && options.startOnly) {
+        const own = scoreWithBestCurrent(problem, legFor(problem, x, p.toProfile(v0.slice(0, n))), counter, warm);
+        consider(p.toProfile(v0.slice(0, n)), own);
+        if (!own.feasible) continue;
+        v0[n] = Math.min(upper[n], Math.max(lower[n], own.current / reference));
+      }
       const result = minimizeBox(f, v0, {
         lower,
         upper,

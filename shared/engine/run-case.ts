@@ -49,7 +49,17 @@ export type OptimizeOptions = {
    * @default performance.now (Date.now where absent)
    */
   now?: () => number;
+  /**
+   * The baselines of this same case from `dopingBaselines`, so a multi-start
+   * search computes them once instead of at every start.
+   */
+  baselines?: DopingBaselines | null;
+  /** With `start`: search from it alone, not also from the baselines (later starts of a multi-start search). */
+  startOnly?: boolean;
 };
+
+/** The two baselines of a doping-controlled case, reusable across optimisations of that case. */
+export type DopingBaselines = { uniform: UniformBaseline; local: LocalZtBaseline; evaluations: number };
 
 export type BaselineReport = {
   uniform: { perCm3: number; current: number; deltaT: number; objective: number };
@@ -197,13 +207,11 @@ function optimizeSegmented(c: CheckedCase, options: OptimizeOptions, tolerance: 
   };
 }
 
-/** A doping-controlled family: baselines, the node profile (and current), sensitivity. */
-function optimizeDoped(c: CheckedCase, options: OptimizeOptions, tolerance: number): Omit<OptimizeResult, 'seconds'> {
-  if (c.leg.kind !== 'family') throw new Error('optimizeDoped needs a family leg');
+function dopingProblem(c: CheckedCase, tolerance: number): DopingProblem {
+  if (c.leg.kind !== 'family') throw new Error('a doping problem needs a family leg');
   const leg = c.leg;
   const bounds = leg.bounds as { lower: number; upper: number };
-  const clamp = (v: number) => Math.min(bounds.upper, Math.max(bounds.lower, v));
-  const problem: DopingProblem = {
+  return {
     family: leg.family,
     length: c.length,
     area: c.area,
@@ -216,6 +224,32 @@ function optimizeDoped(c: CheckedCase, options: OptimizeOptions, tolerance: numb
     tolerance,
     contactResistivity: c.contactResistivity,
   };
+}
+
+function baselinesOf(problem: DopingProblem, counter: Counter): DopingBaselines {
+  const before = counter.evaluations;
+  const uniform = bestUniform(problem, counter);
+  const local = localBestZt(problem, uniform, counter);
+  return { uniform, local, evaluations: counter.evaluations - before };
+}
+
+/**
+ * The best uniform leg and the local-best-zT leg of a doping-controlled case
+ * (null for segments or a constant material), to pass to `optimizeLeg` as
+ * `baselines` when the same case is optimised from many starts.
+ */
+export function dopingBaselines(c: CheckedCase, options: Pick<OptimizeOptions, 'tolerance'> = {}): DopingBaselines | null {
+  if (c.leg.kind !== 'family' || c.leg.material.kind === 'constant' || !c.leg.bounds) return null;
+  const { tolerance } = checkSolveOptions({ tolerance: options.tolerance });
+  return baselinesOf(dopingProblem(c, tolerance), { evaluations: 0 });
+}
+
+/** A doping-controlled family: baselines, the node profile (and current), sensitivity. */
+function optimizeDoped(c: CheckedCase, options: OptimizeOptions, tolerance: number): Omit<OptimizeResult, 'seconds'> {
+  if (c.leg.kind !== 'family') throw new Error('optimizeDoped needs a family leg');
+  const leg = c.leg;
+  const problem = dopingProblem(c, tolerance);
+  const clamp = (v: number) => Math.min(problem.upper, Math.max(problem.lower, v));
   const x = nodeFractions(problem);
   // Starting points besides the baselines: a checkpoint, else a doping given in the case.
   let start: { log10: number[]; current?: number } | undefined;
@@ -229,14 +263,14 @@ function optimizeDoped(c: CheckedCase, options: OptimizeOptions, tolerance: numb
   }
 
   const counter: Counter = { evaluations: 0 };
-  const uniform = bestUniform(problem, counter);
+  const { uniform, local } = options.baselines ?? baselinesOf(problem, counter);
   const flat = checkpoint(x.map(() => uniform.log10), uniform.score.current);
   options.onProgress?.({ phase: 'uniform', iteration: 0, objective: uniform.score.value, best: uniform.score.value, state: flat });
-  const local = localBestZt(problem, uniform, counter);
   options.onProgress?.({ phase: 'localBestZt', iteration: 0, objective: local.score.value, best: Math.max(local.score.value, uniform.score.value), state: flat });
 
   const opt = optimizeDoping(problem, uniform, local, counter, {
     start: start && { log10: start.log10, current: start.current ?? uniform.score.current },
+    startOnly: options.startOnly === true && start !== undefined,
     shouldStop: options.shouldStop,
     onProgress: (p) => options.onProgress?.({ phase: 'profile', iteration: p.iteration, objective: p.objective, best: p.best, state: checkpoint(p.state.log10, p.state.current) }),
   });

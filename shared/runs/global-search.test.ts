@@ -1,4 +1,4 @@
-import { parseCase } from '../engine';
+import { dopingBaselines, optimizeLeg, parseCase } from '../engine';
 import { globalSearch, type SearchCheckpoint } from './global-search';
 
 /** The benchmark family (p-type, m* = 1, μ300 = 350 cm²/(V·s), κL300 = 1 W/(m·K)); invented leg geometry. */
@@ -45,5 +45,26 @@ describe('globalSearch', () => {
     expect(seen.length).toBeGreaterThan(3);
     expect(Math.max(...seen)).toBeLessThanOrEqual(1);
     expect(seen[seen.length - 1]!).toBeGreaterThan(0.5);
+  });
+
+  it('computes the baselines once: reusing them changes nothing but the work done', () => {
+    const c = parseCase(caseJson, 'optimize');
+    const baselines = dopingBaselines(c);
+    if (!baselines) throw new Error('a band family has baselines');
+    const fresh = optimizeLeg(c);
+    const reused = optimizeLeg(c, { baselines });
+    expect(reused.objective.value).toBe(fresh.objective.value);
+    expect(reused.doping?.perCm3).toEqual(fresh.doping?.perCm3);
+    expect(reused.baselines).toEqual(fresh.baselines);
+    expect(fresh.evaluations - reused.evaluations).toBe(baselines.evaluations);
+  });
+
+  it('searches a later start from its own profile alone, never ending below the best uniform leg', () => {
+    const c = parseCase(caseJson, 'optimize');
+    const baselines = dopingBaselines(c);
+    const both = optimizeLeg(c, { baselines, start: { kind: 'doping', perCm3: [1e20, 1e20, 1e20, 1e20, 1e20, 1e20], current: 1 } });
+    const alone = optimizeLeg(c, { baselines, startOnly: true, start: { kind: 'doping', perCm3: [1e20, 1e20, 1e20, 1e20, 1e20, 1e20], current: 1 } });
+    expect(alone.evaluations).toBeLessThan(both.evaluations);
+    expect(alone.objective.value).toBeGreaterThanOrEqual(baselines!.uniform.score.value);
   });
 });

@@ -1,4 +1,4 @@
-import { optimizeLeg, type CheckedCase, type OptimizeResult, type OptimizerState } from '../engine';
+import { dopingBaselines, optimizeLeg, type CheckedCase, type OptimizeResult, type OptimizerState } from '../engine';
 import { mulberry32 } from '../random';
 
 /**
@@ -67,12 +67,18 @@ export function globalSearch(c: CheckedCase, o: SearchOptions): SearchResult {
   let evaluations = 0;
   let stopped = false;
   let k = o.resume?.nextStart ?? 0;
+  // The baselines do not depend on the start: compute them once for the whole search.
+  const baselines = starts > 1 || k > 0 ? dopingBaselines(c) : null;
+  if (baselines) evaluations += baselines.evaluations;
   for (; k < starts; k += 1) {
     if (o.shouldStop?.()) { stopped = true; break; }
     const start = k > 0 && best ? randomStart(c, generator(o.seed, k), best) : undefined;
     const current = best;
     const r = optimizeLeg(c, {
       start,
+      baselines,
+      // Start 0 also searches from both baselines; the later ones from their random profile alone.
+      startOnly: k > 0,
       shouldStop: o.shouldStop,
       onProgress: (p) => o.onProgress?.({
         start: k, starts, phase: p.phase, iteration: p.iteration, objective: p.objective,

@@ -28,6 +28,7 @@ import { join } from 'node:path';
 import { parseCurvesCase, parseModuleCase } from '../../shared/engine/device-case';
 import { coupleCurve, moduleCurve, moduleDeltaTCurve, moduleTrade, operatingCurve } from '../../shared/engine/module';
 import { runModule } from '../../shared/engine/run-device-case';
+import { globalSearch } from '../../shared/runs/global-search';
 
 type OdexModule = { Solver: new (n: number) => { absoluteTolerance: number; relativeTolerance: number; maxSteps: number; solve(f: (x: number, y: number[]) => number[], x0: number, y0: number[], x1: number): { y: number[] } } };
 // odex ships its TypeScript sources, which do not pass our strict type-check:
@@ -157,7 +158,25 @@ function main(): void {
   say(`  gain of grading over the best uniform leg: ${(runs[0].deltaT - b.uniform.deltaT).toFixed(3)} K`);
   say(`  optimum: current ${last?.current.toFixed(4)} A, doping ${(last?.doping?.perCm3 ?? []).map((v) => v.toExponential(2)).join(' ')} cm⁻³`);
 
+  multiStart(say, caseJson);
   curvesAndModules(say);
+}
+
+/** A run's multi-start search: the baselines once, then each start from its own random profile. */
+function multiStart(say: (s: string) => void, caseJson: Record<string, unknown>): void {
+  say('');
+  say('multi-start search as a run does it (11 nodes, seeds s1–s3)');
+  for (const starts of [4, 16]) {
+    const figures = ['s1', 's2', 's3'].map((seed) => {
+      const t = performance.now();
+      const r = globalSearch(parseCase(caseJson, 'optimize'), { starts, seed });
+      return { ms: performance.now() - t, evaluations: r.evaluations, deltaT: r.result.deltaT, bestStart: r.bestStart };
+    });
+    say(
+      `  ${String(starts).padStart(2)} starts: ${figures.map((f) => `${(f.ms / 1000).toFixed(2)} s`).join(', ')} (median ${(median(figures.map((f) => f.ms)) / 1000).toFixed(2)} s), ` +
+        `leg solves ${figures.map((f) => f.evaluations).join(', ')}, ΔT ${figures.map((f) => f.deltaT.toFixed(4)).join(', ')} K, best from start ${figures.map((f) => f.bestStart).join(', ')}`,
+    );
+  }
 }
 
 /** Median wall time, fastest run and median CPU time of fn over runs (after one warm-up). */
