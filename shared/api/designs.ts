@@ -32,7 +32,7 @@ export const designInputSchema = z.strictObject({
    * from a different profile, the best wins. More starts, more confidence
    * that the optimum is global, proportionally longer runs.
    */
-  starts: z.number({ error: 'starts must be a whole number' }).int({ error: 'starts must be a whole number' }).min(1, { error: 'starts must be at least 1' }).max(500, { error: 'starts must be at most 500' }).default(16),
+  starts: z.number({ error: 'starts must be a whole number' }).int({ error: 'starts must be a whole number' }).min(1, { error: 'starts must be at least 1' }).max(5000, { error: 'starts must be at most 5000' }).default(16),
   /** Shortest zone the grower can make, mm (used by the growth sheet's zoning). */
   minZoneMm: num('minZoneMm').min(0).max(100).default(0),
 }).refine((d) => d.maxPerCm3 > d.minPerCm3, { error: 'maxPerCm3 must be greater than minPerCm3', path: ['maxPerCm3'] })

@@ -62,9 +62,20 @@ describe('globalSearch', () => {
   it('searches a later start from its own profile alone, never ending below the best uniform leg', () => {
     const c = parseCase(caseJson, 'optimize');
     const baselines = dopingBaselines(c);
-    const both = optimizeLeg(c, { baselines, start: { kind: 'doping', perCm3: [1e20, 1e20, 1e20, 1e20, 1e20, 1e20], current: 1 } });
-    const alone = optimizeLeg(c, { baselines, startOnly: true, start: { kind: 'doping', perCm3: [1e20, 1e20, 1e20, 1e20, 1e20, 1e20], current: 1 } });
+    const start = { kind: 'doping' as const, perCm3: [1e20, 1e20, 1e20, 1e20, 1e20, 1e20], current: 1 };
+    const both = optimizeLeg(c, { baselines, start });
+    const alone = optimizeLeg(c, { baselines, startOnly: true, start });
     expect(alone.evaluations).toBeLessThan(both.evaluations);
     expect(alone.objective.value).toBeGreaterThanOrEqual(baselines!.uniform.score.value);
+  });
+
+  it('gives a random start its own current first, so one far beyond any steady state still converges', () => {
+    const c = parseCase(caseJson, 'optimize');
+    const baselines = dopingBaselines(c)!;
+    // 40 A is ten times this leg's best current (~4–6 A): Joule heat swamps the Peltier cooling there.
+    const r = optimizeLeg(c, { baselines, startOnly: true, start: { kind: 'doping', perCm3: [1e18, 1e18, 1e18, 1e18, 1e18, 1e18], current: 40 } });
+    expect(r.current).toBeLessThan(20);
+    expect(r.objective.value).toBeGreaterThanOrEqual(baselines.uniform.score.value);
+    expect(r.evaluations).toBeLessThan(1000);
   });
 });

@@ -76,11 +76,11 @@ async function main(): Promise<void> {
   await new Promise<void>((resolve, reject) => { socket.once('connect', () => resolve()); socket.once('connect_error', reject); });
   const lags: number[] = [];
   socket.on('run:progress', (p: RunProgress) => lags.push(Date.now() - Date.parse(p.at)));
-  const longRun = await launch(await design(40, 11));
+  const longRun = await launch(await design(400, 11));
   await new Promise((r) => socket.emit('watch', `run:${longRun}`, r));
   await waitAll([longRun]);
   socket.disconnect();
-  console.log(`progress worker → browser socket (${lags.length} events, one 40-start run): p50 ${ms(pct(lags, 50))}, p95 ${ms(pct(lags, 95))}`);
+  console.log(`progress worker → browser socket (${lags.length} events, one 400-start run): p50 ${ms(pct(lags, 50))}, p95 ${ms(pct(lags, 95))}`);
 
   // 3. Throughput with 1, then 2 workers: 12 runs of 2 starts × 6 nodes each.
   const batch = await design(2, 6);

@@ -87,7 +87,7 @@ it('launch → live progress on a socket → stored result equal to the engine\'
 
 it('cancel stops a running run within about a second and keeps the best so far', async () => {
   const api = await signedIn(ctx, demo.physicist);
-  const designId = await design(api, `Cancelled ${Date.now()}`, 400);
+  const designId = await design(api, `Cancelled ${Date.now()}`, 2000);
   const runId = (await api.post(`/api/designs/${designId}/runs`)).body.run.id as string;
   await eventually(async () => ((await api.get(`/api/runs/${runId}`)).body.progress ? true : undefined), 30);
   const t0 = Date.now();
@@ -102,7 +102,8 @@ it('cancel stops a running run within about a second and keeps the best so far',
 
 it('a worker killed with SIGKILL mid-run: another worker resumes from the checkpoint and finishes', async () => {
   const api = await signedIn(ctx, demo.physicist);
-  const designId = await design(api, `Killed ${Date.now()}`, 40);
+  // Starts take ~25 ms each on a quiet machine: enough of them that the run outlives its first checkpoints (every 2 s).
+  const designId = await design(api, `Killed ${Date.now()}`, 600);
   const watcher = await socketFor(demo.physicist);
   const runId = (await api.post(`/api/designs/${designId}/runs`)).body.run.id as string;
   await new Promise((r) => watcher.emit('watch', `run:${runId}`, r));

@@ -35,7 +35,7 @@ export const designFieldInfo: Record<DesignNumberKey | 'name' | 'notes' | 'famil
   starts: {
     label: 'Search starts',
     unit: 'starts',
-    help: 'Each start is a full local optimisation; the best wins. More starts, more confidence, longer runs (1–500).',
+    help: 'Each start is a full local optimisation; the best wins. More starts, more confidence, longer runs (1–5000; a start takes tens of milliseconds to seconds).',
     placeholder: '16',
   },
   minZoneMm: { label: 'Shortest zone', unit: 'mm', help: 'The shortest constant-doping zone the grower can make.', placeholder: '0' },
