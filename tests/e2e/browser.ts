@@ -82,46 +82,61 @@ export async function waitForVisibleText(page: Page, text: string, timeout = 30_
   });
 }
 
-/** Pixels of the plotted line's warm colour in an element, decoded by the browser. */
-export async function countWarmPixels(page: Page, element: Locator): Promise<number> {
+/**
+ * The chart colours a test looks for: `warm` (ember, a baseline or an
+ * over-limit marker) and `glacier` (the first series: a run's optimum, a
+ * comparison's first curve). Thresholds in RGB, wide enough for antialiasing.
+ */
+export type LineColour = 'warm' | 'glacier';
+
+/** Pixels of one chart colour in an element, decoded by the browser. */
+export async function countLinePixels(page: Page, element: Locator, colour: LineColour): Promise<number> {
   const png = (await element.screenshot()).toString('base64');
-  return page.evaluate(async (data) => {
-    const image = new Image();
-    image.src = `data:image/png;base64,${data}`;
-    await image.decode();
-    const canvas = document.createElement('canvas');
-    canvas.width = image.width;
-    canvas.height = image.height;
-    const context = canvas.getContext('2d');
-    if (!context) throw new Error('no 2d context');
-    context.drawImage(image, 0, 0);
-    const { data: rgba } = context.getImageData(0, 0, image.width, image.height);
-    let warm = 0;
-    for (let i = 0; i < rgba.length; i += 4) {
-      const [r, g, b] = [rgba[i], rgba[i + 1], rgba[i + 2]];
-      if (r > 150 && r - b > 90 && g < 140) warm += 1;
-    }
-    return warm;
-  }, png);
+  return page.evaluate(
+    async ({ data, colour }) => {
+      const image = new Image();
+      image.src = `data:image/png;base64,${data}`;
+      await image.decode();
+      const canvas = document.createElement('canvas');
+      canvas.width = image.width;
+      canvas.height = image.height;
+      const context = canvas.getContext('2d');
+      if (!context) throw new Error('no 2d context');
+      context.drawImage(image, 0, 0);
+      const { data: rgba } = context.getImageData(0, 0, image.width, image.height);
+      const matches =
+        colour === 'warm'
+          ? (r: number, g: number, b: number) => r > 150 && r - b > 90 && g < 140
+          : (r: number, g: number, b: number) => b > 90 && b - r > 60 && r < 90 && g < 130;
+      let count = 0;
+      for (let i = 0; i < rgba.length; i += 4) if (matches(rgba[i], rgba[i + 1], rgba[i + 2])) count += 1;
+      return count;
+    },
+    { data: png, colour },
+  );
 }
 
+/** Pixels of the plotted line's warm colour in an element. */
+export const countWarmPixels = (page: Page, element: Locator) => countLinePixels(page, element, 'warm');
+
 /**
- * Waits until a chart has drawn at least `minWarm` pixels of the warm series
- * colour on its canvas (or its error boundary speaks), and returns the count.
+ * Waits until a chart has drawn at least `minPixels` pixels of a series
+ * colour (warm unless told) on its canvas, or its error boundary speaks, and
+ * returns the count.
  */
-export async function waitForDrawnChart(page: Page, plot: Locator, minWarm: number, timeout = 60_000): Promise<number> {
+export async function waitForDrawnChart(page: Page, plot: Locator, minPixels: number, timeout = 60_000, colour: LineColour = 'warm'): Promise<number> {
   await plot.locator('canvas, [role="alert"]').first().waitFor({ state: 'visible', timeout });
   const failure = plot.getByRole('alert');
   if ((await failure.count()) > 0) throw new Error(`chart failed to load: ${await failure.innerText()}`);
   const canvas = plot.locator('canvas').first();
   await canvas.scrollIntoViewIfNeeded();
-  let warm = 0;
+  let count = 0;
   const deadline = Date.now() + timeout;
-  while (warm < minWarm && Date.now() < deadline) {
-    warm = await countWarmPixels(page, canvas);
-    if (warm < minWarm) await page.waitForTimeout(250);
+  while (count < minPixels && Date.now() < deadline) {
+    count = await countLinePixels(page, canvas, colour);
+    if (count < minPixels) await page.waitForTimeout(250);
   }
-  return warm;
+  return count;
 }
 
 /** Password of every demo account (README, "Demo accounts"). */

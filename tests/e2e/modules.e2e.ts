@@ -303,6 +303,54 @@ describe('a physicist opens a run’s curves, builds a module and exports its CS
     await page.close();
   });
 
+  it('finds the module in the Modules list and compares it with the run it was built from', async () => {
+    const page = await physicist.newPage('desktop');
+    await page.goto(`${baseUrl}/runs`);
+    await visible(page.getByTestId('modules-link')).click({ timeout: 60_000 });
+    await page.waitForURL(`${baseUrl}/modules`);
+    const row = visible(page.getByTestId(`module-row-${moduleId}`));
+    await row.waitFor({ timeout: 60_000 });
+    const rowText = (await row.innerText()).replace(/\s+/g, ' ');
+    expect(rowText).toContain(moduleName);
+    expect(rowText).toContain(`${couples} couples`);
+    expect(rowText).toContain(`Module browser leg ${stamp}, optimum leg of a run`);
+    expect(rowText).toMatch(/NL-N3 .* at 2 × 10¹⁹ cm⁻³/);
+    await saveScreenshot(page, 'module-flow-list-desktop');
+
+    await visible(page.getByTestId(`compare-module-${moduleId}`)).click();
+    await visible(page.getByTestId('module-compare-link')).click();
+    await page.waitForURL(new RegExp(`/runs/compare\\?modules=${moduleId}$`));
+    // One module alone is not a comparison: add the run it was built from.
+    await visible(page.getByTestId(`pick-run-${runId}`)).click({ timeout: 60_000 });
+    const modulesTable = visible(page.getByTestId('compare-modules-table'));
+    await modulesTable.waitFor({ timeout: 60_000 });
+    await visible(page.getByTestId('compare-table')).waitFor();
+    expect(page.url()).toContain(`ids=${runId}`);
+
+    // The comparison's module figures are the module page's (same engine, same saved case).
+    const cell = async (key: string) => (await visible(page.getByTestId(`compare-modules-table-row-${key}`)).locator('[role="cell"]').first().innerText()).trim();
+    expect(await cell('couples')).toBe(String(couples));
+    const maxQc = /^([\d.]+)\s?W at ([\d.]+)\s?A$/.exec(await cell('maxQc'));
+    expect(maxQc).not.toBeNull();
+    const { module } = moduleResponseSchema.parse(await getJsonAs(physicist, `/api/modules/${moduleId}`));
+    const curve = runModule(parseModuleCase(module.case)).versusCurrent;
+    expect(Math.abs(Number(maxQc![1]) - curve.maxHeatLoad.heatLoad)).toBeLessThanOrEqual(halfUlp(curve.maxHeatLoad.heatLoad, 4) * 1.01);
+    expect(Math.abs(Number(maxQc![2]) - curve.maxHeatLoad.current)).toBeLessThanOrEqual(halfUlp(curve.maxHeatLoad.current, 4) * 1.01);
+    expect(Number(/^([\d.]+)\sA/.exec(await cell('limit'))?.[1])).toBe(module.input.currentLimit);
+    // The module's curve is the comparison's first series: glacier blue.
+    expect(await waitForDrawnChart(page, visible(page.getByTestId('compare-module-heat-load')), 40, 60_000, 'glacier')).toBeGreaterThanOrEqual(40);
+    await saveScreenshot(page, 'module-flow-compare-desktop');
+    await page.close();
+
+    const phone = await physicist.newPage('phone');
+    await phone.goto(`${baseUrl}/runs/compare?ids=${runId}&modules=${moduleId}`);
+    await visible(phone.getByTestId('compare-modules-table')).waitFor({ timeout: 60_000 });
+    await saveScreenshot(phone, 'module-flow-compare-phone');
+    await visible(phone.getByTestId('compare-modules-table')).scrollIntoViewIfNeeded();
+    await saveScreenshot(phone, 'module-flow-compare-modules-phone');
+    await phone.close();
+  });
+
   it('raised no uncaught errors in the page', () => {
     expect(physicist.pageErrors).toEqual([]);
   });

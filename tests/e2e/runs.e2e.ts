@@ -7,12 +7,13 @@ import {
   openBrowser,
   saveScreenshot,
   signInAs,
+  waitForDrawnChart,
   waitForVisibleText,
   type BrowserSession,
   type ViewportName,
 } from './browser';
 
-// A loaded 2-core machine can take minutes for a 120-start run; a quiet one takes tens of seconds.
+// A loaded 2-core machine can take minutes for a 600-start run; a quiet one takes tens of seconds.
 jest.setTimeout(900_000);
 
 /** The demo p-type family (README, "Demo lab"). */
@@ -22,44 +23,8 @@ const starts = 600;
 
 const visible = (locator: Locator) => locator.filter({ visible: true }).first();
 
-/** Pixels of the optimum's line colour (glacier blue) in an element, decoded by the browser. */
-async function countBluePixels(page: Page, element: Locator): Promise<number> {
-  const png = (await element.screenshot()).toString('base64');
-  return page.evaluate(async (data) => {
-    const image = new Image();
-    image.src = `data:image/png;base64,${data}`;
-    await image.decode();
-    const canvas = document.createElement('canvas');
-    canvas.width = image.width;
-    canvas.height = image.height;
-    const context = canvas.getContext('2d');
-    if (!context) throw new Error('no 2d context');
-    context.drawImage(image, 0, 0);
-    const { data: rgba } = context.getImageData(0, 0, image.width, image.height);
-    let blue = 0;
-    for (let i = 0; i < rgba.length; i += 4) {
-      const [r, g, b] = [rgba[i], rgba[i + 1], rgba[i + 2]];
-      if (b > 90 && b - r > 60 && r < 90 && g < 130) blue += 1;
-    }
-    return blue;
-  }, png);
-}
-
-/** Waits until a chart card's canvas shows the optimum's line (or its error boundary speaks). */
-async function waitForDrawnLine(page: Page, card: Locator, minPixels = 60, timeout = 60_000): Promise<number> {
-  await card.locator('canvas, [role="alert"]').first().waitFor({ state: 'visible', timeout });
-  const failure = card.getByRole('alert');
-  if ((await failure.count()) > 0) throw new Error(`chart failed to load: ${await failure.innerText()}`);
-  const canvas = card.locator('canvas').first();
-  await canvas.scrollIntoViewIfNeeded();
-  let pixels = 0;
-  const deadline = Date.now() + timeout;
-  while (pixels < minPixels && Date.now() < deadline) {
-    pixels = await countBluePixels(page, canvas);
-    if (pixels < minPixels) await page.waitForTimeout(250);
-  }
-  return pixels;
-}
+/** Waits until a chart card's canvas shows the optimum's line, glacier blue (or its error boundary speaks). */
+const waitForDrawnLine = (page: Page, card: Locator, minPixels = 60, timeout = 60_000) => waitForDrawnChart(page, card, minPixels, timeout, 'glacier');
 
 async function progressValue(page: Page): Promise<number> {
   return Number(await visible(page.getByTestId('run-progress')).getAttribute('aria-valuenow'));
