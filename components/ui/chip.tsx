@@ -50,12 +50,15 @@ const styles = StyleSheet.create({
     borderWidth: 1,
     paddingLeft: spacing.sm,
     paddingRight: spacing.md,
+    paddingVertical: spacing.xxs,
     minHeight: 34,
+    // A long label wraps inside the pill instead of running out of its card.
+    maxWidth: '100%',
   },
   on: { backgroundColor: colors.primary, borderColor: colors.primary },
   off: { backgroundColor: colors.surface, borderColor: colors.border },
   pressed: { opacity: 0.85 },
   disabled: { opacity: 0.5 },
-  labelOn: { color: colors.onPrimary },
-  labelOff: { color: colors.text },
+  labelOn: { color: colors.onPrimary, flexShrink: 1 },
+  labelOff: { color: colors.text, flexShrink: 1 },
 });

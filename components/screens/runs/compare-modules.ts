@@ -53,7 +53,8 @@ export function moduleCompareRows(list: ComparedModule[], summaries: readonly Mo
     row('maxCop', 'Maximum COP', curve((c) => (c.maxCop?.cop == null ? 'none (ΔT = 0 K)' : at(formatNumber(c.maxCop.cop, 3), c.maxCop.current)))),
     row('qcAtMaxCop', 'Qc at maximum COP', curve((c) => (c.maxCop ? quantity(c.maxCop.heatLoad, 'W') : '–'))),
     row('limit', 'Current limit', curve(limit)),
-    row('problem', 'Curves', (m) => m.problem ?? 'computed in the browser'),
+    // Only when a module has no curves (its legs changed beyond what the engine accepts): say why.
+    ...(list.some((m) => m.problem) ? [row('problem', 'No curves because', (m) => m.problem ?? '–')] : []),
   ];
 }
 

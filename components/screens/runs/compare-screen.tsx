@@ -58,6 +58,8 @@ function ModulesComparison({ modules, summaries }: { modules: ModuleDesign[]; su
   );
 }
 
+const count = (n: number, noun: string) => `${n} ${noun}${n === 1 ? '' : 's'}`;
+
 /** Every query has answered, or one failed (shown instead). */
 function loaded<T>(queries: Array<{ data?: T; isError: boolean }>): T[] | null {
   const data = queries.flatMap((q) => (q.data ? [q.data] : []));
@@ -80,7 +82,7 @@ export function CompareScreen() {
   const summaries = moduleList.data?.modules ?? [];
   const setChosen = (next: { runIds: string[]; moduleIds: string[] }) => router.setParams({ ids: next.runIds.join(','), modules: next.moduleIds.join(',') });
   return (
-    <ScreenFrame title="Compare" subtitle={`${runIds.length} runs and ${moduleIds.length} modules side by side`} back={{ label: 'Runs', href: '/runs' }}>
+    <ScreenFrame title="Compare" subtitle={`${count(runIds.length, 'run')} and ${count(moduleIds.length, 'module')} side by side`} back={{ label: 'Runs', href: '/runs' }}>
       <ComparePicker runs={runList.data?.runs ?? []} modules={summaries} runIds={runIds} moduleIds={moduleIds} onChange={setChosen} />
       {total < 2 ? <EmptyState title="Pick at least two things" body="Tick finished runs or saved modules above, two or more in all." /> : null}
       {failed?.error ? <ErrorState title="Could not load a run or module" message={failed.error.message} onRetry={() => void failed.refetch()} /> : null}
