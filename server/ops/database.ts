@@ -15,7 +15,7 @@ export async function prepareDatabase(env: Env, opts: { fresh: boolean }): Promi
     const ran = await ds.runMigrations({ transaction: 'each' });
     log('db', ran.length ? `migrations applied: ${ran.map((m) => m.name).join(', ')}` : 'schema up to date');
     const added = await seedDemo(ds);
-    log('db', `demo data added: ${added.teams} teams, ${added.users} users, ${added.families} families`);
+    log('db', `demo data added: ${added.teams} teams, ${added.users} users, ${added.families} families, ${added.modules} modules`);
   } finally {
     await ds.destroy();
   }

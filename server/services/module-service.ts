@@ -85,14 +85,17 @@ export async function getModule(ds: DataSource, team: Team, id: unknown): Promis
   return toDto(await findModule(ds.manager, team, id));
 }
 
+/** Create (no id) or replace a module inside the caller's transaction; the engine checks the resolved case first. */
+export async function writeModule(m: EntityManager, team: Team, by: string, input: ModuleInput, id?: unknown): Promise<ModuleDto> {
+  const existing = id === undefined ? undefined : await findModule(m, team, id);
+  const resolvedCase = await resolveCase(m, team, input);
+  const repo = m.getRepository(ModuleDesign);
+  const row = existing ? Object.assign(existing, { name: input.name, input, resolvedCase }) : repo.create({ teamId: team.id, name: input.name, input, resolvedCase, createdBy: by });
+  return toDto(await repo.save(row));
+}
+
 export async function saveModule(ds: DataSource, team: Team, by: string, input: ModuleInput, id?: unknown): Promise<ModuleDto> {
-  return ds.transaction(async (m) => {
-    const existing = id === undefined ? undefined : await findModule(m, team, id);
-    const resolvedCase = await resolveCase(m, team, input);
-    const repo = m.getRepository(ModuleDesign);
-    const row = existing ? Object.assign(existing, { name: input.name, input, resolvedCase }) : repo.create({ teamId: team.id, name: input.name, input, resolvedCase, createdBy: by });
-    return toDto(await repo.save(row));
-  });
+  return ds.transaction((m) => writeModule(m, team, by, input, id));
 }
 
 const f = (v: number | null | undefined): string => (typeof v === 'number' && Number.isFinite(v) ? Number(v.toPrecision(6)).toString() : '');

@@ -39,3 +39,18 @@ it('saves a module from a run and a family, resolves it to an engine case, and e
   expect(wrongLeg.body.errors[0].field).toBe('p.runId');
   expect((await (await signedIn(ctx, demo.otherTeamAdmin)).get(`/api/modules/${m.id}`)).status).toBe(404);
 });
+
+it('seeds a demo module from the two demo band models that the engine can compute', async () => {
+  const api = await signedIn(ctx, demo.viewer);
+  const { modules } = modulesResponseSchema.parse((await api.get('/api/modules')).body);
+  const seeded = modules.find((m) => m.name === 'Demo: detector stage, 31 uniform couples');
+  expect(seeded?.sourceNames).toEqual({ p: expect.stringMatching(/^NL-P7 /), n: expect.stringMatching(/^NL-N3 /) });
+  const { module } = moduleResponseSchema.parse((await api.get(`/api/modules/${seeded!.id}`)).body);
+  const curve = runModule(parseModuleCase(module.case)).versusCurrent;
+  // Max COP comes at a lower current than max Qc (A. F. Ioffe, Semiconductor Thermoelements, 1957).
+  expect(curve.maxCop!.current).toBeLessThan(curve.maxHeatLoad.current);
+  expect(curve.maxHeatLoad.heatLoad).toBeGreaterThan(0);
+  // The other team does not see it.
+  const other = modulesResponseSchema.parse((await (await signedIn(ctx, demo.otherTeamAdmin)).get('/api/modules')).body);
+  expect(other.modules.map((m) => m.id)).not.toContain(seeded!.id);
+});

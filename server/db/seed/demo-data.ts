@@ -61,6 +61,26 @@ export function demoFamilies(): DemoFamily[] {
   return [...modelFamilies, measuredDemo()];
 }
 
+/**
+ * A demo module of the detector project, so the Modules page and the
+ * comparison have something to show before anyone builds one: both demo band
+ * models at uniform doping (p near its best uniform doping for ΔT, from the
+ * engine benchmark; n at 2e19 cm⁻³), 31 couples of 1.5 mm × 1 mm² legs, a
+ * contact resistivity of 5e-10 Ω·m² per junction (an invented, typical-looking
+ * value) and a 5 A bench supply limit. Invented settings, not a product.
+ */
+export const demoModule = {
+  name: 'Demo: detector stage, 31 uniform couples',
+  notes: 'Demo data: both legs at uniform doping, for comparing with couples built from graded runs.',
+  pFamily: { name: modelFamilies[0]!.name, perCm3: 1.3e19, lengthMm: 1.5, areaMm2: 1 },
+  nFamily: { name: modelFamilies[1]!.name, perCm3: 2e19, lengthMm: 1.5, areaMm2: 1 },
+  hotSide: 300,
+  deltaT: 30,
+  couples: 31,
+  contactResistivity: 5e-10,
+  currentLimit: 5,
+};
+
 /** Demo accounts, one per role in the demo lab and one in the second team; all share one password. */
 export const demoPassword = 'graded-legs-demo';
 export const demoUsers = [

@@ -2,10 +2,11 @@ import { randomBytes } from 'node:crypto';
 import type { DataSource } from 'typeorm';
 import { hashPassword } from '../../auth/passwords';
 import { insertFamily } from '../../services/family-service';
-import { AppUser, MaterialFamily, Team } from '../entities';
-import { demoFamilies, demoPassword, demoTeam, demoUsers, otherTeam } from './demo-data';
+import { writeModule } from '../../services/module-service';
+import { AppUser, MaterialFamily, ModuleDesign, Team } from '../entities';
+import { demoFamilies, demoModule, demoPassword, demoTeam, demoUsers, otherTeam } from './demo-data';
 
-export type SeedCounts = { teams: number; users: number; families: number };
+export type SeedCounts = { teams: number; users: number; families: number; modules: number };
 
 /** Insert the demo lab if it is missing; running it twice changes nothing. */
 export async function seedDemo(ds: DataSource): Promise<SeedCounts> {
@@ -14,7 +15,7 @@ export async function seedDemo(ds: DataSource): Promise<SeedCounts> {
     const teams = m.getRepository(Team);
     const users = m.getRepository(AppUser);
     const families = m.getRepository(MaterialFamily);
-    const added: SeedCounts = { teams: 0, users: 0, families: 0 };
+    const added: SeedCounts = { teams: 0, users: 0, families: 0, modules: 0 };
     const bySlug = new Map<string, Team>();
     for (const t of [demoTeam, otherTeam]) {
       let team = await teams.findOneBy({ slug: t.slug });
@@ -34,6 +35,17 @@ export async function seedDemo(ds: DataSource): Promise<SeedCounts> {
       if (await families.existsBy({ teamId: lab.id, name: f.name })) continue;
       await insertFamily(m, lab, { ...f, isDemo: true }, 'demo seed');
       added.families += 1;
+    }
+    const module = demoModule;
+    if (!(await m.getRepository(ModuleDesign).existsBy({ teamId: lab.id, name: module.name }))) {
+      const byName = async (name: string) => (await families.findOneByOrFail({ teamId: lab.id, name })).id;
+      const { pFamily, nFamily, ...settings } = module;
+      await writeModule(m, lab, 'demo seed', {
+        ...settings,
+        p: { kind: 'family', familyId: await byName(pFamily.name), perCm3: pFamily.perCm3, lengthMm: pFamily.lengthMm, areaMm2: pFamily.areaMm2 },
+        n: { kind: 'family', familyId: await byName(nFamily.name), perCm3: nFamily.perCm3, lengthMm: nFamily.lengthMm, areaMm2: nFamily.areaMm2 },
+      });
+      added.modules += 1;
     }
     return added;
   });
