@@ -51,7 +51,9 @@ export function SeriesLegend({ series, note }: SeriesLegendProps) {
           <View key={s.key} style={styles.item} role="listitem">
             {s.line.length > 0 ? <LineSample dash={s.mark.dash} color={s.mark.color} /> : null}
             {s.points && s.points.length > 0 ? <Marker shape={s.mark.marker} color={s.mark.color} /> : null}
-            <AppText variant="label">{s.label}</AppText>
+            <AppText variant="label" style={styles.label}>
+              {s.label}
+            </AppText>
             <AppText variant="caption" tone="faint">
               {describeMark(s)}
             </AppText>
@@ -75,7 +77,9 @@ const styles = StyleSheet.create({
     borderTopColor: colors.border,
   },
   items: { flexDirection: 'row', flexWrap: 'wrap', columnGap: spacing.lg, rowGap: spacing.xs },
-  item: { flexDirection: 'row', alignItems: 'center', gap: spacing.xs },
+  // A long label wraps within the card rather than running past its edge.
+  item: { flexDirection: 'row', alignItems: 'center', gap: spacing.xs, maxWidth: '100%' },
+  label: { flexShrink: 1 },
   sample: { width: 28, height: 3, flexDirection: 'row', justifyContent: 'space-between' },
   piece: { height: 3, borderRadius: 1 },
   marker: { width: 8, height: 8, borderRadius: 1 },
