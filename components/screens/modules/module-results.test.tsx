@@ -1,4 +1,6 @@
 import { screen, within } from '@testing-library/react-native';
+import { parseModuleCase, runModule } from '@/shared/engine';
+import { formatNumber } from '@/components/format/number';
 import { renderWithProviders } from '@/components/test-utils';
 import { moduleCase } from './module-fixtures';
 import { ModuleResults } from './module-results';
@@ -22,5 +24,15 @@ describe('ModuleResults', () => {
   it('says why when the module has no curves', () => {
     renderWithProviders(<ModuleResults moduleCase={moduleCase({ deltaT: 400 })} />);
     expect(screen.getByTestId('module-problem')).toBeOnTheScreen();
+  });
+
+  it('plots Qc, COP, voltage and current versus ΔT and states the module’s ΔTmax from the engine', () => {
+    const moduleCaseJson = moduleCase({});
+    renderWithProviders(<ModuleResults moduleCase={moduleCaseJson} />);
+    for (const key of ['deltaT', 'deltaT-cop', 'deltaT-voltage', 'deltaT-current']) expect(screen.getByTestId(`module-plot-${key}`)).toBeOnTheScreen();
+    const end = runModule(parseModuleCase(moduleCaseJson)).versusDeltaT.deltaTMax;
+    expect(screen.getByText(new RegExp(`ΔTmax = ${formatNumber(end.hotSide - end.coldSide, 4)} K at ${formatNumber(end.current, 4)} A`))).toBeOnTheScreen();
+    // ΔTmax of a couple exceeds the ΔT its curves versus current were drawn at (20 K here).
+    expect(end.hotSide - end.coldSide).toBeGreaterThan(20);
   });
 });

@@ -7,10 +7,11 @@ import { spacing } from '@/components/theme';
 import { CautionNotice } from '@/components/screens/runs/caution-notice';
 import { ChartCard } from '@/components/screens/runs/chart-card';
 import { MarkedCurrentsTable } from '@/components/screens/curves/marked-currents-table';
+import { BlockHeading } from '@/components/ui/block-heading';
 import { Section } from '@/components/ui/form-section';
 import { Notice } from '@/components/ui/notice';
 import { AppText } from '@/components/ui/text';
-import { modulePlots } from './module-series';
+import { modulePlots, type ModulePlotSpec } from './module-series';
 import { TradeTable } from './trade-table';
 
 type Computed = { ok: true; result: ModuleResult } | { ok: false; message: string };
@@ -32,6 +33,18 @@ export function overLimitWords(r: ModuleResult): string | null {
   return `${over} of ${c.currents.length} sampled currents are over the ${formatNumber(c.currentLimit, 3)} A limit (from ${formatNumber(c.currents[c.overLimit.indexOf(true)], 4)} A).`;
 }
 
+function PlotGrid({ plots }: { plots: ModulePlotSpec[] }) {
+  return (
+    <View style={styles.grid}>
+      {plots.map((p) => (
+        <ChartCard inGrid key={p.key} title={p.title} testID={`module-plot-${p.key}`}>
+          <SeriesPlot series={p.series} xLabel={p.xLabel} yLabel={p.yLabel} description={`${p.title}: ${p.series.map((s) => s.label).join(', ')}`} note={p.note} />
+        </ChartCard>
+      ))}
+    </View>
+  );
+}
+
 export function ModuleResults({ moduleCase }: { moduleCase: Record<string, unknown> }) {
   const computed = useMemo(() => computeModule(moduleCase), [moduleCase]);
   if (!computed.ok) {
@@ -44,6 +57,7 @@ export function ModuleResults({ moduleCase }: { moduleCase: Record<string, unkno
   const r = computed.result;
   const c = r.versusCurrent;
   const over = overLimitWords(r);
+  const plots = modulePlots(r);
   return (
     <View style={styles.wrap} testID="module-results">
       <CautionNotice testID="module-caution" />
@@ -55,16 +69,17 @@ export function ModuleResults({ moduleCase }: { moduleCase: Record<string, unkno
           </Notice>
         ) : null}
       </Section>
-      <View style={styles.grid}>
-        {modulePlots(r).map((p) => (
-          <ChartCard inGrid key={p.key} title={p.title} testID={`module-plot-${p.key}`}>
-            <SeriesPlot series={p.series} xLabel={p.xLabel} yLabel={p.yLabel} description={`${p.title}: ${p.series.map((s) => s.label).join(', ')}`} note={p.note} />
-          </ChartCard>
-        ))}
-      </View>
+      <BlockHeading title="Versus current" hint={`At ΔT = ${formatNumber(c.deltaT, 4)} K and Th = ${formatNumber(c.hotSide, 4)} K.`} />
+      <PlotGrid plots={plots.filter((p) => p.group === 'current')} />
+      <BlockHeading
+        title="Versus ΔT"
+        hint={`Each ΔT at its own current of maximum Qc; the module reaches ΔTmax = ${formatNumber(r.versusDeltaT.deltaTMax.hotSide - r.versusDeltaT.deltaTMax.coldSide, 4)} K at ${formatNumber(r.versusDeltaT.deltaTMax.current, 4)} A.`}
+      />
+      <PlotGrid plots={plots.filter((p) => p.group === 'deltaT')} />
       <Section title="Couples at the same total leg area" hint={`Total leg area ${formatNumber(r.module.totalLegArea * 1e6, 4)} mm²: more couples, higher voltage and lower current.`}>
         <TradeTable trade={r.trade} />
       </Section>
+      <PlotGrid plots={plots.filter((p) => p.group === 'trade')} />
     </View>
   );
 }

@@ -6,7 +6,8 @@ type Curve = { x: number[]; y: (number | null)[] };
 
 const line = ({ x, y }: Curve) => x.flatMap((xi, i) => (y[i] !== null && Number.isFinite(y[i]) ? [{ x: xi, y: y[i] as number }] : []));
 
-export type ModulePlotSpec = { key: string; title: string; xLabel: string; yLabel: string; series: PlotSeries[]; note?: string };
+export type ModulePlotGroup = 'current' | 'deltaT' | 'trade';
+export type ModulePlotSpec = { key: string; group: ModulePlotGroup; title: string; xLabel: string; yLabel: string; series: PlotSeries[]; note?: string };
 
 /** Within the limit solid, over it dashed with its own legend words: the flag reads without colour. */
 function splitByLimit(label: string, x: number[], y: (number | null)[], over: boolean[]): PlotSeries[] {
@@ -17,32 +18,42 @@ function splitByLimit(label: string, x: number[], y: (number | null)[], over: bo
   return out;
 }
 
-/** The module's plots: Qc, COP, V, P versus current; Qc versus ΔT; voltage against current as N changes. */
+/**
+ * The module's plots: Qc, COP, V, P versus current; Qc, COP, V and I versus
+ * ΔT (each ΔT at its current of maximum Qc); voltage against current as N changes.
+ */
 export function modulePlots(r: ModuleResult): ModulePlotSpec[] {
   const c = r.versusCurrent;
   const byCurrent = (key: string, title: string, yLabel: string, y: (number | null)[]): ModulePlotSpec => ({
     key,
+    group: 'current',
     title: `${title} versus current`,
     xLabel: 'Current I (A)',
     yLabel,
     series: splitByLimit(title, c.currents, y, c.overLimit),
   });
   const d = r.versusDeltaT;
+  const byDeltaT = (key: string, title: string, yLabel: string, y: (number | null)[]): ModulePlotSpec => ({
+    key,
+    group: 'deltaT',
+    title: `${title} versus ΔT`,
+    xLabel: 'ΔT (K)',
+    yLabel,
+    series: splitByLimit(`${title} at the current of maximum Qc`, d.deltaT, y, d.overLimit),
+  });
   const trade = r.trade.rows.map((row) => ({ x: row.maxHeatLoad.current, y: row.maxHeatLoad.voltage }));
   return [
     byCurrent('heatLoad', 'Heat load Qc', 'Qc (W)', c.heatLoad),
     byCurrent('cop', 'COP', 'COP (dimensionless)', c.cop),
     byCurrent('voltage', 'Voltage', 'V (V)', c.voltage),
     byCurrent('power', 'Input power', 'P (W)', c.power),
-    {
-      key: 'deltaT',
-      title: 'Heat load versus ΔT',
-      xLabel: 'ΔT (K)',
-      yLabel: 'Qc (W)',
-      series: [{ key: 'qc', label: 'Qc at the current of maximum Qc', mark: chartMarks[0], line: line({ x: d.deltaT, y: d.heatLoad }) }],
-    },
+    byDeltaT('deltaT', 'Heat load Qc', 'Qc (W)', d.heatLoad),
+    byDeltaT('deltaT-cop', 'COP', 'COP (dimensionless)', d.cop),
+    byDeltaT('deltaT-voltage', 'Voltage', 'V (V)', d.voltage),
+    byDeltaT('deltaT-current', 'Current', 'I (A)', d.currents),
     {
       key: 'trade',
+      group: 'trade',
       title: 'Voltage against current as N changes',
       xLabel: 'Current at maximum Qc (A)',
       yLabel: 'Voltage at maximum Qc (V)',
