@@ -1,5 +1,5 @@
 import { useMutation, useQueries, useQuery, useQueryClient } from '@tanstack/react-query';
-import { moduleResponseSchema, modulesResponseSchema, type ModuleInput } from '@/shared/api/modules';
+import { moduleResponseSchema, modulesResponseSchema, type ModuleCsvVersus, type ModuleInput } from '@/shared/api/modules';
 import { apiBaseUrl, apiGet, apiSend } from './client';
 
 export const modulesQueryKey = ['modules'] as const;
@@ -43,7 +43,7 @@ export function useSaveModule() {
   });
 }
 
-/** `GET /api/modules/:id/curves.csv`: the module's curves as CSV. */
-export function moduleCsvUrl(id: string): string {
-  return `${apiBaseUrl()}${modulePath(id)}/curves.csv`;
+/** `GET /api/modules/:id/curves.csv`: the module's curve versus current (or versus ΔT) as CSV. */
+export function moduleCsvUrl(id: string, versus: ModuleCsvVersus = 'current'): string {
+  return `${apiBaseUrl()}${modulePath(id)}/curves.csv${versus === 'current' ? '' : `?versus=${versus}`}`;
 }

@@ -1,7 +1,7 @@
-import { moduleInputSchema } from '../../shared/api';
+import { moduleCsvQuerySchema, moduleInputSchema } from '../../shared/api';
 import { actorName, designers, requireTeam } from '../http/access';
 import { route, type RouteSpec } from '../http/route-table';
-import { body } from '../http/validate';
+import { body, parseOrThrow } from '../http/validate';
 import { getModule, listModules, moduleCurvesCsv, saveModule } from '../services/module-service';
 import type { DataSource } from 'typeorm';
 import { runReaders } from './design-routes';
@@ -22,7 +22,8 @@ export function moduleRoutes(ds: DataSource): RouteSpec[] {
       res.json({ module: await saveModule(ds, requireTeam(req), actorName(req), res.locals.body, req.params.id) });
     }),
     route('get', '/modules/:id/curves.csv', runReaders, async (req, res) => {
-      const out = await moduleCurvesCsv(ds, requireTeam(req), req.params.id);
+      const { versus } = parseOrThrow(moduleCsvQuerySchema, req.query);
+      const out = await moduleCurvesCsv(ds, requireTeam(req), req.params.id, versus);
       res.type('text/csv').attachment(out.filename).send(out.body);
     }),
   ];

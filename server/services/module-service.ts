@@ -1,7 +1,7 @@
 import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { z } from 'zod';
-import type { LegSource, ModuleDesign as ModuleDto, ModuleSummary, moduleInputSchema } from '../../shared/api';
-import { CaseError, legsFromRun, parseModuleCase, runModule, type LegDefinitionInput, type RunResultLegs } from '../../shared/engine';
+import type { LegSource, ModuleCsvVersus, ModuleDesign as ModuleDto, ModuleSummary, moduleInputSchema } from '../../shared/api';
+import { CaseError, legsFromRun, moduleCurve, moduleDeltaTCurve, parseModuleCase, type LegDefinitionInput, type RunResultLegs } from '../../shared/engine';
 import { MaterialFamily, ModuleDesign, Run, Team } from '../db/entities';
 import { NotFoundError, ValidationError } from '../http/errors';
 import { isUuid } from '../http/validate';
@@ -100,14 +100,24 @@ export async function saveModule(ds: DataSource, team: Team, by: string, input: 
 
 const f = (v: number | null | undefined): string => (typeof v === 'number' && Number.isFinite(v) ? Number(v.toPrecision(6)).toString() : '');
 
-/** The module's curves versus current as CSV, computed now with the engine. */
-export async function moduleCurvesCsv(ds: DataSource, team: Team, id: unknown): Promise<{ filename: string; body: string }> {
+const csvRows = (curve: { currents: number[]; heatLoad: number[]; heatRejected: number[]; voltage: number[]; power: number[]; cop: (number | null)[]; overLimit: boolean[] }, first?: number[]) =>
+  curve.currents.map((i, k) => [...(first ? [f(first[k])] : []), f(i), f(curve.heatLoad[k]), f(curve.heatRejected[k]), f(curve.voltage[k]), f(curve.power[k]), f(curve.cop[k]), curve.overLimit[k] ? 'yes' : 'no'].join(','));
+
+/** The module's curve versus current (at its ΔT) or versus ΔT (each at its max-Qc current) as CSV, computed now with the engine. */
+export async function moduleCurvesCsv(ds: DataSource, team: Team, id: unknown, versus: ModuleCsvVersus = 'current'): Promise<{ filename: string; body: string }> {
   const row = await findModule(ds.manager, team, id);
-  const result = runModule(parseModuleCase(row.resolvedCase));
-  const curve = result.versusCurrent;
-  const head = 'current_A,heat_load_W,heat_rejected_W,voltage_V,power_W,cop,over_current_limit';
-  const lines = curve.currents.map((i, k) => [f(i), f(curve.heatLoad[k]), f(curve.heatRejected[k]), f(curve.voltage[k]), f(curve.power[k]), f(curve.cop[k]), curve.overLimit[k] ? 'yes' : 'no'].join(','));
+  const c = parseModuleCase(row.resolvedCase);
+  const columns = 'current_A,heat_load_W,heat_rejected_W,voltage_V,power_W,cop,over_current_limit';
+  const caution = `# Frostgrade module "${row.name}": ${c.module.couples ?? 1} couples; model prediction, verify by measurement; modules run at high currents and their hot side can burn`;
+  const slug = row.name.replace(/[^A-Za-z0-9._-]+/g, '-');
+  if (versus === 'deltaT') {
+    const d = moduleDeltaTCurve(c.module, { hotSide: c.conditions.hotSide }, c.deltaT);
+    const end = d.deltaTMax;
+    const lines = [caution, `# hot side ${f(d.hotSide)} K; each ΔT at its current of maximum heat load`, `# maximum ΔT ${f(end.hotSide - end.coldSide)} K at ${f(end.current)} A`, `delta_T_K,${columns}`, ...csvRows(d, d.deltaT)];
+    return { filename: `module-${slug}-versus-deltaT.csv`, body: `${lines.join('\n')}\n` };
+  }
+  const curve = moduleCurve(c.module, c.conditions, c.options);
   const marks = [`# maximum heat load ${f(curve.maxHeatLoad.heatLoad)} W at ${f(curve.maxHeatLoad.current)} A`, ...(curve.maxCop ? [`# maximum COP ${f(curve.maxCop.cop)} at ${f(curve.maxCop.current)} A`] : [])];
-  const comments = [`# Frostgrade module "${row.name}": ${result.module.couples} couples; model prediction, verify by measurement; modules run at high currents and their hot side can burn`];
-  return { filename: `module-${row.name.replace(/[^A-Za-z0-9._-]+/g, '-')}.csv`, body: `${[...comments, ...marks, head, ...lines].join('\n')}\n` };
+  const lines = [caution, `# ΔT ${f(curve.deltaT)} K, hot side ${f(curve.hotSide)} K`, ...marks, columns, ...csvRows(curve)];
+  return { filename: `module-${slug}.csv`, body: `${lines.join('\n')}\n` };
 }

@@ -53,6 +53,12 @@ export const moduleSummarySchema = moduleDesignSchema.omit({ case: true }).exten
 export const modulesResponseSchema = z.object({ modules: z.array(moduleSummarySchema) });
 export const moduleResponseSchema = z.object({ module: moduleDesignSchema });
 
+/** `GET /api/modules/:id/curves.csv?versus=current|deltaT`: which curve the file holds. */
+export const moduleCsvQuerySchema = z.object({
+  versus: z.enum(['current', 'deltaT'], { error: 'versus must be "current" or "deltaT"' }).default('current'),
+});
+export type ModuleCsvVersus = z.output<typeof moduleCsvQuerySchema>['versus'];
+
 export type LegSource = z.infer<typeof legSourceSchema>;
 export type ModuleInput = z.input<typeof moduleInputSchema>;
 export type ModuleDesign = z.infer<typeof moduleDesignSchema>;

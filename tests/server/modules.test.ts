@@ -54,3 +54,30 @@ it('seeds a demo module from the two demo band models that the engine can comput
   const other = modulesResponseSchema.parse((await (await signedIn(ctx, demo.otherTeamAdmin)).get('/api/modules')).body);
   expect(other.modules.map((m) => m.id)).not.toContain(seeded!.id);
 });
+
+it('exports the curve versus ΔT as CSV: ΔT rising to the module’s ΔTmax, Qc falling to zero there', async () => {
+  const api = await signedIn(ctx, demo.viewer);
+  const { modules } = modulesResponseSchema.parse((await api.get('/api/modules')).body);
+  const seeded = modules.find((m) => m.name === 'Demo: detector stage, 31 uniform couples')!;
+  const res = await api.get(`/api/modules/${seeded.id}/curves.csv?versus=deltaT`);
+  expect(res.status).toBe(200);
+  expect(res.headers['content-disposition']).toMatch(/versus-deltaT\.csv/);
+  const lines = res.text.trim().split('\n');
+  const head = lines.find((l) => !l.startsWith('#'))!;
+  expect(head.split(',')).toEqual(['delta_T_K', 'current_A', 'heat_load_W', 'heat_rejected_W', 'voltage_V', 'power_W', 'cop', 'over_current_limit']);
+  const rows = lines.slice(lines.indexOf(head) + 1).map((l) => l.split(','));
+  const deltaT = rows.map((r) => Number(r[0]));
+  const heat = rows.map((r) => Number(r[2]));
+  for (let k = 1; k < rows.length; k += 1) {
+    expect(deltaT[k]).toBeGreaterThan(deltaT[k - 1]!);
+    // At each ΔT's own max-Qc current, the largest heat load falls as ΔT rises (Ioffe, 1957).
+    expect(heat[k]).toBeLessThan(heat[k - 1]!);
+  }
+  const end = Number(/# maximum ΔT ([\d.e+-]+) K/.exec(res.text)![1]);
+  expect(deltaT[deltaT.length - 1]).toBeCloseTo(end, 3);
+  expect(Math.abs(heat[heat.length - 1]!)).toBeLessThan(1e-3 * heat[0]!);
+
+  const bad = await api.get(`/api/modules/${seeded.id}/curves.csv?versus=voltage`);
+  expect(bad.status).toBe(400);
+  expect(bad.body.errors[0]).toEqual({ field: 'versus', message: 'versus must be "current" or "deltaT"' });
+});

@@ -54,6 +54,7 @@ export function ModuleEditor({ initial, saved, onSaved }: Props) {
       <View style={styles.actions}>
         {writer ? <Button label={save.isPending ? 'Saving…' : saved ? 'Save changes' : 'Save module'} onPress={submit} disabled={save.isPending} /> : null}
         {saved ? <DownloadLink label="Export CSV" url={moduleCsvUrl(saved.id)} testID="module-csv" /> : null}
+        {saved ? <DownloadLink label="Export ΔT CSV" url={moduleCsvUrl(saved.id, 'deltaT')} testID="module-csv-delta-t" /> : null}
       </View>
       {saved ? (
         <ModuleResults moduleCase={saved.case} />
