@@ -8,7 +8,7 @@ import {
   type ReleaseRequest,
 } from '@/shared/api/growth';
 import { apiBaseUrl, apiGet, apiSend } from './client';
-import { measurementReportSchema } from './growth-schemas';
+import { measurementReportSchema } from '@/shared/api/growth-documents';
 import type { PickedFile } from './picked-file';
 import { appendFile } from './upload-form';
 

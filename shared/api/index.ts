@@ -9,3 +9,4 @@ export * from './designs';
 export * from './runs';
 export * from './growth';
 export * from './modules';
+export * from './growth-documents';

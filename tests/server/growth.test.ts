@@ -1,4 +1,4 @@
-import { growthOrderDetailSchema } from '../../shared/api';
+import { growthOrderDetailSchema, growthSheetSchema, measurementReportSchema } from '../../shared/api';
 import { familyFromMaterial, propertiesAt, type MaterialInput } from '../../shared/engine';
 import type { GrowthSheet } from '../../shared/growth/growth-sheet';
 import type { MeasurementReport } from '../../shared/growth/measurement-report';
@@ -41,6 +41,8 @@ it('release → sheet (K = 1 is the best uniform leg) → grower steps → measu
     const d = growthOrderDetailSchema.parse((await grower.get(`/api/growth-orders/${orderId}`)).body);
     return d.order.sheetStatus === 'ready' ? d : undefined;
   }, 90);
+  // The stored sheet is what the client's reader accepts (one schema for both sides).
+  expect(growthSheetSchema.safeParse(ready.sheet).success).toBe(true);
   const sheet = ready.sheet as unknown as GrowthSheet;
   expect(Math.abs(sheet.steps[0]!.deltaT - uniformDeltaT)).toBeLessThan(0.01);
   for (let k = 1; k < sheet.steps.length; k += 1) expect(sheet.steps[k]!.deltaT).toBeGreaterThanOrEqual(sheet.steps[k - 1]!.deltaT - 1e-9);
@@ -67,6 +69,7 @@ it('release → sheet (K = 1 is the best uniform leg) → grower steps → measu
   expect(bad.body.errors[0].field).toBe('file:line 2:seebeck_uV_per_K');
   const up = await grower.post(`/api/growth-orders/${orderId}/measurements`).attach('file', Buffer.from(lines.join('\n')), 'as-grown.csv');
   expect(up.status).toBe(201);
+  expect(measurementReportSchema.safeParse(up.body.report).success).toBe(true);
   const report = up.body.report as MeasurementReport;
   expect(report.verdicts.map((v) => v.verdict)).toEqual(['within', 'high', 'within']);
   expect(report.asGrown.atDesignCurrent.deltaT).toBeLessThan(report.target.deltaT);

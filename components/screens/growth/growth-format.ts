@@ -1,5 +1,5 @@
 import { formatNumber, formatScientific, withUnit } from '@/components/format/number';
-import type { SheetZone } from '@/components/api/growth-schemas';
+import type { SheetZone } from '@/shared/api/growth-documents';
 
 /** "0.875 mm": positions along the leg, from its cold end. */
 export const mm = (value: number) => withUnit(formatNumber(value, 3), 'mm');

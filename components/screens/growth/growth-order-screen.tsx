@@ -3,7 +3,7 @@ import { useLocalSearchParams } from 'expo-router';
 import type { GrowthOrderDetail } from '@/shared/api/growth';
 import { ApiError } from '@/components/api/client';
 import { useGrowthOrder } from '@/components/api/growth';
-import { readSheet } from '@/components/api/growth-schemas';
+import { readSheet } from '@/shared/api/growth-documents';
 import { useRole } from '@/components/auth/session';
 import { ScreenFrame } from '@/components/shell/screen-frame';
 import { Section } from '@/components/ui/form-section';

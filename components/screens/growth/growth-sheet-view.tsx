@@ -2,7 +2,7 @@ import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { GrowthOrderDto } from '@/shared/api/growth';
 import { growthSheetExportUrl } from '@/components/api/growth';
-import type { SheetStep, SheetView } from '@/components/api/growth-schemas';
+import type { SheetStep, SheetView } from '@/shared/api/growth-documents';
 import { formatDateTime, formatDay } from '@/components/format/date';
 import { colors, radii, spacing } from '@/components/theme';
 import { DownloadLink } from '@/components/ui/download-link';

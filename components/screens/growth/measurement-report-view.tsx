@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
 import { StyleSheet, View } from 'react-native';
-import type { ReportView, SheetZone } from '@/components/api/growth-schemas';
+import type { ReportView, SheetZone } from '@/shared/api/growth-documents';
 import { SeriesPlot } from '@/components/charts/series-plot';
 import { spacing } from '@/components/theme';
 import { Notice } from '@/components/ui/notice';

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { GrowthOrderDetail } from '@/shared/api/growth';
-import { readReport, type SheetView } from '@/components/api/growth-schemas';
+import { readReport, type SheetView } from '@/shared/api/growth-documents';
 import { useRole } from '@/components/auth/session';
 import { formatDateTime } from '@/components/format/date';
 import { spacing } from '@/components/theme';

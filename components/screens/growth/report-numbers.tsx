@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import type { ReportView } from '@/components/api/growth-schemas';
+import type { ReportView } from '@/shared/api/growth-documents';
 import { colors, radii, spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';
 import { ampere, kelvin, signedKelvin } from './growth-format';

@@ -1,4 +1,4 @@
-import type { ReportView, SheetZone } from '@/components/api/growth-schemas';
+import type { ReportView, SheetZone } from '@/shared/api/growth-documents';
 import type { PlotPoint } from '@/components/charts/line-plot-types';
 import type { PlotSeries } from '@/components/charts/series-plot-types';
 import { chartMarks } from '@/components/theme';

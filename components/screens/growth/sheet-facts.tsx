@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 import type { GrowthOrderDto } from '@/shared/api/growth';
-import type { SheetStep, SheetView } from '@/components/api/growth-schemas';
+import type { SheetStep, SheetView } from '@/shared/api/growth-documents';
 import { formatDay } from '@/components/format/date';
 import { colors, spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';

@@ -1,5 +1,5 @@
 import type { GrowthOrderDetail, GrowthOrderDto, GrowthState } from '@/shared/api/growth';
-import type { ReportView, SheetView, SheetZone } from '@/components/api/growth-schemas';
+import type { ReportView, SheetView, SheetZone } from '@/shared/api/growth-documents';
 
 /** Invented ids and numbers for component tests. */
 export const ids = {

@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import type { SheetView } from '@/components/api/growth-schemas';
+import type { SheetView } from '@/shared/api/growth-documents';
 import { formatNumber } from '@/components/format/number';
 import { colors, radii, spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';

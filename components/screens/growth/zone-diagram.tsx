@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import type { SheetZone } from '@/components/api/growth-schemas';
+import type { SheetZone } from '@/shared/api/growth-documents';
 import { formatNumber, formatScientific } from '@/components/format/number';
 import { colors, radii, spacing } from '@/components/theme';
 import { gradeColor } from '@/components/ui/graded-strip';

@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import type { SheetZone } from '@/components/api/growth-schemas';
+import type { SheetZone } from '@/shared/api/growth-documents';
 import { useIsWide } from '@/components/shell/use-is-wide';
 import { colors, radii, spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';

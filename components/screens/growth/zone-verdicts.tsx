@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import type { SheetZone, ZoneVerdictView } from '@/components/api/growth-schemas';
+import type { SheetZone, ZoneVerdictView } from '@/shared/api/growth-documents';
 import { colors, radii, spacing } from '@/components/theme';
 import { Glyph } from '@/components/ui/glyph';
 import { AppText } from '@/components/ui/text';

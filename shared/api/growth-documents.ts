@@ -1,10 +1,10 @@
 import { z } from 'zod';
-import type { GrowthSheet } from '@/shared/growth/growth-sheet';
-import type { MeasurementReport } from '@/shared/growth/measurement-report';
+import type { GrowthSheet } from '../growth/growth-sheet';
+import type { MeasurementReport } from '../growth/measurement-report';
 
 /**
  * The parts of a growth sheet and a measurement report the client reads.
- * `GET /api/growth-orders/:id` carries both as opaque JSON (shared/api/growth.ts);
+ * `GET /api/growth-orders/:id` carries both as opaque JSON (./growth.ts);
  * these schemas check them before a screen relies on a field.
  */
 const pair = z.tuple([z.number(), z.number()]);
