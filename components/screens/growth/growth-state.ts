@@ -1,8 +1,8 @@
 import { growerStates, type GrowthOrderDto, type GrowthState } from '@/shared/api/growth';
 import { colors } from '@/components/theme';
-import type { GlyphName } from '@/components/ui/glyph';
+import type { StateLook } from '@/components/ui/state-badge';
 
-export type Look = { label: string; glyph: GlyphName; color: string; meaning: string };
+export type Look = StateLook;
 
 /** Each state has a sign and a word; colour only repeats them. */
 export const growthStateLook: Record<GrowthState, Look> = {

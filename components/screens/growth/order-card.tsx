@@ -4,9 +4,9 @@ import type { GrowthOrderDto } from '@/shared/api/growth';
 import { formatDay } from '@/components/format/date';
 import { colors, radii, spacing } from '@/components/theme';
 import { Glyph } from '@/components/ui/glyph';
+import { StateBadge } from '@/components/ui/state-badge';
 import { AppText } from '@/components/ui/text';
 import { growthStateLook, isClosed, sheetStatusLook } from './growth-state';
-import { StatusPill } from './status-pill';
 
 /** react-native-web also reports hover, which React Native's types omit. */
 type WebPressState = PressableStateCallbackType & { hovered?: boolean };
@@ -43,8 +43,8 @@ function CardBody({ order, highlighted }: { order: GrowthOrderDto; highlighted: 
         {order.designName}
       </AppText>
       <View style={styles.pills}>
-        <StatusPill look={growthStateLook[order.state]} testID="order-state" />
-        {isClosed(order.state) ? null : <StatusPill look={sheetStatusLook[order.sheetStatus]} testID="order-sheet-status" />}
+        <StateBadge look={growthStateLook[order.state]} testID="order-state" />
+        {isClosed(order.state) ? null : <StateBadge look={sheetStatusLook[order.sheetStatus]} testID="order-sheet-status" />}
       </View>
       <AppText variant="caption" tone="muted">
         {`${dueText(order)} · ${order.zones} ${order.zones === 1 ? 'zone' : 'zones'} · released ${formatDay(order.createdAt)} by ${order.releasedBy}`}

@@ -3,10 +3,10 @@ import type { GrowthOrderDto } from '@/shared/api/growth';
 import { spacing } from '@/components/theme';
 import { LinkButton } from '@/components/ui/link-button';
 import { Notice } from '@/components/ui/notice';
+import { StateBadge } from '@/components/ui/state-badge';
 import { AppText } from '@/components/ui/text';
 import { growthStateLook, isClosed, sheetStatusLook } from './growth-state';
 import { StateStepper } from './state-stepper';
-import { StatusPill } from './status-pill';
 
 /** Where the order stands: state and sheet status in words, the steps, the physicist's notes and verdict. */
 export function OrderOverview({ order }: { order: GrowthOrderDto }) {
@@ -15,8 +15,8 @@ export function OrderOverview({ order }: { order: GrowthOrderDto }) {
     <View style={styles.wrap}>
       <View style={styles.status}>
         <View style={styles.pills}>
-          <StatusPill look={growthStateLook[order.state]} size="large" testID="order-state" />
-          {closed ? null : <StatusPill look={sheetStatusLook[order.sheetStatus]} testID="order-sheet-status" />}
+          <StateBadge look={growthStateLook[order.state]} size="large" testID="order-state" />
+          {closed ? null : <StateBadge look={sheetStatusLook[order.sheetStatus]} testID="order-sheet-status" />}
         </View>
         <LinkButton variant="quiet" label="Run" href={`/runs/${order.runId}`} />
       </View>

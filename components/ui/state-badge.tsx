@@ -1,16 +1,28 @@
 import { StyleSheet, View } from 'react-native';
 import { colors, radii, spacing } from '@/components/theme';
-import { Glyph } from '@/components/ui/glyph';
-import { AppText } from '@/components/ui/text';
-import type { Look } from './growth-state';
+import { Glyph, type GlyphName } from './glyph';
+import { AppText } from './text';
 
-export type StatusPillProps = { look: Look; size?: 'small' | 'large'; testID?: string };
+/** How one state shows: a sign and a word; colour only repeats what they say. */
+export type StateLook = { label: string; glyph: GlyphName; color: string; meaning: string };
+
+export type StateBadgeProps = {
+  look: StateLook;
+  size?: 'small' | 'large';
+  testID?: string;
+  /** What a screen reader says; by default the word and what it means. */
+  accessibilityLabel?: string;
+};
 
 /** "✓ Approved": a state as a sign and a word (and, large, what it means). */
-export function StatusPill({ look, size = 'small', testID }: StatusPillProps) {
+export function StateBadge({ look, size = 'small', testID, accessibilityLabel }: StateBadgeProps) {
   const large = size === 'large';
   return (
-    <View style={[styles.pill, large && styles.large, { borderColor: look.color }]} testID={testID} accessibilityLabel={`${look.label}: ${look.meaning}`}>
+    <View
+      style={[styles.badge, large && styles.large, { borderColor: look.color }]}
+      testID={testID}
+      accessibilityLabel={accessibilityLabel ?? `${look.label}: ${look.meaning}`}
+    >
       <Glyph name={look.glyph} color={look.color} />
       <AppText variant="label" style={{ color: look.color }}>
         {look.label}
@@ -25,7 +37,7 @@ export function StatusPill({ look, size = 'small', testID }: StatusPillProps) {
 }
 
 const styles = StyleSheet.create({
-  pill: {
+  badge: {
     flexDirection: 'row',
     alignItems: 'center',
     alignSelf: 'flex-start',
