@@ -18,10 +18,17 @@ import { ensureWebBuild } from '../server/ops/web-build';
  */
 const root = join(__dirname, '..');
 
-function ensureChromium(): void {
-  if (existsSync('/usr/bin/chromium')) return;
-  log('setup', 'Chromium not found: installing Debian package chromium for the browser tests');
-  execFileSync('bash', ['-c', 'apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq chromium >/dev/null'], { stdio: 'inherit' });
+/** Debian packages the browser tests drive: Chromium, and poppler's pdftotext to read the printed growth sheet. */
+const browserTools = [
+  { binary: '/usr/bin/chromium', pkg: 'chromium' },
+  { binary: '/usr/bin/pdftotext', pkg: 'poppler-utils' },
+];
+
+function ensureBrowserTools(): void {
+  const missing = browserTools.filter((t) => !existsSync(t.binary)).map((t) => t.pkg);
+  if (missing.length === 0) return;
+  log('setup', `installing Debian packages for the browser tests: ${missing.join(' ')}`);
+  execFileSync('bash', ['-c', `apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq ${missing.join(' ')} >/dev/null`], { stdio: 'inherit' });
 }
 
 function step(name: string, cmd: string, args: string[]): boolean {
@@ -40,7 +47,7 @@ async function main(): Promise<void> {
   const focused = jestArgs.some((a) => !a.startsWith('-'));
   const childEnv = { ...process.env, FROSTGRADE_PROFILE: 'test', NODE_ENV: 'test' } as NodeJS.ProcessEnv;
   const env = readEnv(childEnv);
-  ensureChromium();
+  ensureBrowserTools();
   for (const port of [env.port, env.smtp.port]) {
     if (await portInUse(port)) throw new Error(`port ${port} is in use: is another test run going? (set PORT / SMTP_PORT)`);
   }

@@ -83,9 +83,9 @@ const pageCount = (pdf: Buffer) => (pdf.toString('latin1').match(/\/Type\s*\/Pag
 
 const hasTool = (tool: string) => ['/usr/bin', '/usr/local/bin', '/bin'].some((d) => existsSync(join(d, tool)));
 
-/** The PDF's text (poppler's pdftotext), or null on a machine without it. */
-function pdfText(pdf: Buffer): string | null {
-  if (!hasTool('pdftotext')) return null;
+/** The PDF's text (poppler's pdftotext; the test runner installs poppler-utils). */
+function pdfText(pdf: Buffer): string {
+  if (!hasTool('pdftotext')) throw new Error('pdftotext is missing: install poppler-utils (npm test does)');
   const dir = mkdtempSync(join(tmpdir(), 'frostgrade-pdf-'));
   try {
     writeFileSync(join(dir, 'sheet.pdf'), pdf);
@@ -104,9 +104,8 @@ function pdfTitle(pdf: Buffer): string {
   return /\/Title\s*\(([^)]*)\)/.exec(raw)?.[1] ?? '';
 }
 
-/** The printed page as a PNG beside the screenshots, to look at (skipped without poppler). */
+/** The printed page as a PNG beside the screenshots, to look at. */
 function pdfToPng(pdf: Buffer, name: string): void {
-  if (!hasTool('pdftoppm')) return;
   const file = join(screenshotDir, `${name}.pdf`);
   writeFileSync(file, pdf);
   execFileSync('pdftoppm', ['-png', '-r', '96', '-singlefile', file, join(screenshotDir, name)]);
@@ -188,16 +187,13 @@ describe('growth hand-off in a real browser: release, print, grow, measure, judg
       const pdf = await page.pdf({ format });
       expect(pageCount(pdf)).toBe(1);
       const text = pdfText(pdf);
-      if (text !== null) {
-        expect(text).toContain(batch);
-        expect(text).toMatch(/Model predictions — verify by measurement/);
-        expect(text).toMatch(/cm⁻³[\s\S]*µV\/K[\s\S]*S\/cm/);
-        // Navigation and buttons stay off paper.
-        expect(text).not.toMatch(/Print sheet|Sign out|Accept the order/);
-      } else {
-        // Without poppler: the page's title, which names the batch, is the PDF's title.
-        expect(pdfTitle(pdf)).toContain(`Growth sheet ${batch}`);
-      }
+      expect(text).toContain(batch);
+      expect(text).toMatch(/Model predictions — verify by measurement/);
+      expect(text).toMatch(/cm⁻³[\s\S]*µV\/K[\s\S]*S\/cm/);
+      // Navigation and buttons stay off paper.
+      expect(text).not.toMatch(/Print sheet|Sign out|Accept the order/);
+      // The document's title names the batch too (what a print queue shows).
+      expect(pdfTitle(pdf)).toContain(`Growth sheet ${batch}`);
       if (format === 'A4') pdfToPng(pdf, 'growth-sheet-print');
     }
     await page.close();
