@@ -1,4 +1,3 @@
-import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { GrowthOrderDto } from '@/shared/api/growth';
 import { growthSheetExportUrl } from '@/components/api/growth';
@@ -8,6 +7,7 @@ import { colors, radii, spacing } from '@/components/theme';
 import { DownloadLink } from '@/components/ui/download-link';
 import { Notice } from '@/components/ui/notice';
 import { AppText } from '@/components/ui/text';
+import { TitledBlock } from '@/components/ui/titled-block';
 import { printSheetMark, screenOnlyMark } from './print-marks';
 import { PrintButton } from './print-button';
 import { PrintStyles } from './print-styles';
@@ -20,24 +20,6 @@ import { ZoneTable } from './zone-table';
 /** The sheet's step for the order's K; the largest K that fits when the order asks for more. */
 export function chosenStep(sheet: SheetView, zones: number): SheetStep {
   return sheet.steps.find((s) => s.zones === zones) ?? sheet.steps[sheet.steps.length - 1];
-}
-
-function Part({ title, hint, children }: { title: string; hint?: string; children: ReactNode }) {
-  return (
-    <View style={styles.part}>
-      <View style={styles.partHead}>
-        <AppText variant="bodyStrong" role="heading" aria-level={3}>
-          {title}
-        </AppText>
-        {hint ? (
-          <AppText variant="caption" tone="muted">
-            {hint}
-          </AppText>
-        ) : null}
-      </View>
-      {children}
-    </View>
-  );
 }
 
 export type GrowthSheetViewProps = { order: GrowthOrderDto; sheet: SheetView };
@@ -72,15 +54,15 @@ export function GrowthSheetView({ order, sheet }: GrowthSheetViewProps) {
           <AppText>{`No more than ${step.zones} zones of at least the shortest zone length fit this leg.`}</AppText>
         </Notice>
       ) : null}
-      <Part title="Zones along the leg" hint="Zone 1 sits at the cold end, against the load.">
+      <TitledBlock title="Zones along the leg" hint="Zone 1 sits at the cold end, against the load.">
         <ZoneDiagram rows={step.rows} lengthMm={sheet.lengthMm} />
-      </Part>
-      <Part title="Targets, tolerance bands and room-temperature checks" hint="Band: the doping range within which the predicted ΔT loss stays under the budget, confirmed by re-solving the leg at each edge.">
+      </TitledBlock>
+      <TitledBlock title="Targets, tolerance bands and room-temperature checks" hint="Band: the doping range within which the predicted ΔT loss stays under the budget, confirmed by re-solving the leg at each edge.">
         <ZoneTable rows={step.rows} measureTemperature={sheet.measureTemperature} lossBudget={sheet.lossBudget} />
-      </Part>
-      <Part title="Predicted ΔT by number of zones" hint="More zones follow the continuous optimum more closely; K = 1 is the best uniform leg.">
+      </TitledBlock>
+      <TitledBlock title="Predicted ΔT by number of zones" hint="More zones follow the continuous optimum more closely; K = 1 is the best uniform leg.">
         <ZoneCountChart sheet={sheet} chosen={step.zones} />
-      </Part>
+      </TitledBlock>
       <SheetCaution />
       <AppText variant="caption" tone="muted">{`Order ${order.id} · released ${formatDay(order.createdAt)} · sheet as of ${formatDateTime(order.updatedAt)}`}</AppText>
     </View>
@@ -99,6 +81,4 @@ const styles = StyleSheet.create({
   head: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-end', justifyContent: 'space-between', gap: spacing.md },
   title: { gap: spacing.xxs, flexShrink: 1 },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
-  part: { gap: spacing.sm },
-  partHead: { gap: spacing.xxs },
 });

@@ -5,6 +5,7 @@ import { SeriesPlot } from '@/components/charts/series-plot';
 import { spacing } from '@/components/theme';
 import { Notice } from '@/components/ui/notice';
 import { AppText } from '@/components/ui/text';
+import { TitledBlock } from '@/components/ui/titled-block';
 import { IssueList } from '../materials/upload/issue-list';
 import { reportSeries } from './report-series';
 import { ReportNumbers } from './report-numbers';
@@ -38,10 +39,7 @@ export function MeasurementReportView({ report, rows, lengthMm }: MeasurementRep
         </Notice>
       ) : null}
       <IssueList kind="warning" issues={report.uploadWarnings ?? []} />
-      <View style={styles.plot} testID="report-plot">
-        <AppText variant="bodyStrong" role="heading" aria-level={3}>
-          Target and as-grown doping along the leg
-        </AppText>
+      <TitledBlock title="Target and as-grown doping along the leg" testID="report-plot">
         <SeriesPlot
           series={series}
           xLabel="Position from the cold end x (mm)"
@@ -51,12 +49,11 @@ export function MeasurementReportView({ report, rows, lengthMm }: MeasurementRep
           description={`Target doping steps with tolerance band edges and the doping inferred at ${report.points.length} measured positions, against position along the leg`}
           note="As grown: doping inferred from each position's measurements with the family's model; the engine predicts the leg between them."
         />
-      </View>
+      </TitledBlock>
     </View>
   );
 }
 
 const styles = StyleSheet.create({
   wrap: { gap: spacing.lg },
-  plot: { gap: spacing.sm },
 });

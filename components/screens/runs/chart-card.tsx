@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
-import { StyleSheet, View } from 'react-native';
+import { StyleSheet } from 'react-native';
 import { colors, radii, spacing } from '@/components/theme';
-import { AppText } from '@/components/ui/text';
+import { TitledBlock } from '@/components/ui/titled-block';
 
 export type ChartCardProps = {
   title: string;
@@ -16,19 +16,9 @@ export type ChartCardProps = {
 /** A titled box around one chart. */
 export function ChartCard({ title, hint, inGrid = false, children, testID }: ChartCardProps) {
   return (
-    <View style={[styles.card, inGrid && styles.gridItem]} testID={testID}>
-      <View style={styles.heading}>
-        <AppText variant="bodyStrong" role="heading" aria-level={3}>
-          {title}
-        </AppText>
-        {hint ? (
-          <AppText variant="caption" tone="muted">
-            {hint}
-          </AppText>
-        ) : null}
-      </View>
+    <TitledBlock title={title} hint={hint} style={[styles.card, inGrid && styles.gridItem]} testID={testID}>
       {children}
-    </View>
+    </TitledBlock>
   );
 }
 
@@ -39,8 +29,6 @@ const styles = StyleSheet.create({
     borderWidth: 1,
     borderColor: colors.border,
     padding: spacing.lg,
-    gap: spacing.sm,
   },
   gridItem: { flexGrow: 1, flexBasis: 320, minWidth: 0 },
-  heading: { gap: spacing.xxs },
 });
