@@ -74,4 +74,18 @@ describe('CurvesBody', () => {
     fireEvent.changeText(screen.getByTestId('field-curve-delta-t'), '250');
     expect(screen.getByTestId('curves-cannot-hold')).toHaveTextContent(/Graded optimum: cannot hold this ΔT/);
   });
+  it('takes the load side as a cold-side temperature Tc too: the same curves as ΔT = Th − Tc', () => {
+    renderWithProviders(<CurvesBody runCase={detail.case} result={parsed.result} />, { session: sessionAs('viewer') });
+    const shown = () => JSON.stringify(within(screen.getByTestId('marked-currents-optimum-qc')).getAllByText(/\d/).map((n) => n.props.children));
+    fireEvent.changeText(screen.getByTestId('field-curve-delta-t'), '40');
+    const atDeltaT40 = shown();
+    fireEvent.press(screen.getByTestId('curve-by-cold-side'));
+    fireEvent.changeText(screen.getByTestId('field-curve-cold-side'), String(parsed.result.hotSide - 20));
+    expect(shown()).not.toBe(atDeltaT40);
+    fireEvent.changeText(screen.getByTestId('field-curve-cold-side'), String(parsed.result.hotSide - 40));
+    expect(screen.getByTestId('curve-derived-delta-t')).toHaveTextContent(/= 40\sK$/);
+    expect(shown()).toBe(atDeltaT40);
+    fireEvent.changeText(screen.getByTestId('field-curve-cold-side'), String(parsed.result.hotSide + 5));
+    expect(screen.getByText(/cold-side temperature Tc must be .* at most Th/)).toBeOnTheScreen();
+  });
 });

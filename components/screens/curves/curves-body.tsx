@@ -8,11 +8,10 @@ import { Section } from '@/components/ui/form-section';
 import { Notice } from '@/components/ui/notice';
 import { AppText } from '@/components/ui/text';
 import { resultLegs, runLegCurves, type LegCurve } from './curve-model';
-import { CurveInputs, parseCurveInputs, type CurveInputText } from './curve-inputs';
+import { CurveInputs, defaultCurveText, parseCurveInputs, type CurveInputText } from './curve-inputs';
 import { CurvePlots } from './curve-plots';
 import { MarkedCurrentsTable, type MarkedRow } from './marked-currents-table';
 
-const defaultText: CurveInputText = { deltaT: '30', currentLimit: '' };
 
 const rowsOf = (legs: LegCurve[]): MarkedRow[] =>
   legs.flatMap((l) => (l.curve ? [{ key: l.key, label: l.label, maxHeatLoad: l.curve.maxHeatLoad, maxCop: l.curve.maxCop }] : []));
@@ -29,8 +28,8 @@ function rangeLine(l: LegCurve): string {
 
 /** Inputs, plots and the marked currents of a run's optimum and baselines. */
 export function CurvesBody({ runCase, result }: { runCase: Record<string, unknown>; result: RunResult }) {
-  const [text, setText] = useState(defaultText);
-  const parsed = parseCurveInputs(text);
+  const [text, setText] = useState<CurveInputText>(defaultCurveText);
+  const parsed = parseCurveInputs(text, result.hotSide);
   const deltaT = useDeferredValue(parsed.deltaT);
   const limit = useDeferredValue(parsed.currentLimit);
   const legs = useMemo(
@@ -41,8 +40,8 @@ export function CurvesBody({ runCase, result }: { runCase: Record<string, unknow
   const failed = legs.filter((l) => !l.curve);
   return (
     <View style={styles.wrap}>
-      <Section title="Conditions" hint={`Heat sink at Th = ${formatNumber(result.hotSide, 4)} K, the run's own. The curves start where the leg begins to pump heat at this ΔT.`}>
-        <CurveInputs text={text} onChange={setText} errors={parsed.errors} />
+      <Section title="Conditions" hint={`Heat sink at Th = ${formatNumber(result.hotSide, 4)} K, the run's own. The curves start where the leg begins to pump heat at this ΔT (or cold-side temperature).`}>
+        <CurveInputs text={text} onChange={setText} parsed={parsed} hotSide={result.hotSide} />
       </Section>
       <CautionNotice testID="curves-caution" />
       {failed.length > 0 ? (
