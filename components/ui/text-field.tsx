@@ -1,6 +1,6 @@
 import { StyleSheet, TextInput, View, type KeyboardTypeOptions } from 'react-native';
-import { colors, fonts, radii, spacing, type as typeScale } from '@/components/theme';
-import { Glyph } from './glyph';
+import { colors, fonts, spacing } from '@/components/theme';
+import { ErrorLine, fieldInputProps, fieldLabelId, fieldStyles } from './field-parts';
 import { AppText } from './text';
 
 export type TextFieldProps = {
@@ -26,10 +26,9 @@ export type TextFieldProps = {
 export function TextField(props: TextFieldProps) {
   const { id, label, value, onChangeText, unit, help, error, placeholder, required = false } = props;
   const { multiline = false, keyboardType, mono = false } = props;
-  const labelId = `${id}-label`;
   return (
     <View style={styles.field}>
-      <AppText variant="label" nativeID={labelId}>
+      <AppText variant="label" nativeID={fieldLabelId(id)}>
         {label}
         {required ? <AppText variant="label" tone="muted">{' · required'}</AppText> : null}
       </AppText>
@@ -40,10 +39,7 @@ export function TextField(props: TextFieldProps) {
       ) : null}
       <View style={styles.inputRow}>
         <TextInput
-          testID={`field-${id}`}
-          aria-labelledby={labelId}
-          accessibilityLabel={label}
-          aria-invalid={error !== undefined}
+          {...fieldInputProps(id, label, error)}
           value={value}
           onChangeText={onChangeText}
           placeholder={placeholder}
@@ -52,7 +48,7 @@ export function TextField(props: TextFieldProps) {
           keyboardType={keyboardType}
           autoCapitalize="none"
           autoCorrect={false}
-          style={[styles.input, mono && styles.mono, multiline && styles.multiline, error ? styles.invalid : null]}
+          style={[fieldStyles.frame, fieldStyles.text, mono && styles.mono, multiline && styles.multiline, error ? fieldStyles.invalid : null]}
         />
         {unit ? (
           <AppText variant="mono" tone="muted" style={styles.unit}>
@@ -60,14 +56,7 @@ export function TextField(props: TextFieldProps) {
           </AppText>
         ) : null}
       </View>
-      {error ? (
-        <View style={styles.error} role="alert" testID={`error-${id}`}>
-          <Glyph name="cross" color={colors.danger} />
-          <AppText variant="caption" tone="danger" style={styles.errorText}>
-            {error}
-          </AppText>
-        </View>
-      ) : null}
+      <ErrorLine message={error} testID={`error-${id}`} />
     </View>
   );
 }
@@ -75,22 +64,7 @@ export function TextField(props: TextFieldProps) {
 const styles = StyleSheet.create({
   field: { gap: spacing.xs },
   inputRow: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm },
-  input: {
-    ...typeScale.body,
-    flex: 1,
-    color: colors.text,
-    backgroundColor: colors.field,
-    borderWidth: 1,
-    borderColor: colors.border,
-    borderRadius: radii.md,
-    paddingHorizontal: spacing.md,
-    paddingVertical: spacing.sm,
-    minHeight: 42,
-  },
   mono: { fontFamily: fonts.mono },
   multiline: { minHeight: 84, textAlignVertical: 'top' },
-  invalid: { borderColor: colors.danger, borderWidth: 1.5 },
   unit: { minWidth: 72 },
-  error: { flexDirection: 'row', alignItems: 'flex-start', gap: spacing.xs },
-  errorText: { flex: 1 },
 });

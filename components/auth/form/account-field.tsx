@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Pressable, StyleSheet, TextInput, View, type TextInputProps } from 'react-native';
-import { colors, radii, spacing, type as typeScale } from '@/components/theme';
-import { Glyph } from '@/components/ui/glyph';
+import { colors, spacing } from '@/components/theme';
+import { ErrorLine, fieldInputProps, fieldLabelId, fieldStyles } from '@/components/ui/field-parts';
 import { AppText } from '@/components/ui/text';
 
 /** What the field holds; sets the keyboard and what password managers fill in. */
@@ -33,26 +33,22 @@ export function AccountField(props: AccountFieldProps) {
   const { id, label, kind, value, onChangeText, error, help, onSubmit } = props;
   const secret = kind === 'current-password' || kind === 'new-password';
   const [revealed, setRevealed] = useState(false);
-  const labelId = `${id}-label`;
   return (
     <View style={styles.field}>
-      <AppText variant="label" nativeID={labelId}>
+      <AppText variant="label" nativeID={fieldLabelId(id)}>
         {label}
       </AppText>
-      <View style={[styles.box, error ? styles.invalid : null]}>
+      <View style={[fieldStyles.frame, styles.box, error ? fieldStyles.invalid : null]}>
         <TextInput
           {...inputProps[kind]}
           secureTextEntry={secret && !revealed}
-          testID={`field-${id}`}
-          aria-labelledby={labelId}
-          accessibilityLabel={label}
-          aria-invalid={error !== undefined}
+          {...fieldInputProps(id, label, error)}
           value={value}
           onChangeText={onChangeText}
           onSubmitEditing={onSubmit}
           autoCorrect={false}
           placeholderTextColor={colors.textFaint}
-          style={styles.input}
+          style={fieldStyles.text}
         />
         {secret ? (
           <Pressable
@@ -72,39 +68,13 @@ export function AccountField(props: AccountFieldProps) {
           {help}
         </AppText>
       ) : null}
-      {error ? (
-        <View style={styles.error} role="alert" testID={`error-${id}`}>
-          <Glyph name="cross" color={colors.danger} />
-          <AppText variant="caption" tone="danger" style={styles.errorText}>
-            {error}
-          </AppText>
-        </View>
-      ) : null}
+      <ErrorLine message={error} testID={`error-${id}`} />
     </View>
   );
 }
 
 const styles = StyleSheet.create({
   field: { gap: spacing.xs },
-  box: {
-    flexDirection: 'row',
-    alignItems: 'center',
-    backgroundColor: colors.field,
-    borderWidth: 1,
-    borderColor: colors.border,
-    borderRadius: radii.md,
-    minHeight: 44,
-  },
-  input: {
-    ...typeScale.body,
-    flex: 1,
-    color: colors.text,
-    paddingHorizontal: spacing.md,
-    paddingVertical: spacing.sm,
-    minHeight: 42,
-  },
+  box: { flexDirection: 'row', alignItems: 'center', minHeight: 44 },
   reveal: { paddingHorizontal: spacing.md, alignSelf: 'stretch', justifyContent: 'center' },
-  invalid: { borderColor: colors.danger, borderWidth: 1.5 },
-  error: { flexDirection: 'row', alignItems: 'flex-start', gap: spacing.xs },
-  errorText: { flex: 1 },
 });

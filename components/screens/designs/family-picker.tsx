@@ -1,9 +1,9 @@
 import { StyleSheet, View } from 'react-native';
 import type { FamilySummary } from '@/shared/api/families';
 import { useFamilies } from '@/components/api/families';
-import { colors, spacing } from '@/components/theme';
+import { spacing } from '@/components/theme';
 import { Chip } from '@/components/ui/chip';
-import { Glyph } from '@/components/ui/glyph';
+import { ErrorLine } from '@/components/ui/field-parts';
 import { AppText } from '@/components/ui/text';
 import { designFieldInfo } from './design-fields';
 
@@ -58,14 +58,7 @@ export function FamilyPicker({ familyId, familyVersion, error, onChange }: Famil
         ))}
       </View>
       {chosen ? <VersionLine family={chosen} familyVersion={familyVersion} onChange={onChange} /> : null}
-      {error ? (
-        <View style={styles.error} role="alert" testID="error-familyId">
-          <Glyph name="cross" color={colors.danger} />
-          <AppText variant="caption" tone="danger">
-            {error}
-          </AppText>
-        </View>
-      ) : null}
+      <ErrorLine message={error} testID="error-familyId" />
     </View>
   );
 }
@@ -74,5 +67,4 @@ const styles = StyleSheet.create({
   field: { gap: spacing.xs },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
   versionRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: spacing.sm },
-  error: { flexDirection: 'row', alignItems: 'flex-start', gap: spacing.xs },
 });

@@ -4,7 +4,7 @@ import type { Objective } from '@/shared/api/designs';
 import { useFamilyDetail } from '@/components/api/families';
 import { colors, radii, spacing } from '@/components/theme';
 import { Button } from '@/components/ui/button';
-import { Glyph } from '@/components/ui/glyph';
+import { ErrorLine } from '@/components/ui/field-parts';
 import { AppText } from '@/components/ui/text';
 import { doping, formatDuration, formatObjective, objectiveInfo, quantity } from '../runs/run-format';
 import { humanize, requestBody, validateDesign, type DesignFormValues } from './design-form-model';
@@ -105,14 +105,7 @@ export function QuickEstimate({ values, onInvalid }: QuickEstimateProps) {
             : `Computed in ${formatDuration(state.estimate.seconds)}. The run grades ${values.numbers.controlPoints || 'the default number of'} control points from ${values.numbers.starts || 'the default number of'} starts and usually does better.`}
         </AppText>
       ) : null}
-      {state.kind === 'error' ? (
-        <View style={styles.error} role="alert">
-          <Glyph name="cross" color={colors.danger} />
-          <AppText variant="caption" tone="danger" style={styles.errorText}>
-            {state.message}
-          </AppText>
-        </View>
-      ) : null}
+      {state.kind === 'error' ? <ErrorLine message={state.message} /> : null}
     </View>
   );
 }
@@ -135,6 +128,4 @@ const styles = StyleSheet.create({
   head: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: spacing.md },
   headText: { flex: 1, minWidth: 220, gap: spacing.xxs },
   numbers: { gap: spacing.xxs },
-  error: { flexDirection: 'row', alignItems: 'flex-start', gap: spacing.xs },
-  errorText: { flex: 1 },
 });
