@@ -2,8 +2,8 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { ApiError } from '@/components/api/client';
 import { spacing } from '@/components/theme';
-import { Button } from '@/components/ui/button';
-import { Notice } from '@/components/ui/notice';
+import { NotSavedNotice } from '@/components/ui/not-saved-notice';
+import { SaveCancelButtons } from '@/components/ui/save-cancel-buttons';
 import { AppText } from '@/components/ui/text';
 import type { DesignNumberKey } from './design-fields';
 import { splitApiErrors, validateDesign, type DesignFormValues, type FieldErrors, type ValidDesign } from './design-form-model';
@@ -53,30 +53,17 @@ export function DesignForm({ initial, submitLabel, pending, error, onSubmit, onC
       <GrowerSection {...section} />
       <SearchSection {...section} />
       <QuickEstimate values={values} onInvalid={() => setTried(true)} />
-      {fromServer.message ? (
-        <Notice tone="danger" title="Not saved" testID="form-server-error">
-          <AppText>{fromServer.message}</AppText>
-          {fromServer.other.map((line) => (
-            <AppText key={line} variant="mono">
-              {line}
-            </AppText>
-          ))}
-        </Notice>
-      ) : null}
+      {fromServer.message ? <NotSavedNotice message={fromServer.message} details={fromServer.other} testID="form-server-error" /> : null}
       {problemCount > 0 && !fromServer.message ? (
         <AppText tone="danger" role="alert" testID="form-problem-count">
           {`${problemCount} ${problemCount === 1 ? 'field needs' : 'fields need'} attention before saving.`}
         </AppText>
       ) : null}
-      <View style={styles.buttons}>
-        <Button label={pending ? 'Saving…' : submitLabel} onPress={submit} disabled={pending} />
-        <Button label="Cancel" variant="quiet" onPress={onCancel} disabled={pending} />
-      </View>
+      <SaveCancelButtons label={submitLabel} pending={pending} onSave={submit} onCancel={onCancel} />
     </View>
   );
 }
 
 const styles = StyleSheet.create({
   form: { gap: spacing.lg, maxWidth: 760, width: '100%' },
-  buttons: { flexDirection: 'row', gap: spacing.md, flexWrap: 'wrap' },
 });

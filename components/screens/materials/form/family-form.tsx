@@ -3,9 +3,9 @@ import { StyleSheet, View } from 'react-native';
 import type { MaterialInput } from '@/shared/engine';
 import { ApiError } from '@/components/api/client';
 import { spacing } from '@/components/theme';
-import { Button } from '@/components/ui/button';
 import { Section } from '@/components/ui/form-section';
-import { Notice } from '@/components/ui/notice';
+import { NotSavedNotice } from '@/components/ui/not-saved-notice';
+import { SaveCancelButtons } from '@/components/ui/save-cancel-buttons';
 import { AppText } from '@/components/ui/text';
 import { BandFields } from './band-fields';
 import {
@@ -69,30 +69,17 @@ export function FamilyForm(props: FamilyFormProps) {
         <ProvenanceFields values={values} errors={errors} onChange={(field, text) => setValues((v) => ({ ...v, [field]: text }))} />
       </Section>
       {notice}
-      {fromServer.message ? (
-        <Notice tone="danger" title="Not saved" testID="form-server-error">
-          <AppText>{fromServer.message}</AppText>
-          {fromServer.other.map((line) => (
-            <AppText key={line} variant="mono">
-              {line}
-            </AppText>
-          ))}
-        </Notice>
-      ) : null}
+      {fromServer.message ? <NotSavedNotice message={fromServer.message} details={fromServer.other} testID="form-server-error" /> : null}
       {problems.length > 0 && !fromServer.message ? (
         <AppText tone="danger" role="alert" testID="form-problems">
           {`Fix before saving: ${problems.join(', ')}.`}
         </AppText>
       ) : null}
-      <View style={styles.buttons}>
-        <Button label={pending ? 'Saving…' : submitLabel} onPress={submit} disabled={pending} />
-        <Button label="Cancel" variant="quiet" onPress={onCancel} disabled={pending} />
-      </View>
+      <SaveCancelButtons label={submitLabel} pending={pending} onSave={submit} onCancel={onCancel} />
     </View>
   );
 }
 
 const styles = StyleSheet.create({
   form: { gap: spacing.lg, maxWidth: 720, width: '100%' },
-  buttons: { flexDirection: 'row', gap: spacing.md, flexWrap: 'wrap' },
 });

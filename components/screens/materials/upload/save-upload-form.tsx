@@ -3,7 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import { ApiError } from '@/components/api/client';
 import { spacing } from '@/components/theme';
 import { Button } from '@/components/ui/button';
-import { Notice } from '@/components/ui/notice';
+import { NotSavedNotice } from '@/components/ui/not-saved-notice';
 import { AppText } from '@/components/ui/text';
 import { splitApiErrors, type FieldErrors } from '../form/family-form-model';
 import { ProvenanceFields, type ProvenanceValues } from '../form/provenance-fields';
@@ -36,16 +36,7 @@ export function SaveUploadForm({ canSave, pending, error, onSave }: SaveUploadFo
   return (
     <View style={styles.form}>
       <ProvenanceFields values={values} errors={errors} onChange={(field, text) => setValues((v) => ({ ...v, [field]: text }))} />
-      {error ? (
-        <Notice tone="danger" title="Not saved" testID="save-error">
-          <AppText>{error.message}</AppText>
-          {server.other.map((line) => (
-            <AppText key={line} variant="mono">
-              {line}
-            </AppText>
-          ))}
-        </Notice>
-      ) : null}
+      {error ? <NotSavedNotice message={error.message} details={server.other} testID="save-error" /> : null}
       <AppText variant="caption" tone="muted">
         {canSave
           ? 'Saving stores every row or none. The family starts at version 1.'
