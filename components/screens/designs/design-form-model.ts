@@ -1,6 +1,7 @@
 import type { z } from 'zod';
 import { designInputSchema, type Design, type Objective } from '@/shared/api/designs';
 import type { FieldError } from '@/shared/api/errors';
+import { splitFieldErrors, type FieldErrors, type SplitErrors } from '@/components/ui/save-errors';
 import { designFieldInfo, type DesignNumberKey } from './design-fields';
 
 /** What the form holds: numbers as typed, so a half-typed "1e" is not lost. */
@@ -15,7 +16,7 @@ export type DesignFormValues = {
   numbers: Record<DesignNumberKey, string>;
 };
 
-export type FieldErrors = Partial<Record<string, string>>;
+export type { FieldErrors };
 export type ValidDesign = z.output<typeof designInputSchema>;
 export type DesignValidation = { ok: true; input: ValidDesign } | { ok: false; errors: FieldErrors };
 
@@ -140,12 +141,6 @@ export function validateDesign(values: DesignFormValues): DesignValidation {
 /** Fields the form shows; API errors on anything else are listed above the buttons. */
 const formFields = new Set(Object.keys(designFieldInfo));
 
-export function splitApiErrors(fieldErrors: FieldError[]): { byField: FieldErrors; other: string[] } {
-  const byField: FieldErrors = {};
-  const other: string[] = [];
-  for (const e of fieldErrors) {
-    if (formFields.has(e.field)) byField[e.field] ??= humanize(e.field, e.message);
-    else other.push(e.field ? `${e.field}: ${e.message}` : e.message);
-  }
-  return { byField, other };
+export function splitApiErrors(fieldErrors: FieldError[]): SplitErrors {
+  return splitFieldErrors(fieldErrors, formFields, humanize);
 }

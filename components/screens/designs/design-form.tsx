@@ -1,9 +1,9 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { ApiError } from '@/components/api/client';
 import { spacing } from '@/components/theme';
 import { NotSavedNotice } from '@/components/ui/not-saved-notice';
 import { SaveCancelButtons } from '@/components/ui/save-cancel-buttons';
+import { saveErrors } from '@/components/ui/save-errors';
 import { AppText } from '@/components/ui/text';
 import type { DesignNumberKey } from './design-fields';
 import { splitApiErrors, validateDesign, type DesignFormValues, type FieldErrors, type ValidDesign } from './design-form-model';
@@ -20,12 +20,6 @@ export type DesignFormProps = {
   onCancel: () => void;
 };
 
-function serverErrors(error: Error | null): { byField: FieldErrors; other: string[]; message?: string } {
-  if (!error) return { byField: {}, other: [] };
-  if (!(error instanceof ApiError)) return { byField: {}, other: [], message: error.message };
-  return { ...splitApiErrors(error.fieldErrors), message: error.message };
-}
-
 /**
  * Create or edit a leg design: checked here with the server's schema as
  * the physicist types (after a first attempt), the server's own verdict
@@ -35,7 +29,7 @@ export function DesignForm({ initial, submitLabel, pending, error, onSubmit, onC
   const [values, setValues] = useState(initial);
   const [tried, setTried] = useState(false);
   const local = tried ? validateDesign(values) : null;
-  const fromServer = serverErrors(error);
+  const fromServer = saveErrors(error, splitApiErrors);
   const errors: FieldErrors = { ...fromServer.byField, ...(local && !local.ok ? local.errors : {}) };
   const onNumber = (field: DesignNumberKey, text: string) => setValues((v) => ({ ...v, numbers: { ...v.numbers, [field]: text } }));
   const onChange = (patch: Partial<DesignFormValues>) => setValues((v) => ({ ...v, ...patch }));

@@ -2,6 +2,7 @@ import type { z } from 'zod';
 import { createFamilyRequestSchema, type FamilyVersion } from '@/shared/api/families';
 import type { FieldError } from '@/shared/api/errors';
 import type { MaterialInput } from '@/shared/engine';
+import { splitFieldErrors, type FieldErrors, type SplitErrors } from '@/components/ui/save-errors';
 import { bandParameters, type BandNumberKey } from '../band-parameters';
 
 /** What the form holds: text as typed, so a half-typed "1e" is not lost. */
@@ -13,8 +14,7 @@ export type FamilyFormValues = {
   numbers: Record<BandNumberKey, string>;
 };
 
-/** Field path (as the API names it, e.g. `definition.effectiveMass`) → message. */
-export type FieldErrors = Partial<Record<string, string>>;
+export type { FieldErrors };
 
 export type ValidRequest = z.output<typeof createFamilyRequestSchema>;
 export type Validation = { ok: true; request: ValidRequest } | { ok: false; errors: FieldErrors };
@@ -103,12 +103,6 @@ export function validate(values: FamilyFormValues, fixedDefinition?: MaterialInp
 /** Fields the form shows; API errors on anything else are listed above the buttons. */
 export const formFields = new Set(Object.keys(labels));
 
-export function splitApiErrors(fieldErrors: FieldError[]): { byField: FieldErrors; other: string[] } {
-  const byField: FieldErrors = {};
-  const other: string[] = [];
-  for (const e of fieldErrors) {
-    if (formFields.has(e.field)) byField[e.field] ??= humanize(e.field, e.message);
-    else other.push(e.field ? `${e.field}: ${e.message}` : e.message);
-  }
-  return { byField, other };
+export function splitApiErrors(fieldErrors: FieldError[]): SplitErrors {
+  return splitFieldErrors(fieldErrors, formFields, humanize);
 }

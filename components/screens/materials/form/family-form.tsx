@@ -1,11 +1,11 @@
 import { useState, type ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { MaterialInput } from '@/shared/engine';
-import { ApiError } from '@/components/api/client';
 import { spacing } from '@/components/theme';
 import { Section } from '@/components/ui/form-section';
 import { NotSavedNotice } from '@/components/ui/not-saved-notice';
 import { SaveCancelButtons } from '@/components/ui/save-cancel-buttons';
+import { saveErrors } from '@/components/ui/save-errors';
 import { AppText } from '@/components/ui/text';
 import { BandFields } from './band-fields';
 import {
@@ -32,12 +32,6 @@ export type FamilyFormProps = {
   onCancel: () => void;
 };
 
-function serverErrors(error: Error | null): { byField: FieldErrors; other: string[]; message?: string } {
-  if (!error) return { byField: {}, other: [] };
-  if (!(error instanceof ApiError)) return { byField: {}, other: [], message: error.message };
-  return { ...splitApiErrors(error.fieldErrors), message: error.message };
-}
-
 /** Create or edit a family: checked here with the server's schema, then sent. */
 export function FamilyForm(props: FamilyFormProps) {
   const { initial, fixedDefinition, submitLabel, notice, pending, error, onSubmit, onCancel } = props;
@@ -45,7 +39,7 @@ export function FamilyForm(props: FamilyFormProps) {
   const [tried, setTried] = useState(false);
   // After a first attempt, errors follow the typing; the server's until the next save.
   const local = tried ? validate(values, fixedDefinition) : null;
-  const fromServer = serverErrors(error);
+  const fromServer = saveErrors(error, splitApiErrors);
   const errors: FieldErrors = { ...fromServer.byField, ...(local && !local.ok ? local.errors : {}) };
   const submit = () => {
     setTried(true);

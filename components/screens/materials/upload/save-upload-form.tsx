@@ -1,9 +1,9 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { ApiError } from '@/components/api/client';
 import { spacing } from '@/components/theme';
 import { Button } from '@/components/ui/button';
 import { NotSavedNotice } from '@/components/ui/not-saved-notice';
+import { saveErrors } from '@/components/ui/save-errors';
 import { AppText } from '@/components/ui/text';
 import { splitApiErrors, type FieldErrors } from '../form/family-form-model';
 import { ProvenanceFields, type ProvenanceValues } from '../form/provenance-fields';
@@ -27,7 +27,7 @@ function localErrors(values: ProvenanceValues): FieldErrors {
 export function SaveUploadForm({ canSave, pending, error, onSave }: SaveUploadFormProps) {
   const [values, setValues] = useState<ProvenanceValues>({ name: '', source: '', summary: '' });
   const [tried, setTried] = useState(false);
-  const server = error instanceof ApiError ? splitApiErrors(error.fieldErrors) : { byField: {}, other: [] };
+  const server = saveErrors(error, splitApiErrors);
   const errors = { ...server.byField, ...(tried ? localErrors(values) : {}) };
   const submit = () => {
     setTried(true);
@@ -36,7 +36,7 @@ export function SaveUploadForm({ canSave, pending, error, onSave }: SaveUploadFo
   return (
     <View style={styles.form}>
       <ProvenanceFields values={values} errors={errors} onChange={(field, text) => setValues((v) => ({ ...v, [field]: text }))} />
-      {error ? <NotSavedNotice message={error.message} details={server.other} testID="save-error" /> : null}
+      {server.message !== undefined ? <NotSavedNotice message={server.message} details={server.other} testID="save-error" /> : null}
       <AppText variant="caption" tone="muted">
         {canSave
           ? 'Saving stores every row or none. The family starts at version 1.'
