@@ -3,7 +3,7 @@ import { useRequestReset } from '@/components/api/auth';
 import { AuthFrame } from './auth-frame';
 import { AuthLink } from './auth-link';
 import { AccountField } from './form/account-field';
-import { FormAlert } from './form/form-alert';
+import { FormAlert, FormProblem } from './form/form-alert';
 import { SubmitButton } from './form/submit-button';
 import { useAccountForm } from './form/use-account-form';
 
@@ -35,20 +35,8 @@ export function ForgotPasswordScreen() {
           {resetRequestedText}
         </FormAlert>
       ) : null}
-      {form.errors.banner ? (
-        <FormAlert tone="danger" title="No link sent">
-          {form.errors.banner}
-        </FormAlert>
-      ) : null}
-      <AccountField
-        id="email"
-        label="E-mail"
-        kind="email"
-        value={form.values.email}
-        onChangeText={form.set('email')}
-        error={form.errors.fields.email}
-        onSubmit={submit}
-      />
+      <FormProblem title="No link sent" problem={form.errors.banner} />
+      <AccountField {...form.field('email')} label="E-mail" kind="email" onSubmit={submit} />
       <SubmitButton
         label={request.isSuccess ? 'Send another link' : 'Send reset link'}
         busyLabel="Sending…"

@@ -7,8 +7,8 @@ import { spacing } from '@/components/theme';
 import { LoadingState } from '@/components/ui/state-views';
 import { AuthFrame } from './auth-frame';
 import { AuthLink } from './auth-link';
-import { AccountField } from './form/account-field';
-import { FormAlert } from './form/form-alert';
+import { AccountField, newPasswordHelp } from './form/account-field';
+import { FormAlert, FormProblem } from './form/form-alert';
 import { errorsFrom } from './form/form-errors';
 import { SubmitButton } from './form/submit-button';
 import { useAccountForm } from './form/use-account-form';
@@ -27,29 +27,14 @@ function AcceptForm({ token }: { token: string }) {
   };
   return (
     <>
-      {form.errors.banner ? (
-        <FormAlert tone="danger" title="Not joined" testID="join-problem">
-          {form.errors.banner}
-        </FormAlert>
-      ) : null}
+      <FormProblem title="Not joined" problem={form.errors.banner} testID="join-problem" />
       <View style={styles.fields}>
+        <AccountField {...form.field('displayName')} label="Your name" kind="name" help="As your teammates will see it" />
         <AccountField
-          id="displayName"
-          label="Your name"
-          kind="name"
-          value={form.values.displayName}
-          onChangeText={form.set('displayName')}
-          error={form.errors.fields.displayName}
-          help="As your teammates will see it"
-        />
-        <AccountField
-          id="password"
+          {...form.field('password')}
           label="Choose a password"
           kind="new-password"
-          value={form.values.password}
-          onChangeText={form.set('password')}
-          error={form.errors.fields.password}
-          help="At least 10 characters; a few unrelated words work well"
+          help={newPasswordHelp}
           onSubmit={submit}
         />
       </View>

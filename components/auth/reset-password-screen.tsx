@@ -3,8 +3,8 @@ import { resetConfirmSchema } from '@/shared/api/auth';
 import { useResetPassword } from '@/components/api/auth';
 import { AuthFrame } from './auth-frame';
 import { AuthLink } from './auth-link';
-import { AccountField } from './form/account-field';
-import { FormAlert } from './form/form-alert';
+import { AccountField, newPasswordHelp } from './form/account-field';
+import { FormAlert, FormProblem } from './form/form-alert';
 import { SubmitButton } from './form/submit-button';
 import { useAccountForm } from './form/use-account-form';
 
@@ -47,19 +47,12 @@ export function ResetPasswordScreen() {
       subtitle="It replaces the old one at once, and signs the account out everywhere."
       footer={<AuthLink lead="Link expired or used?" label="Ask for a new one" href="/forgot-password" />}
     >
-      {form.errors.banner ? (
-        <FormAlert tone="danger" title="Password not changed" testID="reset-problem">
-          {form.errors.banner}
-        </FormAlert>
-      ) : null}
+      <FormProblem title="Password not changed" problem={form.errors.banner} testID="reset-problem" />
       <AccountField
-        id="password"
+        {...form.field('password')}
         label="New password"
         kind="new-password"
-        value={form.values.password}
-        onChangeText={form.set('password')}
-        error={form.errors.fields.password}
-        help="At least 10 characters; a few unrelated words work well"
+        help={newPasswordHelp}
         onSubmit={submit}
       />
       <SubmitButton label="Set new password" busyLabel="Saving…" busy={reset.isPending} onPress={submit} testID="submit-reset" />

@@ -5,7 +5,7 @@ import { spacing } from '@/components/theme';
 import { AuthFrame } from './auth-frame';
 import { AuthLink } from './auth-link';
 import { AccountField } from './form/account-field';
-import { FormAlert } from './form/form-alert';
+import { FormProblem } from './form/form-alert';
 import { SubmitButton } from './form/submit-button';
 import { useAccountForm } from './form/use-account-form';
 
@@ -25,30 +25,10 @@ export function SignInScreen() {
       subtitle="to your team's Frostgrade workspace"
       footer={<AuthLink lead="New to Frostgrade?" label="Start a team" href="/sign-up" testID="link-sign-up" />}
     >
-      {form.errors.banner ? (
-        <FormAlert tone="danger" title="Not signed in" testID="sign-in-problem">
-          {form.errors.banner}
-        </FormAlert>
-      ) : null}
+      <FormProblem title="Not signed in" problem={form.errors.banner} testID="sign-in-problem" />
       <View style={styles.fields}>
-        <AccountField
-          id="email"
-          label="E-mail"
-          kind="email"
-          value={form.values.email}
-          onChangeText={form.set('email')}
-          error={form.errors.fields.email}
-          onSubmit={submit}
-        />
-        <AccountField
-          id="password"
-          label="Password"
-          kind="current-password"
-          value={form.values.password}
-          onChangeText={form.set('password')}
-          error={form.errors.fields.password}
-          onSubmit={submit}
-        />
+        <AccountField {...form.field('email')} label="E-mail" kind="email" onSubmit={submit} />
+        <AccountField {...form.field('password')} label="Password" kind="current-password" onSubmit={submit} />
         <AuthLink label="Forgot your password?" href="/forgot-password" testID="link-forgot" />
       </View>
       <SubmitButton label="Sign in" busyLabel="Signing in…" busy={signIn.isPending} onPress={submit} testID="submit-sign-in" />

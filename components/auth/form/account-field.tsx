@@ -15,6 +15,9 @@ const inputProps: Record<AccountFieldKind, TextInputProps> = {
   team: { autoComplete: 'organization', autoCapitalize: 'words' },
 };
 
+/** Under a new password: what the shared schema asks for, and a hint. */
+export const newPasswordHelp = 'At least 10 characters; a few unrelated words work well';
+
 export type AccountFieldProps = {
   /** Stable id; the input's test id is `field-<id>`, its error's `error-<id>`. */
   id: string;

@@ -25,6 +25,16 @@ export function FormAlert(props: { tone: FormAlertTone; title: string; children?
   );
 }
 
+/** What stopped the form that belongs to no field (e.g. "too many attempts"); nothing when there is none. */
+export function FormProblem({ title, problem, testID }: { title: string; problem: string | null; testID?: string }) {
+  if (!problem) return null;
+  return (
+    <FormAlert tone="danger" title={title} testID={testID}>
+      {problem}
+    </FormAlert>
+  );
+}
+
 const styles = StyleSheet.create({
   box: { borderRadius: radii.md, borderWidth: 1, padding: spacing.md, gap: spacing.xs },
   titleRow: { flexDirection: 'row', alignItems: 'center', gap: spacing.xs },

@@ -27,8 +27,11 @@ export function useAccountForm<F extends string>(fields: readonly F[], initial: 
     return found === null;
   };
 
+  /** What an AccountField needs to show and edit one field: `<AccountField {...form.field('email')} … />`. */
+  const field = (name: F) => ({ id: name, value: values[name], onChangeText: set(name), error: errors.fields[name] });
+
   const fail = (error: unknown) => setErrors(errorsFrom(error, fields));
   const reset = () => setErrors(noErrors());
 
-  return { values, errors, set, check, fail, reset };
+  return { values, errors, set, field, check, fail, reset };
 }

@@ -3,7 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import { inviteRequestSchema, type Role } from '@/shared/api/auth';
 import { useInvite } from '@/components/api/team';
 import { AccountField } from '@/components/auth/form/account-field';
-import { FormAlert } from '@/components/auth/form/form-alert';
+import { FormAlert, FormProblem } from '@/components/auth/form/form-alert';
 import { useAccountForm } from '@/components/auth/form/use-account-form';
 import { spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';
@@ -39,11 +39,7 @@ export function InviteForm() {
           {`${sentTo} has an e-mail with a link to join. It works once, for 7 days; it is listed under Invitations.`}
         </FormAlert>
       ) : null}
-      {form.errors.banner ? (
-        <FormAlert tone="danger" title="No invitation sent">
-          {form.errors.banner}
-        </FormAlert>
-      ) : null}
+      <FormProblem title="No invitation sent" problem={form.errors.banner} />
       <AccountField
         id="invite-email"
         label="E-mail"
