@@ -81,11 +81,26 @@ export function ensureCluster(root: string, profile: string, port: number): Clus
     chownSync(join(dataDir, 'postgresql.auto.conf'), uid('postgres'), gid('postgres'));
   }
   clearStaleLock(dataDir, port);
-  if (isRunning(bin, dataDir)) return { dataDir, port, startedHere: false };
+  if (isRunning(bin, dataDir)) {
+    // postmaster.pid's fourth line is the port the running server listens on.
+    const running = Number(readFileSync(join(dataDir, 'postmaster.pid'), 'utf8').split('\n')[3]);
+    if (running !== port) throw new Error(`the cluster in ${dataDir} is already running on port ${running}, not PG_PORT=${port}: stop it (pg_ctl stop -D ${dataDir}) or set PG_PORT=${running}`);
+    return { dataDir, port, startedHere: false };
+  }
+  // The port asked for now wins over the one written when the cluster was made (PG_PORT may have changed since).
+  setPort(dataDir, port);
   const r = asPostgres(bin, ['pg_ctl', 'start', '-w', '-t', '60', '-D', dataDir, '-l', join(base, 'postgres.log')], '/');
   if (r.status !== 0) throw new Error(`PostgreSQL did not start (see ${join(base, 'postgres.log')}): ${String(r.stderr || r.stdout)}`);
   log('postgres', `listening on 127.0.0.1:${port}`);
   return { dataDir, port, startedHere: true };
+}
+
+function setPort(dataDir: string, port: number): void {
+  const conf = join(dataDir, 'postgresql.auto.conf');
+  const lines = readFileSync(conf, 'utf8').split('\n').filter((l) => !/^port\s*=/.test(l));
+  const text = [...lines.filter((l) => l !== ''), `port = ${port}`, ''].join('\n');
+  writeFileSync(conf, text);
+  chownSync(conf, uid('postgres'), gid('postgres'));
 }
 
 export function stopCluster(cluster: Cluster): void {
