@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { SeriesPlot } from '@/components/charts/series-plot';
 import { spacing } from '@/components/theme';
-import { ChartCard } from '@/components/screens/runs/chart-card';
+import { ChartCard } from '@/components/charts/chart-card';
 import type { LegCurve } from './curve-model';
 import { currentAxis, curveOrder, curveQuantities, curveSeries } from './curve-series';
 

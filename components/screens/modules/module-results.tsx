@@ -5,7 +5,7 @@ import { SeriesPlot } from '@/components/charts/series-plot';
 import { formatNumber } from '@/components/format/number';
 import { spacing } from '@/components/theme';
 import { CautionNotice } from '@/components/screens/runs/caution-notice';
-import { ChartCard } from '@/components/screens/runs/chart-card';
+import { ChartCard } from '@/components/charts/chart-card';
 import { MarkedCurrentsTable } from '@/components/screens/curves/marked-currents-table';
 import { BlockHeading } from '@/components/ui/block-heading';
 import { Section } from '@/components/ui/form-section';

@@ -10,7 +10,7 @@ import { spacing } from '@/components/theme';
 import { Section } from '@/components/ui/form-section';
 import { EmptyState, ErrorState, LoadingState } from '@/components/ui/state-views';
 import { CautionNotice } from './caution-notice';
-import { ChartCard } from './chart-card';
+import { ChartCard } from '@/components/charts/chart-card';
 import { compared, compareRows, compareSeries, parseIds } from './compare-model';
 import { comparedModules, moduleCompareRows, moduleCompareSeries } from './compare-modules';
 import { ComparePicker } from './compare-picker';

@@ -4,7 +4,7 @@ import { SeriesPlot } from '@/components/charts/series-plot';
 import { spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';
 import { baselineProfiles } from './baseline-profiles';
-import { ChartCard } from './chart-card';
+import { ChartCard } from '@/components/charts/chart-card';
 import { legQuantities, legSeries, positionAxis, type LegQuantity } from './leg-series';
 import type { RunResult } from './run-result';
 

@@ -8,7 +8,7 @@ import { spacing } from '@/components/theme';
 import { Section } from '@/components/ui/form-section';
 import { AppText } from '@/components/ui/text';
 import { CancelRun } from './cancel-run';
-import { ChartCard } from './chart-card';
+import { ChartCard } from '@/components/charts/chart-card';
 import { ConnectionLine } from './connection-line';
 import { liveDopingSeries, mergeTrace, objectiveSeries } from './live-series';
 import { ProgressBar } from './progress-bar';

@@ -9,7 +9,7 @@ import { ScreenFrame } from '@/components/shell/screen-frame';
 import { Section } from '@/components/ui/form-section';
 import { ErrorState, LoadingState } from '@/components/ui/state-views';
 import { AppText } from '@/components/ui/text';
-import { ChartCard } from './chart-card';
+import { ChartCard } from '@/components/charts/chart-card';
 import { ConnectionLine } from './connection-line';
 import { ProgressBar } from './progress-bar';
 import { asObjective, formatSweepValue, objectiveInfo, sweepParameterInfo } from './run-format';

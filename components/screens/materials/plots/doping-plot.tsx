@@ -11,7 +11,7 @@ import {
 import { SeriesPlot } from '@/components/charts/series-plot';
 import type { PlotSeries } from '@/components/charts/series-plot-types';
 import { chartMarks } from '@/components/theme';
-import { PlotCard } from './plot-card';
+import { ChartCard } from '@/components/charts/chart-card';
 
 export type DopingPlotProps = {
   /** Null: measured points only (the table cannot be interpolated). */
@@ -38,7 +38,7 @@ export function DopingPlot({ family, quantity, temperatures, range, measured }: 
   );
   const at = temperatures.map((t) => `${t} K`).join(', ');
   return (
-    <PlotCard title={info.title} testID={`plot-${quantity}`}>
+    <ChartCard fill title={info.title} testID={`plot-${quantity}`}>
       <SeriesPlot
         series={series}
         xLabel={dopingAxis}
@@ -48,6 +48,6 @@ export function DopingPlot({ family, quantity, temperatures, range, measured }: 
         description={`${info.title} against carrier concentration at ${at}${measured ? ', measured points and interpolation' : ', from the band model'}`}
         note={measured ? (family ? 'Markers: measured points. Lines: interpolation between them.' : 'Markers: measured points.') : undefined}
       />
-    </PlotCard>
+    </ChartCard>
   );
 }

@@ -6,7 +6,7 @@ import { SeriesPlot } from '@/components/charts/series-plot';
 import { formatNumber, formatScientific, powerOfTen, withUnit } from '@/components/format/number';
 import { chartMarks, spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';
-import { PlotCard } from './plot-card';
+import { ChartCard } from '@/components/charts/chart-card';
 
 export type OptimumPlotProps = {
   family: MaterialFamily;
@@ -33,7 +33,7 @@ export function OptimumPlot({ family, temperatures, range, measured }: OptimumPl
   ];
   const ends = [curve[0], curve[curve.length - 1]];
   return (
-    <PlotCard title="zT-optimal doping" testID="plot-optimum">
+    <ChartCard fill title="zT-optimal doping" testID="plot-optimum">
       <SeriesPlot
         series={series}
         xLabel="Temperature T (K)"
@@ -48,7 +48,7 @@ export function OptimumPlot({ family, temperatures, range, measured }: OptimumPl
           </AppText>
         ))}
       </View>
-    </PlotCard>
+    </ChartCard>
   );
 }
 

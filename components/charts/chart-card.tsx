@@ -9,14 +9,16 @@ export type ChartCardProps = {
   hint?: string;
   /** In a wrapping row of cards: share the width, at least ~320 px each. */
   inGrid?: boolean;
+  /** Take an equal share of a row of cards laid out by the parent (flex: 1). */
+  fill?: boolean;
   children: ReactNode;
   testID?: string;
 };
 
 /** A titled box around one chart. */
-export function ChartCard({ title, hint, inGrid = false, children, testID }: ChartCardProps) {
+export function ChartCard({ title, hint, inGrid = false, fill = false, children, testID }: ChartCardProps) {
   return (
-    <TitledBlock title={title} hint={hint} style={[styles.card, inGrid && styles.gridItem]} testID={testID}>
+    <TitledBlock title={title} hint={hint} style={[styles.card, inGrid && styles.gridItem, fill && styles.fill]} testID={testID}>
       {children}
     </TitledBlock>
   );
@@ -31,4 +33,5 @@ const styles = StyleSheet.create({
     padding: spacing.lg,
   },
   gridItem: { flexGrow: 1, flexBasis: 320, minWidth: 0 },
+  fill: { flex: 1 },
 });
