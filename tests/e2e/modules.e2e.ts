@@ -163,11 +163,18 @@ describe('a physicist opens a run’s curves, builds a module and exports its CS
     await page.goto(`${baseUrl}/runs/${runId}/curves`);
     await visible(page.getByTestId('curves-build-module')).click({ timeout: 60_000 });
     await page.waitForURL(`${baseUrl}/modules/new?p=${runId}`);
-    // The p leg comes from the run, prefilled.
-    expect(await visible(page.getByTestId('field-p-run-id')).inputValue()).toBe(runId);
+    // The p leg comes from the run, prefilled: its chip (design name, ΔT, date) is the one chosen.
+    const runChoice = visible(page.getByTestId(`p-run-${runId}`));
+    await runChoice.waitFor({ timeout: 60_000 });
+    expect(await runChoice.getAttribute('aria-checked')).toBe('true');
+    expect(await runChoice.innerText()).toContain(`Module browser leg ${stamp} · ΔT`);
+    // The n leg's families are n-type (or carrier-free) only: the demo p family is not offered there.
+    await visible(page.getByTestId('n-kind-family')).click();
+    const { families } = familiesResponseSchema.parse(await getJsonAs(physicist, '/api/families'));
+    const pFamily = families.find((f) => pFamilyName.test(f.name))!;
+    expect(await page.getByTestId(`n-family-${pFamily.id}`).count()).toBe(0);
     expect(await visible(page.getByTestId('p-leg-optimum')).getAttribute('aria-checked')).toBe('true');
     await visible(page.getByTestId('field-module-name')).fill(moduleName);
-    await visible(page.getByTestId('n-kind-family')).click();
     await visible(page.getByTestId(`n-family-${nFamilyId}`)).click();
     await visible(page.getByTestId('field-n-per-cm3')).fill(nDoping);
     await visible(page.getByTestId('field-n-length')).fill('1.5');

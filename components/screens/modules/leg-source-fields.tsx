@@ -2,9 +2,11 @@ import { StyleSheet, View } from 'react-native';
 import { useFamilies } from '@/components/api/families';
 import { spacing } from '@/components/theme';
 import { Chip } from '@/components/ui/chip';
+import { ErrorLine } from '@/components/ui/field-parts';
 import { AppText } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
 import type { FieldErrors, LegText } from './module-form-model';
+import { RunLegPicker } from './run-leg-picker';
 
 const legNames: [LegText['leg'], string][] = [
   ['optimum', 'Graded optimum'],
@@ -27,7 +29,7 @@ export function LegSourceFields({ side, value, onChange, errors }: Props) {
       </View>
       {value.kind === 'run' ? (
         <>
-          <TextField id={`${side}-run-id`} label="Run id" value={value.runId} onChangeText={(runId) => set({ runId })} error={errors[`${side}.runId`]} mono />
+          <RunLegPicker side={side} runId={value.runId} onPick={(runId) => set({ runId })} error={errors[`${side}.runId`]} />
           <View style={styles.chips}>
             {legNames.map(([leg, label]) => (
               <Chip key={leg} role="radio" label={label} selected={value.leg === leg} onPress={() => set({ leg })} testID={`${side}-leg-${leg}`} />
@@ -37,11 +39,11 @@ export function LegSourceFields({ side, value, onChange, errors }: Props) {
       ) : (
         <>
           <View style={styles.chips}>
-            {(families.data?.families ?? []).map((f) => (
+            {(families.data?.families ?? []).filter((f) => f.carrier === side || f.carrier === null).map((f) => (
               <Chip key={f.id} role="radio" label={f.name} selected={value.familyId === f.id} onPress={() => set({ familyId: f.id })} testID={`${side}-family-${f.id}`} />
             ))}
           </View>
-          {errors[`${side}.familyId`] ? <AppText tone="danger">⚠ {errors[`${side}.familyId`]}</AppText> : null}
+          <ErrorLine message={errors[`${side}.familyId`]} testID={`${side}-family-error`} />
           <TextField id={`${side}-per-cm3`} label="Doping n" unit="cm⁻³" mono value={value.perCm3} onChangeText={(perCm3) => set({ perCm3 })} error={errors[`${side}.perCm3`]} />
           <TextField id={`${side}-length`} label="Leg length" unit="mm" mono value={value.lengthMm} onChangeText={(lengthMm) => set({ lengthMm })} error={errors[`${side}.lengthMm`]} />
           <TextField id={`${side}-area`} label="Leg area" unit="mm²" mono value={value.areaMm2} onChangeText={(areaMm2) => set({ areaMm2 })} error={errors[`${side}.areaMm2`]} />

@@ -2,13 +2,12 @@ import { StyleSheet, View } from 'react-native';
 import type { ModuleSummary } from '@/shared/api/modules';
 import type { RunSummary } from '@/shared/api/runs';
 import { isFinished } from '@/components/api/runs';
-import { formatDay } from '@/components/format/date';
 import { spacing } from '@/components/theme';
 import { Chip } from '@/components/ui/chip';
 import { Section } from '@/components/ui/form-section';
 import { AppText } from '@/components/ui/text';
 import { maxCompared } from './compare-model';
-import { asObjective, formatObjective, objectiveInfo } from './run-format';
+import { runChoiceLabel } from './run-format';
 
 /** How many recent finished runs the picker offers besides those already chosen. */
 const offeredRuns = 8;
@@ -24,10 +23,6 @@ type Props = {
 const toggled = (list: readonly string[], id: string) =>
   list.includes(id) ? list.filter((x) => x !== id) : list.length < maxCompared ? [...list, id] : [...list];
 
-const runLabel = (r: RunSummary) => {
-  const o = asObjective(r.objective);
-  return `${r.designName} · ${objectiveInfo[o].symbol} ${formatObjective(o, r.best, 3)} · ${formatDay(r.createdAt)}`;
-};
 
 /** What is in the comparison: recent finished runs and saved modules, up to `maxCompared` of each. */
 export function ComparePicker({ runs, modules, runIds, moduleIds, onChange }: Props) {
@@ -39,7 +34,7 @@ export function ComparePicker({ runs, modules, runIds, moduleIds, onChange }: Pr
       <View style={styles.chips} testID="compare-pick-runs">
         {offered.length === 0 ? <AppText tone="muted">No finished runs yet.</AppText> : null}
         {offered.map((r) => (
-          <Chip key={r.id} label={runLabel(r)} selected={runIds.includes(r.id)} onPress={() => onChange({ runIds: toggled(runIds, r.id), moduleIds: [...moduleIds] })} testID={`pick-run-${r.id}`} />
+          <Chip key={r.id} label={runChoiceLabel(r)} selected={runIds.includes(r.id)} onPress={() => onChange({ runIds: toggled(runIds, r.id), moduleIds: [...moduleIds] })} testID={`pick-run-${r.id}`} />
         ))}
       </View>
       <AppText variant="label">Modules</AppText>

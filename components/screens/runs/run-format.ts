@@ -1,5 +1,6 @@
 import type { Objective } from '@/shared/api/designs';
-import type { RunDetail, Sweep } from '@/shared/api/runs';
+import type { RunDetail, RunSummary, Sweep } from '@/shared/api/runs';
+import { formatDay } from '@/components/format/date';
 import { formatNumber, formatScientific, withUnit } from '@/components/format/number';
 
 export type ObjectiveInfo = {
@@ -83,4 +84,10 @@ export function sweepNote(detail: Pick<RunDetail, 'run' | 'design'>): string | n
   const values: Record<SweepParameter, number> = { hotSide: d.hotSide, lengthMm: d.lengthMm, heatLoad: d.heatLoad, maxPerCm3: d.maxPerCm3, minPerCm3: d.minPerCm3 };
   const parameter = (Object.keys(values) as SweepParameter[]).find((p) => values[p] === run.sweepValue);
   return parameter ? `${sweepParameterInfo[parameter].symbol} = ${formatSweepValue(parameter, run.sweepValue)}` : 'a sweep run';
+}
+
+/** A finished run in a picker: "Detector p-leg · ΔT 87.3 K · 1 Dec 2026". */
+export function runChoiceLabel(r: RunSummary): string {
+  const o = asObjective(r.objective);
+  return `${r.designName} · ${objectiveInfo[o].symbol} ${formatObjective(o, r.best, 3)} · ${formatDay(r.createdAt)}`;
 }
