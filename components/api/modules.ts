@@ -1,6 +1,6 @@
 import { useMutation, useQueries, useQuery, useQueryClient } from '@tanstack/react-query';
 import { moduleResponseSchema, modulesResponseSchema, type ModuleCsvVersus, type ModuleInput } from '@/shared/api/modules';
-import { apiBaseUrl, apiGet, apiSend } from './client';
+import { apiBaseUrl, apiCommand, apiGet, apiSend } from './client';
 
 export const modulesQueryKey = ['modules'] as const;
 export const moduleDetailKey = (id: string) => [...modulesQueryKey, 'detail', id] as const;
@@ -40,6 +40,18 @@ export function useSaveModule() {
     mutationFn: ({ id, body }: SaveModuleVariables) =>
       id === null ? apiSend('POST', '/api/modules', { json: body }, moduleResponseSchema) : apiSend('PUT', modulePath(id), { json: body }, moduleResponseSchema),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: modulesQueryKey }),
+  });
+}
+
+/** `DELETE /api/modules/:id`: the module goes; the runs and families it was built from stay. */
+export function useDeleteModule() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (id: string) => apiCommand('DELETE', modulePath(id), { none: true }),
+    onSuccess: (_data, id) => {
+      queryClient.removeQueries({ queryKey: moduleDetailKey(id) });
+      return queryClient.invalidateQueries({ queryKey: modulesQueryKey });
+    },
   });
 }
 

@@ -2,7 +2,7 @@ import { moduleCsvQuerySchema, moduleInputSchema } from '../../shared/api';
 import { actorName, designers, requireTeam } from '../http/access';
 import { route, type RouteSpec } from '../http/route-table';
 import { body, parseOrThrow } from '../http/validate';
-import { getModule, listModules, moduleCurvesCsv, saveModule } from '../services/module-service';
+import { deleteModule, getModule, listModules, moduleCurvesCsv, saveModule } from '../services/module-service';
 import type { DataSource } from 'typeorm';
 import { runReaders } from './design-routes';
 
@@ -20,6 +20,10 @@ export function moduleRoutes(ds: DataSource): RouteSpec[] {
     }),
     route('put', '/modules/:id', designers, body(moduleInputSchema), async (req, res) => {
       res.json({ module: await saveModule(ds, requireTeam(req), actorName(req), res.locals.body, req.params.id) });
+    }),
+    route('delete', '/modules/:id', designers, async (req, res) => {
+      await deleteModule(ds, requireTeam(req), req.params.id);
+      res.status(204).end();
     }),
     route('get', '/modules/:id/curves.csv', runReaders, async (req, res) => {
       const { versus } = parseOrThrow(moduleCsvQuerySchema, req.query);

@@ -100,6 +100,13 @@ export async function saveModule(ds: DataSource, team: Team, by: string, input: 
 
 const f = (v: number | null | undefined): string => (typeof v === 'number' && Number.isFinite(v) ? Number(v.toPrecision(6)).toString() : '');
 
+/** Delete a saved module (runs and families it was built from are untouched). */
+export async function deleteModule(ds: DataSource, team: Team, id: unknown): Promise<void> {
+  await ds.transaction(async (m) => {
+    await m.getRepository(ModuleDesign).remove(await findModule(m, team, id));
+  });
+}
+
 const csvRows = (curve: { currents: number[]; heatLoad: number[]; heatRejected: number[]; voltage: number[]; power: number[]; cop: (number | null)[]; overLimit: boolean[] }, first?: number[]) =>
   curve.currents.map((i, k) => [...(first ? [f(first[k])] : []), f(i), f(curve.heatLoad[k]), f(curve.heatRejected[k]), f(curve.voltage[k]), f(curve.power[k]), f(curve.cop[k]), curve.overLimit[k] ? 'yes' : 'no'].join(','));
 

@@ -358,6 +358,21 @@ describe('a physicist opens a run’s curves, builds a module and exports its CS
     await phone.close();
   });
 
+  it('deletes the module from its page after a second, explicit step', async () => {
+    const page = await physicist.newPage('phone');
+    await page.goto(`${baseUrl}/modules/${moduleId}`);
+    await visible(page.getByTestId('module-delete')).click({ timeout: 60_000 });
+    await visible(page.getByTestId('confirm-delete-module')).waitFor();
+    await saveScreenshot(page, 'module-flow-delete-confirm-phone');
+    await visible(page.getByTestId('confirm-delete-module')).getByTestId('confirm').click();
+    await page.waitForURL(`${baseUrl}/modules`);
+    await visible(page.getByRole('list', { name: 'Modules' })).waitFor({ timeout: 60_000 });
+    expect(await page.getByTestId(`module-row-${moduleId}`).count()).toBe(0);
+    // The run it was built from is still there.
+    expect(runDetailSchema.parse(await getJsonAs(physicist, `/api/runs/${runId}`)).run.state).toBe('succeeded');
+    await page.close();
+  });
+
   it('raised no uncaught errors in the page', () => {
     expect(physicist.pageErrors).toEqual([]);
   });

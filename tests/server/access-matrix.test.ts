@@ -79,6 +79,7 @@ const policy: Record<string, 'public' | Role[]> = {
   'POST /modules': designers,
   'GET /modules/:id': runReaders,
   'PUT /modules/:id': designers,
+  'DELETE /modules/:id': designers,
   'GET /modules/:id/curves.csv': runReaders,
 };
 
@@ -151,6 +152,7 @@ it('a member of another team gets 404 for every object of this team, and nothing
     const res = await call(outsider, s, `/api${s.path.replace(':id', ids[prefix]!).replace(':version', '1')}`);
     expect(`${key(s)} → ${res.status}`).toBe(`${key(s)} → 404`);
   }
+  expect((await lab.get(`/api/modules/${moduleId}`)).status).toBe(200);
   const after = await lab.get(`/api/families/${family.id}`);
   expect(after.body.family).toMatchObject({ version: family.version, archived: false, name: family.name });
   expect((await ctx.ds.query('SELECT role FROM app_user WHERE id = $1', [viewer.id]))[0].role).toBe('viewer');

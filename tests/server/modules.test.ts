@@ -81,3 +81,19 @@ it('exports the curve versus ΔT as CSV: ΔT rising to the module’s ΔTmax, Qc
   expect(bad.status).toBe(400);
   expect(bad.body.errors[0]).toEqual({ field: 'versus', message: 'versus must be "current" or "deltaT"' });
 });
+
+it('deletes a module for a physicist, not for a viewer, leaving its sources untouched', async () => {
+  const api = await signedIn(ctx, demo.physicist);
+  const families = (await api.get('/api/families')).body.families as Array<{ id: string; name: string }>;
+  const p = families.find((f) => f.name.startsWith('NL-P7 (Bi,Sb)'))!;
+  const n = families.find((f) => f.name.startsWith('NL-N3'))!;
+  const leg = (familyId: string) => ({ kind: 'family', familyId, perCm3: 2e19, lengthMm: 1.5, areaMm2: 1 });
+  const saved = await api.post('/api/modules').send({ name: `Short-lived ${Date.now()}`, p: leg(p.id), n: leg(n.id), hotSide: 300, deltaT: 20 });
+  expect(saved.status).toBe(201);
+  const id = saved.body.module.id as string;
+  expect((await (await signedIn(ctx, demo.viewer)).delete(`/api/modules/${id}`)).status).toBe(403);
+  expect((await api.delete(`/api/modules/${id}`)).status).toBe(204);
+  expect((await api.get(`/api/modules/${id}`)).status).toBe(404);
+  expect((await api.delete(`/api/modules/${id}`)).status).toBe(404);
+  expect((await api.get(`/api/families/${p.id}`)).status).toBe(200);
+});

@@ -1,9 +1,12 @@
+import { StyleSheet, View } from 'react-native';
 import { router, useLocalSearchParams } from 'expo-router';
 import { useModuleDetail } from '@/components/api/modules';
 import { compareHref } from '@/components/screens/runs/compare-model';
 import { ScreenFrame } from '@/components/shell/screen-frame';
+import { spacing } from '@/components/theme';
 import { LinkButton } from '@/components/ui/link-button';
 import { ErrorState, LoadingState } from '@/components/ui/state-views';
+import { DeleteModule } from './delete-module';
 import { ModuleEditor } from './module-editor';
 import { defaultModuleText, textFrom } from './module-form-model';
 
@@ -26,7 +29,12 @@ export function ModuleScreen() {
   const m = query.data?.module;
   return (
     <ScreenFrame title={m?.name ?? 'Module'} subtitle="Module: Qc, COP, voltage and current versus current and ΔT" back={back}>
-      {m ? <LinkButton variant="quiet" label="Compare with runs or modules" href={compareHref([], [m.id])} testID="module-compare" /> : null}
+      {m ? (
+        <View style={styles.actions}>
+          <LinkButton variant="quiet" label="Compare with runs or modules" href={compareHref([], [m.id])} testID="module-compare" />
+          <DeleteModule module={m} />
+        </View>
+      ) : null}
       {m ? (
         <ModuleEditor key={m.updatedAt} initial={textFrom(m.input)} saved={m} onSaved={() => void query.refetch()} />
       ) : query.isError ? (
@@ -37,3 +45,7 @@ export function ModuleScreen() {
     </ScreenFrame>
   );
 }
+
+const styles = StyleSheet.create({
+  actions: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: spacing.md },
+});

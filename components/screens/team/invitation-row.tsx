@@ -9,8 +9,8 @@ import { formatDay } from '@/components/format/date';
 import { colors, spacing } from '@/components/theme';
 import { Glyph, type GlyphName } from '@/components/ui/glyph';
 import { AppText } from '@/components/ui/text';
-import { ConfirmBox } from './confirm-box';
-import { RowButton } from './row-button';
+import { ConfirmBox } from '@/components/ui/confirm-box';
+import { RowButton } from '@/components/ui/row-button';
 
 type State = Invitation['state'];
 

@@ -8,7 +8,7 @@ import { useAccountForm } from '@/components/auth/form/use-account-form';
 import { spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';
 import { RolePicker } from './role-picker';
-import { RowButton } from './row-button';
+import { RowButton } from '@/components/ui/row-button';
 
 const fields = ['email', 'role'] as const;
 

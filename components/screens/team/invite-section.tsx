@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { useIsWide } from '@/components/shell/use-is-wide';
 import { InviteForm } from './invite-form';
-import { RowButton } from './row-button';
+import { RowButton } from '@/components/ui/row-button';
 import { Section as TeamSection } from '@/components/ui/form-section';
 
 /**

@@ -6,7 +6,7 @@ import { FormAlert } from '@/components/auth/form/form-alert';
 import { errorsFrom } from '@/components/auth/form/form-errors';
 import { spacing } from '@/components/theme';
 import { RolePicker } from './role-picker';
-import { RowButton } from './row-button';
+import { RowButton } from '@/components/ui/row-button';
 
 /** Admins: pick a new role for a member; the API refuses (409) to leave the team without an admin. */
 export function MemberRoleEditor({ member, onDone }: { member: Member; onDone: () => void }) {

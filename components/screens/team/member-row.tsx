@@ -9,9 +9,9 @@ import { RoleBadge } from '@/components/auth/role-badge';
 import { formatDay } from '@/components/format/date';
 import { colors, spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';
-import { ConfirmBox } from './confirm-box';
+import { ConfirmBox } from '@/components/ui/confirm-box';
 import { MemberRoleEditor } from './member-role-editor';
-import { RowButton } from './row-button';
+import { RowButton } from '@/components/ui/row-button';
 
 type Mode = 'view' | 'role' | 'remove';
 

@@ -1,6 +1,6 @@
 import { Pressable, StyleSheet } from 'react-native';
 import { colors, radii, spacing } from '@/components/theme';
-import { AppText } from '@/components/ui/text';
+import { AppText } from './text';
 
 export type RowButtonTone = 'primary' | 'quiet' | 'danger';
 

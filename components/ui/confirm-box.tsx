@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { colors, radii, spacing } from '@/components/theme';
-import { Glyph } from '@/components/ui/glyph';
-import { AppText } from '@/components/ui/text';
+import { Glyph } from './glyph';
+import { AppText } from './text';
 import { RowButton } from './row-button';
 
 export type ConfirmBoxProps = {
@@ -38,6 +38,8 @@ export function ConfirmBox(props: ConfirmBoxProps) {
 
 const styles = StyleSheet.create({
   box: {
+    // Its own full-width line, also inside a wrapping row of actions.
+    width: '100%',
     gap: spacing.sm,
     padding: spacing.md,
     borderRadius: radii.md,
