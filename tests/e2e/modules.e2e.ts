@@ -239,6 +239,10 @@ describe('a physicist opens a run’s curves, builds a module and exports its CS
     await saveScreenshot(page, 'module-flow-saved-marked-desktop');
     await visible(page.getByTestId('module-plot-heatLoad')).scrollIntoViewIfNeeded();
     await saveScreenshot(page, 'module-flow-saved-plots-desktop');
+    // Versus ΔT (each ΔT at its own max-Qc current): the first series' colour is drawn, and ΔTmax is stated.
+    expect(await waitForDrawnChart(page, visible(page.getByTestId('module-plot-deltaT')), 40, 60_000, 'glacier')).toBeGreaterThanOrEqual(40);
+    expect(await page.getByText(/reaches ΔTmax = [\d.]+\sK at [\d.]+\sA/).count()).toBeGreaterThan(0);
+    await saveScreenshot(page, 'module-flow-saved-delta-t-desktop');
     await trade.scrollIntoViewIfNeeded();
     await saveScreenshot(page, 'module-flow-saved-trade-desktop');
     await page.close();
