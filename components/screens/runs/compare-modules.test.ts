@@ -37,4 +37,15 @@ describe('module comparison', () => {
     expect(moduleCompareRows([m]).find((r) => r.key === 'problem')?.cells[0]).toMatch(/\S/);
     expect(moduleCompareSeries([m], 'heatLoad')).toEqual([]);
   });
+
+  it('computes a fetched module once, and again when the module changes', () => {
+    const saved = moduleDesign(idA, 'Stage', 4);
+    const [first] = comparedModules([saved]);
+    const [again] = comparedModules([saved]);
+    expect(again.curve).toBe(first.curve);
+    const edited = { ...saved, case: { ...saved.case, couples: 8 } };
+    const [changed] = comparedModules([edited]);
+    expect(changed.curve).not.toBe(first.curve);
+    expect(changed.curve!.maxHeatLoad.heatLoad / first.curve!.maxHeatLoad.heatLoad).toBeCloseTo(2, 6);
+  });
 });

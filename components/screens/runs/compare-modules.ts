@@ -14,15 +14,27 @@ export type ComparedModule = { module: ModuleDesign; label: string; curve: Opera
  * tens of milliseconds per module, so four fit in one render.
  */
 export function comparedModules(modules: ModuleDesign[]): ComparedModule[] {
-  return modules.map((module, i) => {
-    const label = `Module ${i + 1}`;
-    try {
-      const c = parseModuleCase(module.case);
-      return { module, label, curve: moduleCurve(c.module, c.conditions, c.options), problem: null };
-    } catch (error) {
-      return { module, label, curve: null, problem: error instanceof Error ? error.message : String(error) };
-    }
-  });
+  return modules.map((module, i) => ({ module, label: `Module ${i + 1}`, ...curveOf(module) }));
+}
+
+/**
+ * One computation per fetched module: React Query hands back the same object
+ * until the module changes, so re-renders (focus, refetch) cost nothing.
+ */
+const computed = new WeakMap<ModuleDesign, Pick<ComparedModule, 'curve' | 'problem'>>();
+
+function curveOf(module: ModuleDesign): Pick<ComparedModule, 'curve' | 'problem'> {
+  const known = computed.get(module);
+  if (known) return known;
+  let out: Pick<ComparedModule, 'curve' | 'problem'>;
+  try {
+    const c = parseModuleCase(module.case);
+    out = { curve: moduleCurve(c.module, c.conditions, c.options), problem: null };
+  } catch (error) {
+    out = { curve: null, problem: error instanceof Error ? error.message : String(error) };
+  }
+  computed.set(module, out);
+  return out;
 }
 
 type Row = { key: string; label: string; cells: string[] };
