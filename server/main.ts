@@ -19,6 +19,11 @@ async function main(): Promise<void> {
   const { auth, pool } = createAuth(env);
   const app = createApp({ env, ds, boss, mailer, auth, version });
   const server = createServer(app);
+  // Node closes an idle keep-alive socket after 5 s; a client that reuses it at
+  // that moment gets ECONNRESET. Idle sockets stay longer than the usual
+  // client (and proxy) pools keep them, so the server is never the one to race.
+  server.keepAliveTimeout = 65_000;
+  server.headersTimeout = 66_000;
   const realtime = await attachRealtime(server, { auth, databaseUrl: env.databaseUrl, appOrigin: env.appOrigin, allowLoopback: !env.production }, watchRules(ds));
   server.listen(env.port, env.host, () => console.log(`[api] listening on http://${env.host}:${env.port}`));
   let stopping = false;
