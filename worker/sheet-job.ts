@@ -1,8 +1,9 @@
 import { join } from 'node:path';
-import { Worker } from 'node:worker_threads';
 import type { DataSource } from 'typeorm';
 import type { GrowthSheet } from '../shared/growth/growth-sheet';
 import { publishEvent } from '../server/realtime/events';
+import { runInThread } from '../server/threads/run-in-thread';
+import type { SheetThreadInput } from './sheet-thread';
 
 /** Zones tried on every sheet; a grower rarely makes more. */
 const MAX_ZONES = 12;
@@ -22,11 +23,11 @@ export async function sheetJob(ds: DataSource, orderId: string): Promise<string>
   const options = { lengthMm: Number(o.design_snapshot.lengthMm), minZoneMm: Number(o.design_snapshot.minZoneMm ?? 0), maxZones: MAX_ZONES, lossBudget: o.loss_budget, measureTemperature: o.measure_temperature };
   const continuous = { ...o.result.doping, value: o.result.objective.value, deltaT: o.result.deltaT };
   const t0 = Date.now();
-  const out = await new Promise<{ ok: true; sheet: GrowthSheet } | { ok: false; message: string }>((resolve) => {
-    const thread = new Worker(join(__dirname, 'sheet-thread.ts'), { execArgv: ['--require', 'tsx/cjs'], workerData: { caseJson: o.case_json, continuous, options } });
-    thread.once('message', resolve);
-    thread.once('error', (err) => resolve({ ok: false, message: err.message }));
-  });
+  const input: SheetThreadInput = { caseJson: o.case_json, continuous, options };
+  const out = await runInThread<GrowthSheet>(join(__dirname, 'sheet-thread.ts'), input).then(
+    (sheet) => ({ ok: true as const, sheet }),
+    (err: Error) => ({ ok: false as const, message: err.message }),
+  );
   const [, written]: [unknown, number] = out.ok
     ? await ds.query(`UPDATE growth_order SET sheet = $2, sheet_status = 'ready', sheet_error = NULL, updated_at = now() WHERE id = $1 AND loss_budget = $3 AND measure_temperature = $4`, [o.id, JSON.stringify(out.sheet), o.loss_budget, o.measure_temperature])
     : await ds.query(`UPDATE growth_order SET sheet_status = 'failed', sheet_error = $2, updated_at = now() WHERE id = $1`, [o.id, `the zoning could not be computed: ${out.message}`]);

@@ -1,10 +1,13 @@
+import { join } from 'node:path';
 import type PgBoss from 'pg-boss';
 import type { DataSource, EntityManager } from 'typeorm';
 import type { z } from 'zod';
 import type { GrowthOrderDetail, GrowthOrderDto, closeOrderSchema, growthStateChangeSchema, releaseRequestSchema, sheetSettingsSchema } from '../../shared/api';
 import { growerStates } from '../../shared/api';
 import type { GrowthSheet } from '../../shared/growth/growth-sheet';
-import { reportMeasurements } from '../../shared/growth/measurement-report';
+import type { MeasurementReport } from '../../shared/growth/measurement-report';
+import { runInThread } from '../threads/run-in-thread';
+import type { ReportThreadInput } from './report-thread';
 import { parseMeasurementsCsv } from '../../shared/growth/parse-measurements';
 import { GrowthOrder, Run, Team } from '../db/entities';
 import { HttpError, NotFoundError, ValidationError } from '../http/errors';
@@ -147,7 +150,8 @@ export async function uploadMeasurements(d: GrowthDeps, team: Team, actor: Actor
   const parsed = parseMeasurementsCsv(uploadText(file()), sheet.lengthMm);
   if (!parsed.ok) throw new ValidationError(parsed.errors.map((e) => ({ field: ['file', e.line ? `line ${e.line}` : '', e.column ?? ''].filter(Boolean).join(':'), message: e.message })));
   const t = temperature ?? o.measureTemperature;
-  const report = { ...reportMeasurements(run.caseJson, sheet, o.zones, parsed.points, t), uploadWarnings: parsed.warnings };
+  const input: ReportThreadInput = { caseJson: run.caseJson, sheet, zones: o.zones, points: parsed.points, temperature: t };
+  const report = { ...(await runInThread<MeasurementReport>(join(__dirname, 'report-thread.ts'), input)), uploadWarnings: parsed.warnings };
   await d.ds.transaction(async (m) => {
     await m.query('INSERT INTO growth_measurement (order_id, uploaded_by, temperature, points, prediction) VALUES ($1, $2, $3, $4, $5)', [o.id, actor.displayName, t, JSON.stringify(parsed.points), JSON.stringify(report)]);
     await event(m, o.id, actor.displayName, 'measured', null, null, `${parsed.points.length} positions uploaded`);
