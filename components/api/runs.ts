@@ -6,6 +6,7 @@ import {
   runsResponseSchema,
   sweepSchema,
   type RunState,
+  type RunSummary,
   type SweepRequest,
 } from '@/shared/api/runs';
 import { apiBaseUrl, apiGet, apiSend } from './client';
@@ -27,6 +28,9 @@ export const sweepEnvelopeSchema = z.object({ sweep: sweepSchema });
 /** States after which a run changes no more. */
 export const finishedStates: readonly RunState[] = ['succeeded', 'failed', 'cancelled'];
 export const isFinished = (state: RunState) => finishedStates.includes(state);
+
+/** A finished run that kept a design (succeeded, or cancelled with a best so far): one to compare or build on. */
+export const hasResult = (r: Pick<RunSummary, 'state' | 'best'>) => isFinished(r.state) && r.best !== null;
 
 function listPath(filter: RunFilter): string {
   const query = new URLSearchParams();

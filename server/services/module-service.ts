@@ -1,7 +1,7 @@
 import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { z } from 'zod';
 import type { LegSource, ModuleCsvVersus, ModuleDesign as ModuleDto, ModuleSummary, moduleInputSchema } from '../../shared/api';
-import { CaseError, legsFromRun, moduleCurve, moduleDeltaTCurve, parseModuleCase, type LegDefinitionInput, type RunResultLegs } from '../../shared/engine';
+import { CaseError, legsFromRun, moduleCurve, moduleDeltaTCurve, parseModuleCase, type CurveSamples, type LegDefinitionInput, type RunResultLegs } from '../../shared/engine';
 import { MaterialFamily, ModuleDesign, Run, Team } from '../db/entities';
 import { NotFoundError, ValidationError } from '../http/errors';
 import { isUuid } from '../http/validate';
@@ -107,7 +107,8 @@ export async function deleteModule(ds: DataSource, team: Team, id: unknown): Pro
   });
 }
 
-const csvRows = (curve: { currents: number[]; heatLoad: number[]; heatRejected: number[]; voltage: number[]; power: number[]; cop: (number | null)[]; overLimit: boolean[] }, first?: number[]) =>
+/** One CSV line per sample, with `first` (the ΔT of each sample) in front when given. */
+const csvRows = (curve: CurveSamples, first?: number[]) =>
   curve.currents.map((i, k) => [...(first ? [f(first[k])] : []), f(i), f(curve.heatLoad[k]), f(curve.heatRejected[k]), f(curve.voltage[k]), f(curve.power[k]), f(curve.cop[k]), curve.overLimit[k] ? 'yes' : 'no'].join(','));
 
 /** The module's curve versus current (at its ΔT) or versus ΔT (each at its max-Qc current) as CSV, computed now with the engine. */

@@ -12,25 +12,18 @@
 import { CaseError } from './case-error';
 import type { DevicePoint, DeviceSolver } from './device';
 import { maxDeltaTPoint, maxHeatLoadPoint } from './device-optima';
-import { flagged, type OperatingPoint } from './operating-curve';
+import { flagged, type CurveSamples, type OperatingPoint } from './operating-curve';
 
 export type DeltaTMode = 'fixedCurrent' | 'maxHeatLoadCurrent';
 
-export type DeltaTCurve = {
+export type DeltaTCurve = CurveSamples & {
   /** Which current each point is at: the given one, or that ΔT's current of maximum Qc. */
   mode: DeltaTMode;
   hotSide: number;
   /** The end of the curve: the largest ΔT [K] (Qc = 0) and the device there. */
   deltaTMax: OperatingPoint;
+  /** The ΔT [K] of each sample. */
   deltaT: number[];
-  currents: number[];
-  heatLoad: number[];
-  heatRejected: number[];
-  voltage: number[];
-  power: number[];
-  cop: (number | null)[];
-  overLimit: boolean[];
-  currentLimit: number | null;
   evaluations: number;
 };
 

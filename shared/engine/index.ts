@@ -42,7 +42,7 @@ export { contactResistivitySchema } from './case-schema';
 export { operatingCurve, coupleCurve, moduleCurve, moduleDeltaTCurve, moduleTrade, legFromDefinition, defaultTradeCouples } from './module';
 export type { LegDefinition, CoupleDefinition, ModuleDefinition, TradeOptions, TradeRow, ModuleTrade } from './module';
 export { DEFAULT_CURVE_POINTS } from './operating-curve';
-export type { CurveConditions, CurveOptions, OperatingCurve, OperatingPoint } from './operating-curve';
+export type { CurveConditions, CurveOptions, CurveSamples, OperatingCurve, OperatingPoint } from './operating-curve';
 export { DEFAULT_DELTA_T_POINTS } from './delta-t-curve';
 export type { DeltaTCurve, DeltaTMode, DeltaTOptions } from './delta-t-curve';
 export type { DevicePoint } from './device';

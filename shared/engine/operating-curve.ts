@@ -48,25 +48,28 @@ export type CurveOptions = {
   tolerance?: number;
 };
 
-export type OperatingCurve = {
-  hotSide: number;
-  coldSide: number;
-  deltaT: number;
-  /** [I_min, I_max] [A]: the currents at which the device pumps heat (Qc ≥ 0) at this ΔT. */
-  pumpingRange: [number, number];
-  /** Sampled currents [A] and the curves there. */
+/** A device sampled along a curve: the current [A] at each sample and the device there (W, V, W, –). */
+export type CurveSamples = {
   currents: number[];
   heatLoad: number[];
   heatRejected: number[];
   voltage: number[];
   power: number[];
   cop: (number | null)[];
-  /** Junction temperatures [K] at the samples; only when a plate resistance is set. */
-  coldJunction?: number[];
-  hotJunction?: number[];
   /** Per sample: the current exceeds currentLimit (all false without a limit). */
   overLimit: boolean[];
   currentLimit: number | null;
+};
+
+export type OperatingCurve = CurveSamples & {
+  hotSide: number;
+  coldSide: number;
+  deltaT: number;
+  /** [I_min, I_max] [A]: the currents at which the device pumps heat (Qc ≥ 0) at this ΔT. */
+  pumpingRange: [number, number];
+  /** Junction temperatures [K] at the samples; only when a plate resistance is set. */
+  coldJunction?: number[];
+  hotJunction?: number[];
   /** The current of maximum Qc and the device there. */
   maxHeatLoad: OperatingPoint;
   /** The current of maximum COP and the device there; null at ΔT = 0 (no maximum). */

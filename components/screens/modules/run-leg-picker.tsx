@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import type { RunSummary } from '@/shared/api/runs';
 import { useDesigns } from '@/components/api/designs';
-import { isFinished, useRuns } from '@/components/api/runs';
+import { hasResult, useRuns } from '@/components/api/runs';
 import { runChoiceLabel } from '@/components/screens/runs/run-format';
 import { spacing } from '@/components/theme';
 import { Chip } from '@/components/ui/chip';
@@ -21,7 +21,7 @@ export function RunLegPicker({ side, runId, onPick, error }: Props) {
   const runs = useRuns();
   const designs = useDesigns();
   const carrierOf = new Map((designs.data?.designs ?? []).map((d) => [d.id, d.carrier]));
-  const fits = (r: RunSummary) => isFinished(r.state) && r.best !== null && [side, null].includes(carrierOf.get(r.designId) ?? null);
+  const fits = (r: RunSummary) => hasResult(r) && [side, null].includes(carrierOf.get(r.designId) ?? null);
   const all = runs.data?.runs ?? [];
   const chosen = all.find((r) => r.id === runId);
   const choices = [...(chosen ? [chosen] : []), ...all.filter((r) => r.id !== runId && fits(r)).slice(0, offered)];

@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import type { ModuleSummary } from '@/shared/api/modules';
 import type { RunSummary } from '@/shared/api/runs';
-import { isFinished } from '@/components/api/runs';
+import { hasResult } from '@/components/api/runs';
 import { spacing } from '@/components/theme';
 import { Chip } from '@/components/ui/chip';
 import { Section } from '@/components/ui/form-section';
@@ -26,7 +26,7 @@ const toggled = (list: readonly string[], id: string) =>
 
 /** What is in the comparison: recent finished runs and saved modules, up to `maxCompared` of each. */
 export function ComparePicker({ runs, modules, runIds, moduleIds, onChange }: Props) {
-  const finished = runs.filter((r) => isFinished(r.state) && r.best !== null);
+  const finished = runs.filter(hasResult);
   const offered = [...finished.filter((r) => runIds.includes(r.id)), ...finished.filter((r) => !runIds.includes(r.id)).slice(0, offeredRuns)];
   return (
     <Section title="In this comparison" hint={`Up to ${maxCompared} runs and ${maxCompared} modules; at least two things in all.`}>

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { RunSummary } from '@/shared/api/runs';
-import { isFinished, useRuns } from '@/components/api/runs';
+import { hasResult, isFinished, useRuns } from '@/components/api/runs';
 import { useLiveRuns } from '@/components/realtime/use-live-runs';
 import { ScreenFrame } from '@/components/shell/screen-frame';
 import { spacing } from '@/components/theme';
@@ -22,7 +22,6 @@ const filters: Array<{ key: Filter; label: string }> = [
 
 const keep = (filter: Filter) => (r: RunSummary) => filter === 'all' || (filter === 'active') !== isFinished(r.state);
 /** Only runs with a result can be compared. */
-const comparable = (r: RunSummary) => isFinished(r.state) && r.best !== null;
 
 function CompareBar({ selected, onClear }: { selected: string[]; onClear: () => void }) {
   const n = selected.length;
@@ -75,7 +74,7 @@ export function RunsScreen() {
                 live={live.progress[r.id]}
                 showDesign
                 sweepLabel={r.sweepId ? 'Part of a sweep' : undefined}
-                selection={comparable(r) ? { selected: selected.includes(r.id), onToggle: () => toggle(r.id) } : undefined}
+                selection={hasResult(r) ? { selected: selected.includes(r.id), onToggle: () => toggle(r.id) } : undefined}
               />
             </View>
           ))}
