@@ -2,6 +2,8 @@ import { mkdtempSync, mkdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { chromium, type BrowserContext, type Locator, type Page } from 'playwright-core';
+import { familiesResponseSchema } from '../../shared/api/families';
+import { runDetailSchema } from '../../shared/api/runs';
 
 /** Where the app under test is served (API and web build at one origin). */
 export const baseUrl = (process.env.FROSTGRADE_E2E_URL ?? 'http://127.0.0.1:8341').replace(/\/+$/, '');
@@ -211,4 +213,41 @@ export function linkIn(text: string, path: string): string {
   const found = text.match(new RegExp(`https?://[^\\s]+${path}\\?token=[A-Za-z0-9_-]+`));
   if (!found) throw new Error(`no ${path} link in: ${text}`);
   return found[0];
+}
+
+/** The first visible match: screens render the phone and the wide layout, one of them hidden. */
+export const visible = (locator: Locator) => locator.filter({ visible: true }).first();
+
+/** Polls `probe` every half second until it returns a value; fails naming `what` after `seconds`. */
+export async function eventually<T>(probe: () => Promise<T | undefined>, seconds: number, what: string): Promise<T> {
+  const deadline = Date.now() + seconds * 1000;
+  for (;;) {
+    const value = await probe();
+    if (value !== undefined) return value;
+    if (Date.now() > deadline) throw new Error(`timed out after ${seconds} s waiting for ${what}`);
+    await new Promise((r) => setTimeout(r, 500));
+  }
+}
+
+/** The demo p-type band-model family (README, "Demo lab"). */
+export const demoPFamilyName = /^NL-P7 \(Bi,Sb\)₂Te₃-like, p-type band model$/;
+
+/**
+ * A one-start run of the demo p family on a 1.5 mm × 1 mm² leg, launched
+ * through the API and awaited until it has succeeded; returns the run's id.
+ */
+export async function convergedRun(session: BrowserSession, design: { name: string; controlPoints: number; minZoneMm?: number }, seconds = 420): Promise<string> {
+  const { families } = familiesResponseSchema.parse(await getJsonAs(session, '/api/families'));
+  const family = families.find((f) => demoPFamilyName.test(f.name));
+  if (!family) throw new Error('the demo p-type band-model family is missing');
+  const created = (await postJsonAs(session, '/api/designs', {
+    ...design, familyId: family.id, lengthMm: 1.5, areaMm2: 1, hotSide: 300, minPerCm3: 1e18, maxPerCm3: 1e20, starts: 1,
+  })) as { design: { id: string } };
+  const { run } = (await postJsonAs(session, `/api/designs/${created.design.id}/runs`, {})) as { run: { id: string } };
+  await eventually(async () => {
+    const d = runDetailSchema.parse(await getJsonAs(session, `/api/runs/${run.id}`));
+    if (d.run.state === 'failed' || d.run.state === 'cancelled') throw new Error(`the run ${d.run.state}`);
+    return d.run.state === 'succeeded' ? true : undefined;
+  }, seconds, 'the run to converge');
+  return run.id;
 }

@@ -2,58 +2,21 @@ import { execFileSync } from 'node:child_process';
 import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import type { Locator, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { growthOrderDetailSchema } from '../../shared/api/growth';
-import { familiesResponseSchema } from '../../shared/api/families';
 import { runDetailSchema } from '../../shared/api/runs';
 import { familyFromMaterial, propertiesAt, type MaterialInput } from '../../shared/engine';
 import type { GrowthSheet } from '../../shared/growth/growth-sheet';
 import type { MeasurementReport } from '../../shared/growth/measurement-report';
-import { baseUrl, getJsonAs, openBrowser, saveScreenshot, screenshotDir, signInAs, waitForDrawnChart, type BrowserSession } from './browser';
+import { baseUrl, convergedRun, getJsonAs, openBrowser, saveScreenshot, screenshotDir, signInAs, visible, waitForDrawnChart, type BrowserSession } from './browser';
 
 jest.setTimeout(420_000);
 
-const familyName = /^NL-P7 \(Bi,Sb\)₂Te₃-like, p-type band model$/;
 /** The zone grown off target on purpose, and by how much (3× the target doping: far above its band). */
 const offZone = 1;
 const offFactor = 3;
 
-const visible = (locator: Locator) => locator.filter({ visible: true }).first();
-
-async function eventually<T>(probe: () => Promise<T | undefined>, seconds: number, what: string): Promise<T> {
-  const deadline = Date.now() + seconds * 1000;
-  for (;;) {
-    const value = await probe();
-    if (value !== undefined) return value;
-    if (Date.now() > deadline) throw new Error(`timed out after ${seconds} s waiting for ${what}`);
-    await new Promise((r) => setTimeout(r, 500));
-  }
-}
-
 /** POST JSON with the session's cookie and the app's Origin (writes must carry it). */
-async function postAs(session: BrowserSession, path: string, data: unknown): Promise<unknown> {
-  const response = await session.context.request.post(`${baseUrl}${path}`, { data, headers: { Origin: baseUrl } });
-  if (!response.ok()) throw new Error(`POST ${path} answered ${response.status()}: ${await response.text()}`);
-  return response.json();
-}
-
-/** A one-start run of the demo p-type family, converged by the stack's worker. */
-async function convergedRun(physicist: BrowserSession, name: string): Promise<string> {
-  const { families } = familiesResponseSchema.parse(await getJsonAs(physicist, '/api/families'));
-  const family = families.find((f) => familyName.test(f.name));
-  if (!family) throw new Error('the demo p-type band-model family is missing');
-  const design = (await postAs(physicist, '/api/designs', {
-    name, familyId: family.id, lengthMm: 1.5, areaMm2: 1, hotSide: 300, minPerCm3: 1e18, maxPerCm3: 1e20, controlPoints: 6, starts: 1, minZoneMm: 0.2,
-  })) as { design: { id: string } };
-  const { run } = (await postAs(physicist, `/api/designs/${design.design.id}/runs`, {})) as { run: { id: string } };
-  await eventually(async () => {
-    const d = runDetailSchema.parse(await getJsonAs(physicist, `/api/runs/${run.id}`));
-    if (d.run.state === 'failed' || d.run.state === 'cancelled') throw new Error(`the run ${d.run.state}`);
-    return d.run.state === 'succeeded' ? true : undefined;
-  }, 180, 'the run to converge');
-  return run.id;
-}
-
 /**
  * Room-temperature S (µV/K) and σ (S/cm) every 0.1 mm along the leg, from
  * the family at each zone's target doping, with one zone grown `offFactor`
@@ -136,7 +99,7 @@ describe('growth hand-off in a real browser: release, print, grow, measure, judg
   });
 
   it('the physicist releases a converged run from its page', async () => {
-    runId = await convergedRun(physicist, `Growth browser leg ${stamp}`);
+    runId = await convergedRun(physicist, { name: `Growth browser leg ${stamp}`, controlPoints: 6, minZoneMm: 0.2 }, 180);
     const page = await physicist.newPage('desktop');
     await page.goto(`${baseUrl}/runs/${runId}`);
     const release = visible(page.getByRole('button', { name: 'Release to grower' }));

@@ -1,17 +1,19 @@
 import { readFileSync } from 'node:fs';
 import { parse } from 'csv-parse/sync';
-import type { Locator, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { familiesResponseSchema } from '../../shared/api/families';
 import { moduleResponseSchema } from '../../shared/api/modules';
 import { runDetailSchema } from '../../shared/api/runs';
 import { legsFromRun, parseCurvesCase, parseModuleCase, runCurves, runModule, type RunResultLegs } from '../../shared/engine';
 import {
   baseUrl,
+  convergedRun,
+  demoPFamilyName,
   getJsonAs,
   openBrowser,
-  postJsonAs,
   saveScreenshot,
   signInAs,
+  visible,
   waitForDrawnChart,
   waitForVisibleText,
   type BrowserSession,
@@ -20,24 +22,11 @@ import {
 // A one-start run takes tens of seconds on a quiet machine, minutes on a loaded 2-core one.
 jest.setTimeout(600_000);
 
-/** The demo families (README, "Demo lab"). */
-const pFamilyName = /^NL-P7 .*p-type band model$/;
+/** The demo n family (README, "Demo lab"); the p leg is the demo p family's run. */
 const nFamilyName = /^NL-N3 .*n-type band model$/;
 /** The n leg: the demo n family at uniform doping, and the module's couple count. */
 const nDoping = '2e19';
 const couples = 31;
-
-const visible = (locator: Locator) => locator.filter({ visible: true }).first();
-
-async function eventually<T>(probe: () => Promise<T | undefined>, seconds: number, what: string): Promise<T> {
-  const deadline = Date.now() + seconds * 1000;
-  for (;;) {
-    const value = await probe();
-    if (value !== undefined) return value;
-    if (Date.now() > deadline) throw new Error(`timed out after ${seconds} s waiting for ${what}`);
-    await new Promise((r) => setTimeout(r, 500));
-  }
-}
 
 /** A number as the tables show it (plain, "(over the limit)" may follow); scientific notation is refused, not guessed. */
 function shownNumber(text: string): number {
@@ -80,20 +69,10 @@ describe('a physicist opens a run’s curves, builds a module and exports its CS
 
   it('converges a short run of the demo p family through the API', async () => {
     const { families } = familiesResponseSchema.parse(await getJsonAs(physicist, '/api/families'));
-    const p = families.find((f) => pFamilyName.test(f.name));
     const n = families.find((f) => nFamilyName.test(f.name));
-    if (!p || !n) throw new Error('the demo NL-P7 / NL-N3 band-model families are missing');
+    if (!n) throw new Error('the demo NL-N3 band-model family is missing');
     nFamilyId = n.id;
-    const { design } = (await postJsonAs(physicist, '/api/designs', {
-      name: `Module browser leg ${stamp}`, familyId: p.id, lengthMm: 1.5, areaMm2: 1, hotSide: 300, minPerCm3: 1e18, maxPerCm3: 1e20, controlPoints: 4, starts: 1,
-    })) as { design: { id: string } };
-    const { run } = (await postJsonAs(physicist, `/api/designs/${design.id}/runs`, {})) as { run: { id: string } };
-    runId = run.id;
-    const state = await eventually(async () => {
-      const d = runDetailSchema.parse(await getJsonAs(physicist, `/api/runs/${runId}`));
-      return ['succeeded', 'failed', 'cancelled'].includes(d.run.state) ? d.run.state : undefined;
-    }, 420, 'the run to finish');
-    expect(state).toBe('succeeded');
+    runId = await convergedRun(physicist, { name: `Module browser leg ${stamp}`, controlPoints: 4 });
   });
 
   it('follows "Operating curves" from the run and sees the curves and the two marked currents', async () => {
@@ -171,7 +150,7 @@ describe('a physicist opens a run’s curves, builds a module and exports its CS
     // The n leg's families are n-type (or carrier-free) only: the demo p family is not offered there.
     await visible(page.getByTestId('n-kind-family')).click();
     const { families } = familiesResponseSchema.parse(await getJsonAs(physicist, '/api/families'));
-    const pFamily = families.find((f) => pFamilyName.test(f.name))!;
+    const pFamily = families.find((f) => demoPFamilyName.test(f.name))!;
     expect(await page.getByTestId(`n-family-${pFamily.id}`).count()).toBe(0);
     expect(await visible(page.getByTestId('p-leg-optimum')).getAttribute('aria-checked')).toBe('true');
     await visible(page.getByTestId('field-module-name')).fill(moduleName);

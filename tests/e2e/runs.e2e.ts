@@ -3,10 +3,12 @@ import { outboxResponseSchema, type OutboxMessage } from '../../shared/api/outbo
 import { runDetailSchema } from '../../shared/api/runs';
 import {
   baseUrl,
+  eventually,
   getJsonAs,
   openBrowser,
   saveScreenshot,
   signInAs,
+  visible,
   waitForDrawnChart,
   waitForVisibleText,
   type BrowserSession,
@@ -21,23 +23,11 @@ const familyRadio = /^NL-P7 .*p-type band model \(p\)$/;
 /** Enough starts that the run lasts several seconds (each is a full local optimisation, ~25 ms on a quiet machine). */
 const starts = 600;
 
-const visible = (locator: Locator) => locator.filter({ visible: true }).first();
-
 /** Waits until a chart card's canvas shows the optimum's line, glacier blue (or its error boundary speaks). */
 const waitForDrawnLine = (page: Page, card: Locator, minPixels = 60, timeout = 60_000) => waitForDrawnChart(page, card, minPixels, timeout, 'glacier');
 
 async function progressValue(page: Page): Promise<number> {
   return Number(await visible(page.getByTestId('run-progress')).getAttribute('aria-valuenow'));
-}
-
-async function eventually<T>(probe: () => Promise<T | undefined>, seconds: number, what: string): Promise<T> {
-  const deadline = Date.now() + seconds * 1000;
-  for (;;) {
-    const value = await probe();
-    if (value !== undefined) return value;
-    if (Date.now() > deadline) throw new Error(`timed out after ${seconds} s waiting for ${what}`);
-    await new Promise((r) => setTimeout(r, 500));
-  }
 }
 
 async function fillDesign(page: Page, name: string): Promise<void> {
