@@ -1,13 +1,11 @@
-import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { useRole } from '@/components/auth/session';
 import { useModules } from '@/components/api/modules';
 import { ScreenFrame } from '@/components/shell/screen-frame';
 import { spacing } from '@/components/theme';
-import { Chip } from '@/components/ui/chip';
 import { LinkButton } from '@/components/ui/link-button';
 import { EmptyState, ErrorState, LoadingState } from '@/components/ui/state-views';
-import { AppText } from '@/components/ui/text';
+import { CompareBar, useCompareSelection } from '@/components/screens/runs/compare-bar';
 import { compareHref, maxCompared } from '@/components/screens/runs/compare-model';
 import { ModuleRow } from './module-row';
 
@@ -15,10 +13,8 @@ import { ModuleRow } from './module-row';
 export function ModulesScreen() {
   const { can } = useRole();
   const query = useModules();
-  const [selected, setSelected] = useState<string[]>([]);
+  const { selected, toggle, clear } = useCompareSelection();
   const modules = query.data?.modules;
-  const toggle = (id: string) =>
-    setSelected((s) => (s.includes(id) ? s.filter((x) => x !== id) : s.length < maxCompared ? [...s, id] : s));
   const n = selected.length;
   return (
     <ScreenFrame
@@ -29,11 +25,13 @@ export function ModulesScreen() {
       refreshing={query.isRefetching}
       onRefresh={() => void query.refetch()}
     >
-      <View style={styles.compareBar} testID="module-compare-bar">
-        <AppText variant="label">{n === 0 ? `Tick up to ${maxCompared} modules to compare them; runs can be added there.` : `${n} selected`}</AppText>
-        {n >= 1 ? <LinkButton label={n === 1 ? 'Compare with runs' : `Compare ${n} modules`} href={compareHref([], selected)} testID="module-compare-link" /> : null}
-        {n > 0 ? <Chip label="Clear" selected={false} onPress={() => setSelected([])} /> : null}
-      </View>
+      <CompareBar
+        count={n}
+        hint={`Tick up to ${maxCompared} modules to compare them; runs can be added there.`}
+        link={n >= 1 ? { label: n === 1 ? 'Compare with runs' : `Compare ${n} modules`, href: compareHref([], selected), testID: 'module-compare-link' } : null}
+        onClear={clear}
+        testID="module-compare-bar"
+      />
       {query.isPending ? <LoadingState label="Loading modules…" /> : null}
       {query.isError ? <ErrorState title="Could not load modules" message={query.error.message} onRetry={() => void query.refetch()} retrying={query.isFetching} /> : null}
       {modules && modules.length === 0 ? (
@@ -53,6 +51,5 @@ export function ModulesScreen() {
 }
 
 const styles = StyleSheet.create({
-  compareBar: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: spacing.md, minHeight: 40 },
   list: { gap: spacing.xxs },
 });

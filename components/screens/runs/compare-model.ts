@@ -8,6 +8,11 @@ import { parseRunResult, type RunResult } from './run-result';
 /** As many runs as there are distinct line styles, so every curve reads without colour. */
 export const maxCompared = chartMarks.length;
 
+/** `list` with `id` ticked or unticked; a tick beyond `maxCompared` is ignored. */
+export function toggled(list: readonly string[], id: string): string[] {
+  return list.includes(id) ? list.filter((x) => x !== id) : list.length < maxCompared ? [...list, id] : [...list];
+}
+
 const idPattern = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /** `?ids=a,b,c` → distinct well-formed ids, at most `maxCompared`. */

@@ -6,7 +6,7 @@ import { spacing } from '@/components/theme';
 import { Chip } from '@/components/ui/chip';
 import { Section } from '@/components/ui/form-section';
 import { AppText } from '@/components/ui/text';
-import { maxCompared } from './compare-model';
+import { maxCompared, toggled } from './compare-model';
 import { runChoiceLabel } from './run-format';
 
 /** How many recent finished runs the picker offers besides those already chosen. */
@@ -19,10 +19,6 @@ type Props = {
   moduleIds: readonly string[];
   onChange: (next: { runIds: string[]; moduleIds: string[] }) => void;
 };
-
-const toggled = (list: readonly string[], id: string) =>
-  list.includes(id) ? list.filter((x) => x !== id) : list.length < maxCompared ? [...list, id] : [...list];
-
 
 /** What is in the comparison: recent finished runs and saved modules, up to `maxCompared` of each. */
 export function ComparePicker({ runs, modules, runIds, moduleIds, onChange }: Props) {

@@ -8,8 +8,8 @@ import { spacing } from '@/components/theme';
 import { Chip } from '@/components/ui/chip';
 import { LinkButton } from '@/components/ui/link-button';
 import { EmptyState, ErrorState, LoadingState } from '@/components/ui/state-views';
-import { AppText } from '@/components/ui/text';
 import { ConnectionLine } from './connection-line';
+import { CompareBar, useCompareSelection } from './compare-bar';
 import { compareHref, maxCompared } from './compare-model';
 import { RunRow } from './run-row';
 
@@ -21,28 +21,13 @@ const filters: Array<{ key: Filter; label: string }> = [
 ];
 
 const keep = (filter: Filter) => (r: RunSummary) => filter === 'all' || (filter === 'active') !== isFinished(r.state);
-/** Only runs with a result can be compared. */
-
-function CompareBar({ selected, onClear }: { selected: string[]; onClear: () => void }) {
-  const n = selected.length;
-  return (
-    <View style={styles.compareBar} testID="compare-bar">
-      <AppText variant="label">{n === 0 ? `Tick up to ${maxCompared} finished runs to compare them side by side.` : `${n} selected`}</AppText>
-      {n >= 2 ? <LinkButton label={`Compare ${n} runs`} href={compareHref(selected, [])} testID="compare-link" /> : null}
-      {n > 0 ? <Chip label="Clear" selected={false} onPress={onClear} /> : null}
-    </View>
-  );
-}
-
 /** Recent runs of the team, live; pick several to compare. */
 export function RunsScreen() {
   const query = useRuns();
   const [filter, setFilter] = useState<Filter>('all');
-  const [selected, setSelected] = useState<string[]>([]);
+  const { selected, toggle, clear } = useCompareSelection();
   const runs = query.data?.runs;
   const live = useLiveRuns(runs, true);
-  const toggle = (id: string) =>
-    setSelected((s) => (s.includes(id) ? s.filter((x) => x !== id) : s.length < maxCompared ? [...s, id] : s));
   const shown = (runs ?? []).filter(keep(filter));
   const anyActive = (runs ?? []).some((r) => !isFinished(r.state));
   return (
@@ -59,7 +44,13 @@ export function RunsScreen() {
         </View>
         {anyActive || live.connection === 'offline' ? <ConnectionLine state={live.connection} /> : null}
       </View>
-      <CompareBar selected={selected} onClear={() => setSelected([])} />
+      <CompareBar
+        count={selected.length}
+        hint={`Tick up to ${maxCompared} finished runs to compare them side by side.`}
+        link={selected.length >= 2 ? { label: `Compare ${selected.length} runs`, href: compareHref(selected, []), testID: 'compare-link' } : null}
+        onClear={clear}
+        testID="compare-bar"
+      />
       {query.isPending ? <LoadingState label="Loading runs…" /> : null}
       {query.isError ? <ErrorState title="Could not load runs" message={query.error.message} onRetry={() => void query.refetch()} retrying={query.isFetching} /> : null}
       {runs && shown.length === 0 ? (
@@ -87,6 +78,5 @@ export function RunsScreen() {
 const styles = StyleSheet.create({
   toolbar: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'center', gap: spacing.md },
   filters: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
-  compareBar: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: spacing.md, minHeight: 40 },
   list: { gap: spacing.xxs },
 });
