@@ -34,10 +34,17 @@ export function parseCurveInputs(text: CurveInputText, hotSide: number): ParsedC
   return { deltaT, currentLimit, errors };
 }
 
+/** The one field that fixes the load side, by what the user chose. */
+const loadSide = {
+  deltaT: { field: 'deltaT', id: 'curve-delta-t', label: 'Temperature difference ΔT', help: 'Heat sink minus load temperature' },
+  coldSide: { field: 'coldSide', id: 'curve-cold-side', label: 'Cold-side temperature Tc', help: "The load's temperature, in kelvin" },
+} as const;
+
 type Props = { text: CurveInputText; onChange: (t: CurveInputText) => void; parsed: ParsedCurveInputs; hotSide: number };
 
 export function CurveInputs({ text, onChange, parsed, hotSide }: Props) {
   const { errors } = parsed;
+  const side = loadSide[text.by];
   return (
     <View style={styles.wrap}>
       <View style={styles.choice} role="radiogroup" aria-label="What fixes the load side">
@@ -46,31 +53,18 @@ export function CurveInputs({ text, onChange, parsed, hotSide }: Props) {
       </View>
       <View style={styles.row}>
         <View style={styles.field}>
-          {text.by === 'deltaT' ? (
-            <TextField
-              id="curve-delta-t"
-              label="Temperature difference ΔT"
-              unit="K"
-              mono
-              keyboardType="numeric"
-              value={text.deltaT}
-              onChangeText={(deltaT) => onChange({ ...text, deltaT })}
-              help="Heat sink minus load temperature"
-              error={errors.deltaT}
-            />
-          ) : (
-            <TextField
-              id="curve-cold-side"
-              label="Cold-side temperature Tc"
-              unit="K"
-              mono
-              keyboardType="numeric"
-              value={text.coldSide}
-              onChangeText={(coldSide) => onChange({ ...text, coldSide })}
-              help="The load's temperature, in kelvin"
-              error={errors.coldSide}
-            />
-          )}
+          <TextField
+            key={side.id}
+            id={side.id}
+            label={side.label}
+            unit="K"
+            mono
+            keyboardType="numeric"
+            value={text[side.field]}
+            onChangeText={(v) => onChange({ ...text, [side.field]: v })}
+            help={side.help}
+            error={errors[side.field]}
+          />
           {text.by === 'coldSide' && parsed.deltaT !== null ? (
             <AppText variant="caption" tone="muted" testID="curve-derived-delta-t">{`ΔT = Th − Tc = ${formatNumber(hotSide, 4)} K − ${formatNumber(hotSide - parsed.deltaT, 4)} K = ${formatNumber(parsed.deltaT, 4)} K`}</AppText>
           ) : null}
