@@ -6,7 +6,8 @@ import { readEnv } from '../server/config/env';
 import { prepareDatabase } from '../server/ops/database';
 import { log } from '../server/ops/log';
 import { stopCluster } from '../server/ops/postgres';
-import { portInUse, stackServices, startServices, waitForHealth } from '../server/ops/stack';
+import { portInUse, waitForHealth } from '../server/ops/stack';
+import { stackServices, startServices } from '../server/ops/supervise';
 import { ensureWebBuild } from '../server/ops/web-build';
 
 /**
@@ -59,7 +60,8 @@ async function main(): Promise<void> {
   }
   ensureWebBuild(root, env.webDist);
   const crashes: string[] = [];
-  const stack = startServices(stackServices(), childEnv, (name, code) => crashes.push(`${name} exited with code ${code}`));
+  // Restarted so later tests still have a stack, but every unexpected exit counts as a failure.
+  const stack = startServices(stackServices(), childEnv, { onExit: (name, how) => crashes.push(`${name} ${how}`) });
   let summary: JestSummary = { numPassedTests: 0, numFailedTests: 0, numPendingTests: 0, numRuntimeErrorTestSuites: 1 };
   try {
     await waitForHealth(`${env.appOrigin}/api/health`, 90);

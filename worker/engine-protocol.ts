@@ -14,5 +14,6 @@ export type ThreadInput = {
 export type ThreadMessage =
   | { type: 'progress'; progress: SearchProgress }
   | { type: 'checkpoint'; checkpoint: SearchCheckpoint }
-  | { type: 'done'; result: OptimizeResult; stopped: boolean; startsDone: number; bestStart: number }
+  /** `result` is null only when stopped before the first start finished. */
+  | { type: 'done'; result: OptimizeResult | null; stopped: boolean; startsDone: number; bestStart: number }
   | { type: 'error'; message: string; field?: string };

@@ -6,7 +6,7 @@
  */
 import { parentPort, workerData } from 'node:worker_threads';
 import { CaseError, parseCase } from '../shared/engine';
-import { globalSearch, type SearchCheckpoint } from '../shared/runs/global-search';
+import { globalSearch, SearchStoppedEarly, type SearchCheckpoint } from '../shared/runs/global-search';
 import type { ThreadInput, ThreadMessage } from './engine-protocol';
 
 const input = workerData as ThreadInput;
@@ -32,5 +32,7 @@ try {
   });
   post({ type: 'done', result: out.result, stopped: out.stopped, startsDone: out.startsDone, bestStart: out.bestStart });
 } catch (err) {
-  post({ type: 'error', message: err instanceof Error ? err.message : String(err), field: err instanceof CaseError ? err.field : undefined });
+  // Stopped before the first start ended (a cancel or shutdown racing the claim): no design, not a failure.
+  if (err instanceof SearchStoppedEarly) post({ type: 'done', result: null, stopped: true, startsDone: 0, bestStart: 0 });
+  else post({ type: 'error', message: err instanceof Error ? err.message : String(err), field: err instanceof CaseError ? err.field : undefined });
 }

@@ -1,5 +1,6 @@
 import { hostname } from 'node:os';
 import type { DataSource } from 'typeorm';
+import { outageLog } from '../server/db/db-errors';
 import { WorkerHeartbeat } from '../server/db/entities';
 
 /** Upserts this worker's row every few seconds; the API's health check reads it. */
@@ -11,8 +12,9 @@ export function startHeartbeat(ds: DataSource, workerId: string, everySeconds: n
     jobsDone += jobs;
     await repo.upsert({ workerId, hostname: hostname(), pid: process.pid, startedAt, lastSeen: new Date(), jobsDone }, ['workerId']);
   };
+  const outage = outageLog('worker');
   const timer = setInterval(() => {
-    beat().catch((err: Error) => console.error(`[worker] heartbeat failed: ${err.message}`));
+    beat().then(() => outage.ok(), (err: unknown) => outage.failed('heartbeat', err));
   }, everySeconds * 1000);
   return { beat, stop: () => clearInterval(timer) };
 }

@@ -16,6 +16,11 @@ function headline(result: Record<string, unknown>): string[] {
   ];
 }
 
+function cancelNote(run: Finished): string {
+  if (run.state !== 'cancelled') return 'The optimisation converged.';
+  return run.result ? 'The run was cancelled; this is the best design found before it stopped.' : 'The run was cancelled before its first start finished; there is no design to keep.';
+}
+
 /** The launcher and every follower of the design hear how a run ended. */
 export async function mailRunFinished(ds: DataSource, mailer: Mailer, appOrigin: string, run: Finished): Promise<void> {
   const rows: Array<{ email: string }> = await ds.query(
@@ -27,7 +32,7 @@ export async function mailRunFinished(ds: DataSource, mailer: Mailer, appOrigin:
   const verdict = run.state === 'succeeded' ? 'finished' : run.state;
   const lines = run.state === 'failed'
     ? [`The run failed: ${run.error ?? 'no reason was recorded'}.`]
-    : [run.state === 'cancelled' ? 'The run was cancelled; this is the best design found before it stopped.' : 'The optimisation converged.', '', ...(run.result ? headline(run.result) : [])];
+    : [cancelNote(run), '', ...(run.result ? headline(run.result) : [])];
   const subject = `Run ${verdict}: ${run.designName}${run.state !== 'failed' && run.result ? ` — ΔT ${k((run.result as { deltaT?: number }).deltaT, 1)} K` : ''}`;
   await mailer.send({
     to: rows.map((r) => r.email),

@@ -1,7 +1,7 @@
 import { join } from 'node:path';
 import type { DataSource } from 'typeorm';
 import type { GrowthSheet } from '../shared/growth/growth-sheet';
-import { publishEvent } from '../server/realtime/events';
+import { publishEvent } from '../server/db/events';
 import { runInThread } from '../server/threads/run-in-thread';
 import type { SheetThreadInput } from './sheet-thread';
 

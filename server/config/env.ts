@@ -32,6 +32,11 @@ const schema = z.object({
   WORKER_HEARTBEAT_SECONDS: z.coerce.number().min(1).max(300).default(5),
   RUN_QUEUE: z.string().regex(/^[a-z0-9-]+$/).default('leg-run'),
   RUN_STALE_SECONDS: z.coerce.number().min(3).max(3600).default(15),
+  WORKERS: z.coerce.number().int().min(1).max(32).default(1),
+  TEAM_RUNNING_LIMIT: z.coerce.number().int().min(1).max(1000).default(4),
+  RUN_SLICE_SECONDS: z.coerce.number().min(1).max(86400).default(60),
+  TEAM_LAUNCHES_PER_MINUTE: z.coerce.number().int().min(1).max(100000).default(120),
+  TEAM_UNFINISHED_LIMIT: z.coerce.number().int().min(1).max(1000000).default(1000),
 });
 
 export type Env = {
@@ -53,6 +58,21 @@ export type Env = {
   runQueue: string;
   /** A running run whose worker has not beaten for this long is handed to another worker. */
   runStaleSeconds: number;
+  /** Worker processes `npm start` runs. */
+  workers: number;
+  /** Fair share between teams (server/runs): see README "Runs, workers and the growth hand-off". */
+  fairShare: FairShare;
+};
+
+export type FairShare = {
+  /** Runs of one team running at once on one queue; more wait. */
+  teamRunningLimit: number;
+  /** A run that has held its worker this long gives it up at its next checkpoint when another team is waiting. */
+  sliceSeconds: number;
+  /** Runs (sweep values count one each) a team may launch per minute. */
+  launchesPerMinute: number;
+  /** Queued and running runs a team may have at once. */
+  unfinishedLimit: number;
 };
 
 export function readEnv(source: Record<string, string | undefined> = process.env): Env {
@@ -82,5 +102,7 @@ export function readEnv(source: Record<string, string | undefined> = process.env
     heartbeatSeconds: e.WORKER_HEARTBEAT_SECONDS,
     runQueue: e.RUN_QUEUE,
     runStaleSeconds: e.RUN_STALE_SECONDS,
+    workers: e.WORKERS,
+    fairShare: { teamRunningLimit: e.TEAM_RUNNING_LIMIT, sliceSeconds: e.RUN_SLICE_SECONDS, launchesPerMinute: e.TEAM_LAUNCHES_PER_MINUTE, unfinishedLimit: e.TEAM_UNFINISHED_LIMIT },
   };
 }

@@ -8,10 +8,12 @@ import { DesignsAndRuns1764622800000 } from './migrations/1764622800000-designs-
 import { GrowthOrders1764626400000 } from './migrations/1764626400000-growth-orders';
 import { ModuleDesigns1764630000000 } from './migrations/1764630000000-module-designs';
 import { MoreStarts1764633600000 } from './migrations/1764633600000-more-starts';
+import { RunQueue1764640800000 } from './migrations/1764640800000-run-queue';
 import { SnakeNamingStrategy } from './naming';
+import { quietPoolErrors } from './pool-errors';
 
 /** Migrations in order; a new one is appended here as well as written. */
-export const migrations = [Foundation1764612000000, FamilyVersions1764615600000, Accounts1764619200000, DesignsAndRuns1764622800000, GrowthOrders1764626400000, ModuleDesigns1764630000000, MoreStarts1764633600000];
+export const migrations = [Foundation1764612000000, FamilyVersions1764615600000, Accounts1764619200000, DesignsAndRuns1764622800000, GrowthOrders1764626400000, ModuleDesigns1764630000000, MoreStarts1764633600000, RunQueue1764640800000];
 
 export function createDataSource(databaseUrl: string, applicationName = 'frostgrade'): DataSource {
   return new DataSource({
@@ -24,6 +26,11 @@ export function createDataSource(databaseUrl: string, applicationName = 'frostgr
     namingStrategy: new SnakeNamingStrategy(),
     synchronize: false,
     logging: ['error'],
+    // A request must not hang while PostgreSQL is away: connecting gives up
+    // after 5 s and the request answers 503 (server/http/errors.ts).
+    connectTimeoutMS: 5000,
+    // Idle connections dropped by a restart are reported here, not thrown.
+    poolErrorHandler: quietPoolErrors(applicationName),
     extra: { max: 10 },
   });
 }

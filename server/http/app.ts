@@ -6,6 +6,7 @@ import type { DataSource } from 'typeorm';
 import type { Auth } from '../auth/lucia';
 import type { Env } from '../config/env';
 import type { Mailer } from '../mail/mailer';
+import type { RelayStatus } from '../realtime/event-relay';
 import { authRoutes } from '../routes/auth-routes';
 import { designRoutes } from '../routes/design-routes';
 import { familyRoutes } from '../routes/family-routes';
@@ -18,17 +19,18 @@ import { errorHandler, notFoundApi } from './errors';
 import { originCheck } from './origin-check';
 import { mountRoutes, type RouteSpec } from './route-table';
 
-export type AppDeps = { env: Env; ds: DataSource; boss: PgBoss; mailer: Mailer; auth: Auth; version: string };
+/** `eventRelay`: the API process's socket relay, reported by health (absent where no sockets are attached, as in tests). */
+export type AppDeps = { env: Env; ds: DataSource; boss: PgBoss; mailer: Mailer; auth: Auth; version: string; eventRelay?: () => RelayStatus };
 
 /** Every API route, in one table: what the access matrix test walks. */
 export function apiRoutes(d: AppDeps): RouteSpec[] {
   const accountDeps = { ds: d.ds, auth: d.auth, mailer: d.mailer, appOrigin: d.env.appOrigin };
   return [
-    ...systemRoutes({ ds: d.ds, boss: d.boss, mailer: d.mailer, heartbeatSeconds: d.env.heartbeatSeconds, version: d.version, mailCatcher: d.env.mailCatcher }),
+    ...systemRoutes({ ds: d.ds, boss: d.boss, mailer: d.mailer, heartbeatSeconds: d.env.heartbeatSeconds, version: d.version, mailCatcher: d.env.mailCatcher, eventRelay: d.eventRelay }),
     ...authRoutes(accountDeps),
     ...teamRoutes(accountDeps),
     ...familyRoutes(d.ds),
-    ...designRoutes({ ds: d.ds, boss: d.boss, runQueue: d.env.runQueue }),
+    ...designRoutes({ ds: d.ds, boss: d.boss, runQueue: d.env.runQueue, fair: d.env.fairShare, heartbeatSeconds: d.env.heartbeatSeconds }),
     ...growthRoutes({ ds: d.ds, boss: d.boss, mailer: d.mailer, appOrigin: d.env.appOrigin }),
     ...moduleRoutes(d.ds),
   ];

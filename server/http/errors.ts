@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { MulterError } from 'multer';
+import { isDatabaseUnavailable } from '../db/db-errors';
 
 export type FieldError = { field: string; message: string };
 
@@ -28,13 +29,26 @@ export class ValidationError extends HttpError {
   }
 }
 
+/** A refusal that passes with time (a rate limit, a full queue): the answer says when to try again. */
+export class RetryLaterError extends HttpError {
+  constructor(status: 429 | 503, message: string, errors: FieldError[] | undefined, readonly retryAfterSeconds: number) {
+    super(status, message, errors, status === 429 ? 'TooManyRequests' : 'ServiceUnavailable');
+  }
+}
+
 export const notFoundApi: RequestHandler = (req, _res, next) => next(new NotFoundError(`route ${req.method} ${req.path}`));
 
 /** One error shape for every route: { name, message, errors? }. No stack traces in answers. */
 export function errorHandler(logStacks: boolean): ErrorRequestHandler {
   return (err: unknown, _req, res, _next) => {
     if (err instanceof HttpError) {
+      if (err instanceof RetryLaterError) res.set('Retry-After', String(Math.ceil(err.retryAfterSeconds)));
       res.status(err.status).json({ name: err.name, message: err.message, ...(err.errors ? { errors: err.errors } : {}) });
+      return;
+    }
+    if (isDatabaseUnavailable(err)) {
+      // An outage, not a bug: say so plainly, and when to try again.
+      res.status(503).set('Retry-After', '5').json({ name: 'ServiceUnavailable', message: 'The database is unavailable for a moment (restarting or unreachable); try again in a few seconds.' });
       return;
     }
     const known = clientError(err);

@@ -5,7 +5,8 @@ import { demoPassword, demoTeam, demoUsers } from '../db/seed/demo-data';
 import { prepareDatabase } from './database';
 import { log } from './log';
 import { stopCluster } from './postgres';
-import { portInUse, stackServices, startServices, waitForHealth, type Service } from './stack';
+import { portInUse, waitForHealth } from './stack';
+import { stackServices, startServices, type Service } from './supervise';
 import { ensureWebBuild } from './web-build';
 
 /**
@@ -23,7 +24,7 @@ async function main(): Promise<void> {
   }
   const cluster = await prepareDatabase(env, { fresh: false });
   if (!dev) ensureWebBuild(root, env.webDist);
-  const services: Service[] = stackServices();
+  const services: Service[] = stackServices(env.workers);
   if (dev) {
     services.push({ name: 'expo', entry: 'npx', args: ['expo', 'start', '--web', '--port', '8081'], env: { CI: '1', EXPO_OFFLINE: '1', EXPO_UNSTABLE_HEADLESS: '1', EXPO_PUBLIC_API_URL: env.appOrigin } });
   }
@@ -38,9 +39,12 @@ async function main(): Promise<void> {
     log('frostgrade', 'stopped');
     process.exit(code);
   };
-  const stack = startServices(services, childEnv, (name, code) => {
-    log('frostgrade', `${name} exited unexpectedly (code ${code}); shutting everything down`);
-    void shutdown(1);
+  // A crashed child is restarted with backoff (server/ops/supervise.ts); only one that keeps crashing stops the stack.
+  const stack = startServices(services, childEnv, {
+    onGiveUp: (name) => {
+      log('frostgrade', `giving up: ${name} keeps crashing (see above); stopping everything`);
+      void shutdown(1);
+    },
   });
   process.on('SIGINT', () => void shutdown(0));
   process.on('SIGTERM', () => void shutdown(0));
@@ -53,6 +57,7 @@ async function main(): Promise<void> {
     ...demoUsers.map((u) => `            ${u.email.padEnd(26)} ${u.role}${u.team === demoTeam.slug ? '' : ' (second team)'}`),
     `  mail      SMTP catcher on ${env.smtp.host}:${env.smtp.port}, messages in the app's Outbox`,
     `  database  ${env.databaseUrl}`,
+    `  workers   ${env.workers} (WORKERS=N npm start for more); a crashed process is restarted`,
     '  Ctrl-C stops everything.',
   ].join('\n'));
 }

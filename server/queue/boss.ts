@@ -1,8 +1,22 @@
 import PgBoss from 'pg-boss';
+import { isDatabaseUnavailable } from '../db/db-errors';
 import { queues } from './queues';
+
+/** The schema pg-boss keeps its tables in; the run sweeper reads its job table. */
+export const bossSchema = 'pgboss';
 
 function isDeadlock(err: unknown): boolean {
   return typeof err === 'object' && err !== null && (err as { code?: string }).code === '40P01';
+}
+
+/** pg-boss reports every failed poll; while the database is away, once every 10 s is enough. */
+function quietBossErrors(source: string): (err: Error) => void {
+  let last = 0;
+  return (err) => {
+    if (isDatabaseUnavailable(err) && Date.now() - last < 10_000) return;
+    last = Date.now();
+    console.error(`[${source}] pg-boss: ${err.message}`);
+  };
 }
 
 /**
@@ -13,8 +27,8 @@ function isDeadlock(err: unknown): boolean {
  */
 export async function startBoss(databaseUrl: string, applicationName: string, extraQueues: string[] = []): Promise<PgBoss> {
   for (let attempt = 1; ; attempt += 1) {
-    const boss = new PgBoss({ connectionString: databaseUrl, schema: 'pgboss', application_name: applicationName, max: 4 });
-    boss.on('error', (err: Error) => console.error(`[${applicationName}] pg-boss: ${err.message}`));
+    const boss = new PgBoss({ connectionString: databaseUrl, schema: bossSchema, application_name: applicationName, max: 4 });
+    boss.on('error', quietBossErrors(applicationName));
     try {
       await boss.start();
       for (const name of Object.values(queues)) {

@@ -1,9 +1,9 @@
 import type { Server as HttpServer } from 'node:http';
-import { Client } from 'pg';
 import { Server, type Socket } from 'socket.io';
 import type { User } from 'lucia';
 import type { Auth } from '../auth/lucia';
-import { eventChannel, type TeamEvent } from './events';
+import type { TeamEvent } from '../db/events';
+import { startEventRelay, type RelayStatus } from './event-relay';
 
 export type RealtimeOptions = { auth: Auth; databaseUrl: string; appOrigin: string; allowLoopback: boolean };
 
@@ -24,7 +24,7 @@ function originAllowed(origin: string | undefined, o: RealtimeOptions): boolean 
  * room only after `canWatch` confirms the object is its team's. Events come
  * from any process through PostgreSQL NOTIFY and are relayed here.
  */
-export async function attachRealtime(http: HttpServer, o: RealtimeOptions, canWatch: Watchable): Promise<{ io: Server; close: () => Promise<void> }> {
+export async function attachRealtime(http: HttpServer, o: RealtimeOptions, canWatch: Watchable): Promise<{ io: Server; relay: () => RelayStatus; close: () => Promise<void> }> {
   const io = new Server(http, { serveClient: false, cors: o.allowLoopback ? { origin: /^http:\/\/(127\.0\.0\.1|localhost):\d+$/, credentials: true } : undefined });
   io.use((socket, next) => {
     if (!originAllowed(socket.handshake.headers.origin, o)) return next(new Error('origin not allowed'));
@@ -51,18 +51,14 @@ export async function attachRealtime(http: HttpServer, o: RealtimeOptions, canWa
       if (typeof room === 'string') void socket.leave(objectRoom(user.teamId, room));
     });
   });
-  const listener = new Client({ connectionString: o.databaseUrl, application_name: 'frostgrade-events' });
-  await listener.connect();
-  listener.on('notification', (n) => {
-    if (n.channel !== eventChannel || !n.payload) return;
-    const e = JSON.parse(n.payload) as TeamEvent;
+  const relay = await startEventRelay(o.databaseUrl, (e: TeamEvent) => {
     io.to(e.room ? objectRoom(e.teamId, e.room) : teamRoom(e.teamId)).emit(e.event, e.payload);
   });
-  await listener.query(`LISTEN ${eventChannel}`);
   return {
     io,
+    relay: relay.status,
     close: async () => {
-      await listener.end();
+      await relay.close();
       await new Promise<void>((resolve) => { void io.close(() => resolve()); });
     },
   };

@@ -1,11 +1,11 @@
 import type { Role } from '../../shared/api';
-import { designInputSchema, sweepRequestSchema } from '../../shared/api';
+import { designInputSchema, sweepRequestSchema, tracePageQuerySchema } from '../../shared/api';
 import { designers, requireTeam, requireUser } from '../http/access';
 import { route, type RouteSpec } from '../http/route-table';
-import { body } from '../http/validate';
+import { body, parseOrThrow } from '../http/validate';
 import { describe, findDesign, listDesigns, saveDesign, setFollowing } from '../services/design-service';
 import { exportRun } from '../services/run-export';
-import { cancelRun, launchRun, launchSweep, listRuns, runDetail, sweepDetail, type RunDeps } from '../services/run-service';
+import { cancelRun, launchRun, launchSweep, listRuns, runDetail, sweepDetail, tracePage, type RunDeps } from '../services/run-service';
 
 /** Designs and runs are the physicists' work; growers see released profiles only (growth orders). */
 export const runReaders: readonly Role[] = ['admin', 'physicist', 'viewer'];
@@ -39,10 +39,13 @@ export function designRoutes(d: RunDeps): RouteSpec[] {
       res.status(201).json({ sweep: await launchSweep(d, requireTeam(req), requireUser(req), req.params.id, res.locals.body) });
     }),
     route('get', '/runs', runReaders, async (req, res) => {
-      res.json({ runs: await listRuns(ds, requireTeam(req), { designId: req.query.designId as string | undefined, sweepId: req.query.sweepId as string | undefined }) });
+      res.json({ runs: await listRuns(d, requireTeam(req), { designId: req.query.designId as string | undefined, sweepId: req.query.sweepId as string | undefined }) });
     }),
     route('get', '/runs/:id', runReaders, async (req, res) => {
-      res.json(await runDetail(ds, requireTeam(req), req.params.id, requireUser(req).id));
+      res.json(await runDetail(d, requireTeam(req), req.params.id, requireUser(req).id));
+    }),
+    route('get', '/runs/:id/trace', runReaders, async (req, res) => {
+      res.json(await tracePage(ds, requireTeam(req), req.params.id, parseOrThrow(tracePageQuerySchema, req.query)));
     }),
     route('post', '/runs/:id/cancel', designers, async (req, res) => {
       res.json({ run: await cancelRun(d, requireTeam(req), req.params.id) });
@@ -52,7 +55,7 @@ export function designRoutes(d: RunDeps): RouteSpec[] {
       res.type(format === 'csv' ? 'text/csv' : 'application/json').attachment(out.filename).send(out.body);
     })),
     route('get', '/sweeps/:id', runReaders, async (req, res) => {
-      res.json({ sweep: await sweepDetail(ds, requireTeam(req), req.params.id) });
+      res.json({ sweep: await sweepDetail(d, requireTeam(req), req.params.id) });
     }),
   ];
 }

@@ -5,7 +5,7 @@ import type { MaterialInput } from '../../shared/engine';
 import type { z } from 'zod';
 import { MaterialFamily, MaterialFamilyVersion, Team } from '../db/entities';
 import { HttpError, ValidationError } from '../http/errors';
-import { publishEvent } from '../realtime/events';
+import { publishEvent } from '../db/events';
 import { checkDefinition } from './family-definition';
 import { detail, findFamily, findVersion, summarise } from './family-store';
 

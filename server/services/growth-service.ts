@@ -14,7 +14,7 @@ import { HttpError, NotFoundError, ValidationError } from '../http/errors';
 import { isUuid } from '../http/validate';
 import type { Mailer } from '../mail/mailer';
 import { queues } from '../queue/queues';
-import { publishEvent } from '../realtime/events';
+import { publishEvent } from '../db/events';
 import { findRun } from './run-service';
 import { uploadText } from './family-upload-service';
 

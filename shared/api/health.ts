@@ -6,7 +6,7 @@ export const healthCheckSchema = z.object({
 });
 
 /** The dependencies the API reports on, in display order. */
-export const healthCheckNames = ['database', 'queue', 'worker', 'mail'] as const;
+export const healthCheckNames = ['database', 'queue', 'worker', 'mail', 'events'] as const;
 export type HealthCheckName = (typeof healthCheckNames)[number];
 
 /**
@@ -21,6 +21,8 @@ export const healthResponseSchema = z.object({
     queue: healthCheckSchema,
     worker: healthCheckSchema,
     mail: healthCheckSchema,
+    /** The API's relay of live events to browsers (absent where no sockets are served). */
+    events: healthCheckSchema.optional(),
   }),
 });
 

@@ -22,6 +22,13 @@ export const runProgressSchema = z.object({
   at: isoDateTimeSchema,
 });
 
+/** Where a queued run stands and why it waits, in words for the user. */
+export const runWaitingSchema = z.object({
+  /** 1 = next to start. Other teams' runs are counted, never named. */
+  position: z.number().int().min(1),
+  reason: z.string(),
+});
+
 export const runSummarySchema = z.object({
   id: idSchema,
   designId: idSchema,
@@ -40,9 +47,24 @@ export const runSummarySchema = z.object({
   finishedAt: isoDateTimeSchema.nullable(),
   error: z.string().nullable(),
   attempts: z.number().int(),
+  /** Set while the run is queued. */
+  waiting: runWaitingSchema.nullable(),
 });
 
 export const runsResponseSchema = z.object({ runs: z.array(runSummarySchema) });
+
+export const tracePointSchema = z.object({ iteration: z.number().int(), objective: z.number(), best: z.number(), seconds: z.number() });
+/** Points of the trace shown with a run; a run of hours writes tens of thousands. */
+export const traceShownMax = 400;
+/** Largest page of `GET /api/runs/:id/trace`. */
+export const tracePageMax = 2000;
+
+/** `GET /api/runs/:id/trace?offset=&limit=`: the full progress trace, in bounded pages, oldest first. */
+export const tracePageQuerySchema = z.object({
+  offset: z.coerce.number({ error: 'offset must be a whole number' }).int({ error: 'offset must be a whole number' }).min(0, { error: 'offset must be 0 or more' }).default(0),
+  limit: z.coerce.number({ error: 'limit must be a whole number' }).int({ error: 'limit must be a whole number' }).min(1, { error: 'limit must be at least 1' }).max(tracePageMax, { error: `limit must be at most ${tracePageMax}` }).default(500),
+});
+export const tracePageSchema = z.object({ total: z.number().int(), offset: z.number().int(), points: z.array(tracePointSchema) });
 
 /** A stored run: the frozen design and case it ran, its progress trace and its result (engine output). */
 export const runDetailSchema = z.object({
@@ -52,7 +74,9 @@ export const runDetailSchema = z.object({
   case: z.record(z.string(), z.unknown()),
   familyVersion: z.number().int(),
   progress: runProgressSchema.nullable(),
-  trace: z.array(z.object({ iteration: z.number().int(), objective: z.number(), best: z.number(), seconds: z.number() })),
+  /** The progress trace thinned to at most `traceShownMax` points (first and last kept); all of it page by page at /api/runs/:id/trace. */
+  trace: z.array(tracePointSchema),
+  traceTotal: z.number().int(),
   /** The engine's OptimizeResult (see shared/engine); null until finished (or cancelled with a best-so-far). */
   result: z.record(z.string(), z.unknown()).nullable(),
   engineVersion: z.string(),
@@ -75,6 +99,8 @@ export const sweepSchema = z.object({
 export type RunState = z.infer<typeof runStateSchema>;
 export type RunProgress = z.infer<typeof runProgressSchema>;
 export type RunSummary = z.infer<typeof runSummarySchema>;
+export type RunWaiting = z.infer<typeof runWaitingSchema>;
+export type TracePage = z.infer<typeof tracePageSchema>;
 export type RunDetail = z.infer<typeof runDetailSchema>;
 export type SweepRequest = z.infer<typeof sweepRequestSchema>;
 export type Sweep = z.infer<typeof sweepSchema>;

@@ -35,6 +35,14 @@ export type SearchOptions = {
   onCheckpoint?: (cp: SearchCheckpoint) => void;
 };
 
+/** Stopped (cancelled, shut down) before any start produced a design: there is nothing to keep. */
+export class SearchStoppedEarly extends Error {
+  constructor() {
+    super('the search was stopped before its first start finished');
+    this.name = 'SearchStoppedEarly';
+  }
+}
+
 export type SearchResult = { result: OptimizeResult; stopped: boolean; startsDone: number; bestStart: number; evaluations: number };
 
 /** A generator per (run, start): the seed string and the start index hashed into mulberry32's seed. */
@@ -95,6 +103,6 @@ export function globalSearch(c: CheckedCase, o: SearchOptions): SearchResult {
     if (r.stopped) { stopped = true; k += 1; break; }
     o.onCheckpoint?.({ nextStart: k + 1, bestStart, best });
   }
-  if (!best) throw new Error('the search was stopped before its first start finished');
+  if (!best) throw new SearchStoppedEarly();
   return { result: best, stopped, startsDone: Math.min(k, starts), bestStart, evaluations };
 }

@@ -11,7 +11,7 @@ import { readEnv } from '../../server/config/env';
 import { createAuth } from '../../server/auth/auth-pool';
 import { createDataSource } from '../../server/db/data-source';
 import { prepareDatabase } from '../../server/ops/database';
-import { startServices, type Service } from '../../server/ops/stack';
+import { startServices, type Service } from '../../server/ops/supervise';
 import type { RunProgress } from '../../shared/api';
 
 const settings = { FROSTGRADE_PROFILE: 'test', NODE_ENV: 'test', PORT: '8391', SMTP_PORT: '2591', RUN_QUEUE: 'bench-runs', DATABASE_URL: 'postgres://postgres@127.0.0.1:54339/frostgrade_bench' };
@@ -25,7 +25,7 @@ async function main(): Promise<void> {
   await prepareDatabase(env, { fresh: true });
   const services: Service[] = [{ name: 'mail', entry: 'server/mail/catcher-main.ts' }, { name: 'api', entry: 'server/main.ts' }];
   const quiet = (line: string): boolean => line.includes('[worker] run ');
-  const core = startServices(services, childEnv, (name) => { throw new Error(`${name} died`); });
+  const core = startServices(services, childEnv, { restart: false, onExit: (name, how) => { throw new Error(`${name} ${how}`); } });
   // No worker yet, so health answers 503 (degraded); wait only until the API answers at all.
   for (let i = 0; i < 120; i += 1) {
     const up = await fetch(`${env.appOrigin}/api/health`).then(() => true, () => false);
@@ -52,7 +52,7 @@ async function main(): Promise<void> {
       await new Promise((r) => setTimeout(r, 100));
     }
   };
-  const workers = (count: number) => startServices(Array.from({ length: count }, (_, i) => ({ name: `worker${i + 1}`, entry: 'worker/main.ts' })), childEnv, () => undefined);
+  const workers = (count: number) => startServices(Array.from({ length: count }, (_, i) => ({ name: `worker${i + 1}`, entry: 'worker/main.ts' })), childEnv, { restart: false });
   const origWrite = process.stdout.write.bind(process.stdout);
   process.stdout.write = ((chunk: string | Uint8Array) => (typeof chunk === 'string' && (quiet(chunk) || chunk.startsWith('[mail]') || chunk.startsWith('[api]') || chunk.startsWith('[worker')) ? true : origWrite(chunk))) as typeof process.stdout.write;
 

@@ -62,6 +62,7 @@ const policy: Record<string, 'public' | Role[]> = {
   'POST /designs/:id/sweeps': designers,
   'GET /runs': runReaders,
   'GET /runs/:id': runReaders,
+  'GET /runs/:id/trace': runReaders,
   'POST /runs/:id/cancel': designers,
   'GET /runs/:id/export.csv': runReaders,
   'GET /runs/:id/export.json': runReaders,

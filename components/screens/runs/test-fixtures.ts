@@ -89,6 +89,7 @@ export function runSummary(state: RunState, overrides: Partial<RunSummary> = {})
     finishedAt: finished ? '2026-02-01T10:00:14.500Z' : null,
     error: state === 'failed' ? 'the engine refused hotSide: no current gives a steady state' : null,
     attempts: state === 'queued' ? 0 : 1,
+    waiting: state === 'queued' ? { position: 2, reason: '1 run ahead of it in the queue (each team\'s first waiting run goes before any team\'s second).' } : null,
     ...overrides,
   };
 }
@@ -115,6 +116,7 @@ export function runDetail(state: RunState, options: { result?: boolean; progress
     familyVersion: 2,
     progress: options.progress ?? null,
     trace: [],
+    traceTotal: 0,
     result,
     engineVersion: '0.1.0-test',
   };

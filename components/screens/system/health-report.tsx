@@ -11,6 +11,7 @@ const checkLabels: Record<HealthCheckName, string> = {
   queue: 'Job queue',
   worker: 'Workers',
   mail: 'Mail',
+  events: 'Live updates',
 };
 
 export type HealthReportProps = { health: HealthResponse; checkedAt: number };
@@ -33,9 +34,12 @@ export function HealthReport({ health, checkedAt }: HealthReportProps) {
         </View>
       </View>
       <View style={styles.list} role="list" aria-label="Health checks">
-        {healthCheckNames.map((name, index) => (
+        {healthCheckNames.flatMap((name) => {
+          const check = health.checks[name];
+          return check ? [{ name, check }] : [];
+        }).map(({ name, check }, index) => (
           <View key={name} style={index > 0 ? styles.divided : undefined}>
-            <CheckRow label={checkLabels[name]} check={health.checks[name]} />
+            <CheckRow label={checkLabels[name]} check={check} />
           </View>
         ))}
       </View>

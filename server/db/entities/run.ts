@@ -1,6 +1,8 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
 
 export type RunStateName = 'queued' | 'running' | 'succeeded' | 'failed' | 'cancelled';
+/** Why a queued run waits when it is not simply its turn (see server/runs/queue-position.ts). */
+export type WaitReason = 'team-limit' | 'yielded' | 'resumed';
 
 /**
  * One optimisation: the frozen design and engine case, the family version it
@@ -34,4 +36,10 @@ export class Run {
   @Column({ type: 'jsonb', nullable: true }) result!: Record<string, unknown> | null;
   @Column({ type: 'text', nullable: true }) error!: string | null;
   @Column({ type: 'text' }) engineVersion!: string;
+  /** The pg-boss job that starts (or is working) this run. */
+  @Column({ type: 'uuid', nullable: true }) jobId!: string | null;
+  @Column({ type: 'timestamptz', nullable: true }) queuedAt!: Date | null;
+  @Column({ type: 'timestamptz', nullable: true }) eligibleAt!: Date | null;
+  @Column({ type: 'integer', default: 0 }) queuePriority!: number;
+  @Column({ type: 'text', nullable: true }) waitReason!: WaitReason | null;
 }
