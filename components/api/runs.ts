@@ -5,6 +5,7 @@ import {
   runSummarySchema,
   runsResponseSchema,
   sweepSchema,
+  type RunDetail,
   type RunState,
   type RunSummary,
   type SweepRequest,
@@ -40,11 +41,18 @@ function listPath(filter: RunFilter): string {
   return text ? `/api/runs?${text}` : '/api/runs';
 }
 
+/**
+ * A waiting run's place in line changes when other teams' runs start or end,
+ * which this team hears nothing of: while one waits, look again every few seconds.
+ */
+const whileWaitingMs = 5000;
+
 /** `GET /api/runs?designId=&sweepId=`: newest first (at most 200). */
 export function useRuns(filter: RunFilter = {}) {
   return useQuery({
     queryKey: runListKey(filter),
     queryFn: ({ signal }) => apiGet(listPath(filter), runsResponseSchema, { signal }),
+    refetchInterval: (q) => (q.state.data?.runs.some((r) => r.state === 'queued') ? whileWaitingMs : false),
   });
 }
 
@@ -53,6 +61,7 @@ const runDetailQuery = (id: string) => ({
   queryKey: runDetailKey(id),
   queryFn: ({ signal }: { signal: AbortSignal }) => apiGet(runPath(id), runDetailSchema, { signal }),
   enabled: id.length > 0,
+  refetchInterval: (q: { state: { data?: RunDetail } }) => (q.state.data?.run.state === 'queued' ? whileWaitingMs : false),
 });
 
 /** `GET /api/runs/:id`: the frozen design, progress, trace and (when finished) the result. */

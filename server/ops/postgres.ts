@@ -108,6 +108,19 @@ export function stopCluster(cluster: Cluster): void {
   if (bin) asPostgres(bin, ['pg_ctl', 'stop', '-m', 'fast', '-D', cluster.dataDir], '/');
 }
 
+/**
+ * Stops or starts a private cluster as an operator would (`pg_ctl … -m fast`
+ * disconnects every client at once): the fault tests and the soak benchmark
+ * use it to prove the stack rides through a database restart.
+ */
+export function controlCluster(dataDir: string, action: 'stop' | 'start'): void {
+  const bin = pgBin();
+  if (!bin) throw new Error('PostgreSQL server binaries not found');
+  const args = action === 'stop' ? ['pg_ctl', 'stop', '-m', 'fast', '-w', '-D', dataDir] : ['pg_ctl', 'start', '-w', '-t', '60', '-D', dataDir, '-l', join(dataDir, '..', 'postgres.log')];
+  const r = asPostgres(bin, args, '/');
+  if (r.status !== 0) throw new Error(`pg_ctl ${action} failed: ${String(r.stderr || r.stdout)}`);
+}
+
 function uid(name: string): number {
   return Number(execFileSync('id', ['-u', name], { encoding: 'utf8' }).trim());
 }

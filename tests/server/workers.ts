@@ -6,11 +6,11 @@ const root = join(__dirname, '..', '..');
 export type SpawnedWorker = { child: ChildProcess; pid: number; output: string[] };
 
 /** Starts a real worker process on a private queue, so a test controls which workers see its runs. */
-export function spawnWorker(queue: string, staleSeconds = 3): Promise<SpawnedWorker> {
+export function spawnWorker(queue: string, staleSeconds = 3, env: Record<string, string> = {}): Promise<SpawnedWorker> {
   // node itself with tsx's loader, so the child's pid is the worker's (it appears in worker_id).
   const child = spawn(process.execPath, ['--require', 'tsx/cjs', 'worker/main.ts'], {
     cwd: root,
-    env: { ...process.env, FROSTGRADE_PROFILE: 'test', NODE_ENV: 'test', RUN_QUEUE: queue, RUN_STALE_SECONDS: String(staleSeconds) },
+    env: { ...process.env, FROSTGRADE_PROFILE: 'test', NODE_ENV: 'test', RUN_QUEUE: queue, RUN_STALE_SECONDS: String(staleSeconds), ...env },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   const output: string[] = [];

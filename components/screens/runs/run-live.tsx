@@ -14,8 +14,14 @@ import { liveDopingSeries, mergeTrace, objectiveSeries } from './live-series';
 import { ProgressBar } from './progress-bar';
 import { asObjective, formatDuration, formatObjective, objectiveInfo, quantity } from './run-format';
 
+/** "next in line" or "number 4 in line". */
+export function placeInLine(position: number): string {
+  return position === 1 ? 'next in line' : `number ${position} in line`;
+}
+
 function caption(detail: RunDetail, p: RunProgress | null): string {
-  if (detail.run.state === 'queued') return `Queued since ${formatDateTime(detail.run.createdAt)}: waiting for a free worker`;
+  const w = detail.run.waiting;
+  if (detail.run.state === 'queued') return `Queued since ${formatDateTime(detail.run.createdAt)} · ${w ? placeInLine(w.position) : 'waiting for a free worker'}`;
   if (!p) return 'Starting: computing the baselines';
   return `${p.phase} · ${formatDuration(p.elapsedSeconds)} elapsed · ${p.evaluations} leg solves · the percentage is an estimate`;
 }
@@ -45,6 +51,11 @@ export function RunLive({ detail, live }: { detail: RunDetail; live: RunProgress
     <>
       <Section title="Progress" hint="Everyone watching sees the same numbers; you can leave this page, the run goes on.">
         <ProgressBar fraction={p?.fractionDone ?? detail.run.fractionDone} label="Run progress" caption={caption(detail, p)} testID="run-progress" />
+        {detail.run.waiting ? (
+          <AppText variant="caption" tone="muted" testID="run-waiting">
+            {detail.run.waiting.reason}
+          </AppText>
+        ) : null}
         <ConnectionLine state={live.connection} />
         <BestSoFar detail={detail} p={p} />
         {can('runs.launch') ? <CancelRun runId={detail.run.id} /> : null}

@@ -9,6 +9,7 @@ import { Glyph } from '@/components/ui/glyph';
 import { AppText } from '@/components/ui/text';
 import { ProgressBar } from './progress-bar';
 import { asObjective, formatObjective, objectiveInfo } from './run-format';
+import { placeInLine } from './run-live';
 import { RunStateBadge } from './run-state-badge';
 
 export type RunRowProps = {
@@ -57,8 +58,13 @@ function RowBody({ run, live, showDesign, sweepLabel }: Omit<RunRowProps, 'selec
           compact
           fraction={live?.fractionDone ?? run.fractionDone}
           label={`Progress of the run of ${run.designName}`}
-          caption={live?.phase ?? (run.state === 'queued' ? 'waiting for a worker' : 'running')}
+          caption={live?.phase ?? (run.state === 'queued' ? `waiting: ${run.waiting ? placeInLine(run.waiting.position) : 'for a worker'}` : 'running')}
         />
+      ) : null}
+      {run.state === 'queued' && run.waiting ? (
+        <AppText variant="caption" tone="muted" numberOfLines={2}>
+          {run.waiting.reason}
+        </AppText>
       ) : null}
       {run.state === 'failed' && run.error ? (
         <AppText variant="caption" tone="danger" numberOfLines={2}>
