@@ -4,6 +4,7 @@ import { Server, type Socket } from 'socket.io';
 import type { User } from 'lucia';
 import type { Auth } from '../auth/lucia';
 import { eventChannel, type TeamEvent } from './events';
+import { endMemberSockets } from './session-end';
 
 export type RealtimeOptions = { auth: Auth; databaseUrl: string; appOrigin: string; allowLoopback: boolean };
 
@@ -56,6 +57,7 @@ export async function attachRealtime(http: HttpServer, o: RealtimeOptions, canWa
   listener.on('notification', (n) => {
     if (n.channel !== eventChannel || !n.payload) return;
     const e = JSON.parse(n.payload) as TeamEvent;
+    if (endMemberSockets(io, e)) return;
     io.to(e.room ? objectRoom(e.teamId, e.room) : teamRoom(e.teamId)).emit(e.event, e.payload);
   });
   await listener.query(`LISTEN ${eventChannel}`);

@@ -46,7 +46,7 @@ const sendSheetJob = (boss: PgBoss, m: EntityManager, orderId: string) =>
   boss.send(queues.growthSheet, { orderId }, { db: { executeSql: async (text: string, values: unknown[]) => ({ rows: await m.query(text, values) }) } });
 
 async function mailRoles(ds: DataSource, team: Team, roles: string[]): Promise<string[]> {
-  const rows: Array<{ email: string }> = await ds.query('SELECT email FROM app_user WHERE team_id = $1 AND role = ANY($2)', [team.id, roles]);
+  const rows: Array<{ email: string }> = await ds.query('SELECT email FROM app_user WHERE team_id = $1 AND role = ANY($2) AND removed_at IS NULL', [team.id, roles]);
   return rows.map((r) => r.email);
 }
 
@@ -77,6 +77,7 @@ export async function releaseRun(d: GrowthDeps, team: Team, actor: Actor, runId:
   return dto(order.o, order.designName, actor.displayName);
 }
 
+/** Who released each order: history, so a member since removed keeps their name. */
 async function withNames(m: EntityManager, orders: GrowthOrder[]): Promise<GrowthOrderDto[]> {
   if (orders.length === 0) return [];
   const runs: Array<{ id: string; name: string }> = await m.query(`SELECT id, design_snapshot->>'name' AS name FROM run WHERE id = ANY($1)`, [orders.map((o) => o.runId)]);
@@ -157,7 +158,7 @@ export async function uploadMeasurements(d: GrowthDeps, team: Team, actor: Actor
     await event(m, o.id, actor.displayName, 'measured', null, null, `${parsed.points.length} positions uploaded`);
   });
   const flagged = report.verdicts.filter((v) => v.verdict === 'low' || v.verdict === 'high');
-  const to: Array<{ email: string }> = await d.ds.query(`SELECT DISTINCT email FROM app_user WHERE id = $1 OR id IN (SELECT user_id FROM design_follower WHERE design_id = $2)`, [o.releasedBy, run.designId]);
+  const to: Array<{ email: string }> = await d.ds.query(`SELECT DISTINCT email FROM app_user WHERE removed_at IS NULL AND (id = $1 OR id IN (SELECT user_id FROM design_follower WHERE design_id = $2))`, [o.releasedBy, run.designId]);
   if (to.length > 0) {
     await d.mailer.send({
       to: to.map((r) => r.email),
