@@ -21,10 +21,10 @@ function cancelNote(run: Finished): string {
   return run.result ? 'The run was cancelled; this is the best design found before it stopped.' : 'The run was cancelled before its first start finished; there is no design to keep.';
 }
 
-/** The launcher and every follower of the design hear how a run ended. */
+/** The launcher and every follower of the design hear how a run ended; a removed member hears nothing. */
 export async function mailRunFinished(ds: DataSource, mailer: Mailer, appOrigin: string, run: Finished): Promise<void> {
   const rows: Array<{ email: string }> = await ds.query(
-    `SELECT DISTINCT u.email FROM app_user u WHERE u.id = $1 OR u.id IN (SELECT user_id FROM design_follower WHERE design_id = $2)`,
+    `SELECT DISTINCT u.email FROM app_user u WHERE u.removed_at IS NULL AND (u.id = $1 OR u.id IN (SELECT user_id FROM design_follower WHERE design_id = $2))`,
     [run.launchedBy, run.designId],
   );
   if (rows.length === 0) return;

@@ -7,7 +7,7 @@ import {
   type GrowthOrderDetail,
   type ReleaseRequest,
 } from '@/shared/api/growth';
-import { apiBaseUrl, apiGet, apiSend } from './client';
+import { ApiError, apiBaseUrl, apiGet, apiSend } from './client';
 import { measurementReportSchema } from '@/shared/api/growth-documents';
 import type { PickedFile } from './picked-file';
 import { appendFile } from './upload-form';
@@ -50,6 +50,24 @@ function useStoreDetail(id: string) {
   };
 }
 
+/**
+ * A 409 on `state` means someone closed the order meanwhile: reload it, so
+ * the page shows the verdict and stops offering what the API now refuses.
+ */
+function useReloadWhenClosed() {
+  const queryClient = useQueryClient();
+  return (error: Error) => {
+    if (error instanceof ApiError && error.status === 409 && error.fieldErrors.some((e) => e.field === 'state')) {
+      void queryClient.invalidateQueries({ queryKey: growthQueryKey });
+    }
+  };
+}
+
+/** What every write on one order does with its answer. */
+function useOrderWrite(id: string) {
+  return { onSuccess: useStoreDetail(id), onError: useReloadWhenClosed() };
+}
+
 export const releaseResponseSchema = z.object({ order: growthOrderSchema });
 export type ReleaseVariables = { runId: string; body: ReleaseRequest };
 
@@ -67,10 +85,10 @@ export type NextStateVariables = { state: 'accepted' | 'growing' | 'grown' | 'me
 
 /** `PUT /api/growth-orders/:id/state`: the grower's next step, with an optional note. */
 export function useAdvanceOrder(id: string) {
-  const onSuccess = useStoreDetail(id);
+  const handlers = useOrderWrite(id);
   return useMutation({
     mutationFn: (body: NextStateVariables) => apiSend('PUT', `${orderPath(id)}/state`, { json: body }, growthOrderDetailSchema),
-    onSuccess,
+    ...handlers,
   });
 }
 
@@ -78,10 +96,10 @@ export type CloseVariables = { verdict: 'approved' | 'rejected'; reason: string 
 
 /** `POST /api/growth-orders/:id/close`: the physicist's verdict and reason. */
 export function useCloseOrder(id: string) {
-  const onSuccess = useStoreDetail(id);
+  const handlers = useOrderWrite(id);
   return useMutation({
     mutationFn: (body: CloseVariables) => apiSend('POST', `${orderPath(id)}/close`, { json: body }, growthOrderDetailSchema),
-    onSuccess,
+    ...handlers,
   });
 }
 
@@ -89,10 +107,10 @@ export type SheetSettingsVariables = { zones?: number; lossBudget?: number; meas
 
 /** `PUT /api/growth-orders/:id/sheet`: K, loss budget (K) and check temperature (K); budget and temperature recompute. */
 export function useUpdateSheetSettings(id: string) {
-  const onSuccess = useStoreDetail(id);
+  const handlers = useOrderWrite(id);
   return useMutation({
     mutationFn: (body: SheetSettingsVariables) => apiSend('PUT', `${orderPath(id)}/sheet`, { json: body }, growthOrderDetailSchema),
-    onSuccess,
+    ...handlers,
   });
 }
 
@@ -102,6 +120,7 @@ export type UploadMeasurementsVariables = { file: PickedFile; temperature?: numb
 /** `POST /api/growth-orders/:id/measurements` (multipart `file`, optional `temperature` in K): all or nothing. */
 export function useUploadMeasurements(id: string) {
   const queryClient = useQueryClient();
+  const onError = useReloadWhenClosed();
   return useMutation({
     mutationFn: ({ file, temperature }: UploadMeasurementsVariables) => {
       const form = new FormData();
@@ -110,6 +129,7 @@ export function useUploadMeasurements(id: string) {
       return apiSend('POST', `${orderPath(id)}/measurements`, { form }, uploadReportSchema);
     },
     onSuccess: () => queryClient.invalidateQueries({ queryKey: growthQueryKey }),
+    onError,
   });
 }
 

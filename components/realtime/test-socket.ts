@@ -12,6 +12,8 @@ type Listener = (...args: unknown[]) => void;
 export class FakeSocket {
   connected = false;
   disconnected = false;
+  /** Times the page asked to connect again itself (socket.io reconnects only after transport trouble). */
+  connectCalls = 0;
   readonly emitted: Array<{ event: string; args: unknown[] }> = [];
   private readonly listeners = new Map<string, Listener[]>();
 
@@ -29,6 +31,11 @@ export class FakeSocket {
 
   removeAllListeners(): this {
     this.listeners.clear();
+    return this;
+  }
+
+  connect(): this {
+    this.connectCalls += 1;
     return this;
   }
 
@@ -50,6 +57,12 @@ export class FakeSocket {
   serverConnect(): void {
     this.connected = true;
     this.serverEmit('connect');
+  }
+
+  /** The server closes the socket: 'io server disconnect' as socket.io names it, or a lost transport. */
+  serverDisconnect(reason: 'io server disconnect' | 'transport close'): void {
+    this.connected = false;
+    this.serverEmit('disconnect', reason);
   }
 
   serverEmit(event: string, payload?: unknown): void {

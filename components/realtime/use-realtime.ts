@@ -1,4 +1,5 @@
 import { useEffect, useRef, useState } from 'react';
+import { useQueryClient } from '@tanstack/react-query';
 import type { Socket } from 'socket.io-client';
 import { runProgressSchema, type RunProgress } from '@/shared/api/runs';
 import { runStateEventSchema, type RunStateEvent } from './events';
@@ -29,6 +30,7 @@ export type RealtimeOptions = {
  * the shared schemas before they reach the handlers.
  */
 export function useRealtime({ rooms, enabled, onProgress, onState, onWatching }: RealtimeOptions): ConnectionState {
+  const queryClient = useQueryClient();
   const [state, setState] = useState<ConnectionState>(enabled ? 'connecting' : 'off');
   const socketRef = useRef<Socket | null>(null);
   const roomsRef = useRef<readonly string[]>(rooms);
@@ -42,7 +44,7 @@ export function useRealtime({ rooms, enabled, onProgress, onState, onWatching }:
       setState('off');
       return undefined;
     }
-    const socket = openSocket();
+    const socket = openSocket(queryClient);
     socketRef.current = socket;
     setState('connecting');
     socket.on('connect', () => {
@@ -71,7 +73,7 @@ export function useRealtime({ rooms, enabled, onProgress, onState, onWatching }:
       socket.removeAllListeners();
       socket.disconnect();
     };
-  }, [enabled]);
+  }, [enabled, queryClient]);
 
   const key = rooms.join('|');
   useEffect(() => {

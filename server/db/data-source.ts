@@ -9,11 +9,12 @@ import { GrowthOrders1764626400000 } from './migrations/1764626400000-growth-ord
 import { ModuleDesigns1764630000000 } from './migrations/1764630000000-module-designs';
 import { MoreStarts1764633600000 } from './migrations/1764633600000-more-starts';
 import { RunQueue1764640800000 } from './migrations/1764640800000-run-queue';
+import { MemberRemoval1764637200000 } from './migrations/1764637200000-member-removal';
 import { SnakeNamingStrategy } from './naming';
 import { quietPoolErrors } from './pool-errors';
 
 /** Migrations in order; a new one is appended here as well as written. */
-export const migrations = [Foundation1764612000000, FamilyVersions1764615600000, Accounts1764619200000, DesignsAndRuns1764622800000, GrowthOrders1764626400000, ModuleDesigns1764630000000, MoreStarts1764633600000, RunQueue1764640800000];
+export const migrations = [Foundation1764612000000, FamilyVersions1764615600000, Accounts1764619200000, DesignsAndRuns1764622800000, GrowthOrders1764626400000, ModuleDesigns1764630000000, MoreStarts1764633600000, MemberRemoval1764637200000, RunQueue1764640800000];
 
 export function createDataSource(databaseUrl: string, applicationName = 'frostgrade'): DataSource {
   return new DataSource({

@@ -1,6 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { MulterError } from 'multer';
 import { isDatabaseUnavailable } from '../db/db-errors';
+import { uniqueConflict } from './unique-conflict';
 
 export type FieldError = { field: string; message: string };
 
@@ -61,7 +62,7 @@ export function errorHandler(logStacks: boolean): ErrorRequestHandler {
   };
 }
 
-/** Errors raised by body-parser and multer, mapped to the field the user can fix. */
+/** Errors raised by body-parser, multer and unique indexes, mapped to the field the user can fix. */
 function clientError(err: unknown): HttpError | null {
   if (err instanceof MulterError) {
     if (err.code === 'LIMIT_FILE_SIZE') return new HttpError(413, 'The file is larger than 5 MB.', [{ field: 'file', message: 'too large' }], 'PayloadTooLarge');
@@ -71,5 +72,7 @@ function clientError(err: unknown): HttpError | null {
   if (type === 'entity.too.large') return new HttpError(413, 'Request body is too large.', [{ field: 'body', message: 'too large' }], 'PayloadTooLarge');
   if (type === 'entity.parse.failed') return new HttpError(400, 'Request body is not valid JSON.', [{ field: 'body', message: 'not valid JSON' }], 'BadRequest');
   if (type === 'charset.unsupported' || type === 'encoding.unsupported') return new HttpError(415, 'Unsupported request encoding.', [{ field: 'body', message: 'unsupported encoding' }], 'UnsupportedMediaType');
+  const conflict = uniqueConflict(err);
+  if (conflict) return new HttpError(409, `Conflict: ${conflict.message}.`, [conflict], 'Conflict');
   return null;
 }

@@ -4,6 +4,7 @@ import type { User } from 'lucia';
 import type { Auth } from '../auth/lucia';
 import type { TeamEvent } from '../db/events';
 import { startEventRelay, type RelayStatus } from './event-relay';
+import { endMemberSockets } from './session-end';
 
 export type RealtimeOptions = { auth: Auth; databaseUrl: string; appOrigin: string; allowLoopback: boolean };
 
@@ -52,6 +53,7 @@ export async function attachRealtime(http: HttpServer, o: RealtimeOptions, canWa
     });
   });
   const relay = await startEventRelay(o.databaseUrl, (e: TeamEvent) => {
+    if (endMemberSockets(io, e)) return;
     io.to(e.room ? objectRoom(e.teamId, e.room) : teamRoom(e.teamId)).emit(e.event, e.payload);
   });
   return {

@@ -1,5 +1,5 @@
 import { randomBytes } from 'node:crypto';
-import type { DataSource } from 'typeorm';
+import { IsNull, type DataSource } from 'typeorm';
 import type { z } from 'zod';
 import type { MeResponse, resetConfirmSchema, signInRequestSchema, signUpRequestSchema } from '../../shared/api';
 import type { Auth } from '../auth/lucia';
@@ -10,6 +10,7 @@ import { AppUser, PasswordReset, Team } from '../db/entities';
 import { HttpError, ValidationError } from '../http/errors';
 import type { Mailer } from '../mail/mailer';
 import { resetMail } from '../mail/templates';
+import { activeByEmail } from './active-accounts';
 
 export type AccountDeps = { ds: DataSource; auth: Auth; mailer: Mailer; appOrigin: string };
 
@@ -30,7 +31,7 @@ export async function me(ds: DataSource, userId: string): Promise<MeResponse> {
 export async function signUp(d: AccountDeps, input: z.output<typeof signUpRequestSchema>): Promise<{ userId: string; sessionId: string }> {
   const passwordHash = await hashPassword(input.password);
   const userId = await d.ds.transaction(async (m) => {
-    if (await m.getRepository(AppUser).createQueryBuilder('u').where('lower(u.email) = :e', { e: input.email }).getExists()) {
+    if (await activeByEmail(m, input.email).getExists()) {
       throw new ValidationError([{ field: 'email', message: 'an account with this e-mail exists already: sign in, or reset its password' }]);
     }
     const team = await m.getRepository(Team).save(m.getRepository(Team).create({ name: input.teamName, slug: slugify(input.teamName) }));
@@ -48,7 +49,7 @@ export async function signIn(d: AccountDeps, input: z.output<typeof signInReques
     { key: `signin:account:${input.email}`, max: 8, windowSeconds: 15 * 60 },
     { key: `signin:address:${ip}`, max: 40, windowSeconds: 15 * 60 },
   ]);
-  const user = await d.ds.getRepository(AppUser).createQueryBuilder('u').addSelect('u.passwordHash').where('lower(u.email) = :e', { e: input.email }).getOne();
+  const user = await activeByEmail(d.ds.manager, input.email).addSelect('u.passwordHash').getOne();
   const ok = user ? await verifyPassword(user.passwordHash, input.password) : (await spendVerifyTime(input.password), false);
   if (!user || !ok) throw new HttpError(400, 'E-mail or password is wrong.', [{ field: 'password', message: 'e-mail or password is wrong' }], 'SignInFailed');
   const session = await d.auth.createSession(user.id, {});
@@ -61,7 +62,7 @@ export async function requestReset(d: AccountDeps, email: string, ip: string): P
     { key: `reset:account:${email}`, max: 3, windowSeconds: 60 * 60 },
     { key: `reset:address:${ip}`, max: 20, windowSeconds: 60 * 60 },
   ]);
-  const user = await d.ds.getRepository(AppUser).createQueryBuilder('u').where('lower(u.email) = :e', { e: email }).getOne();
+  const user = await activeByEmail(d.ds.manager, email).getOne();
   if (!user) return;
   const { token, hash } = newToken();
   const expiresAt = new Date(Date.now() + RESET_MINUTES * 60 * 1000);
@@ -75,7 +76,9 @@ export async function resetPassword(d: AccountDeps, input: z.output<typeof reset
   const userId = await d.ds.transaction(async (m) => {
     const reset = await m.getRepository(PasswordReset).createQueryBuilder('r').setLock('pessimistic_write')
       .where('r.tokenHash = :h', { h: hashToken(input.token) }).getOne();
-    if (!reset || reset.usedAt || reset.expiresAt.getTime() < Date.now()) {
+    // Removal spends a member's open links; this also refuses one a request racing the removal wrote.
+    const active = reset ? await m.getRepository(AppUser).existsBy({ id: reset.userId, removedAt: IsNull() }) : false;
+    if (!reset || !active || reset.usedAt || reset.expiresAt.getTime() < Date.now()) {
       throw new ValidationError([{ field: 'token', message: 'this reset link is invalid, used or expired: ask for a new one' }]);
     }
     await m.getRepository(PasswordReset).update({ id: reset.id }, { usedAt: new Date() });

@@ -30,6 +30,16 @@ export async function findOrder(m: EntityManager, team: Team, id: unknown, lock 
   return o;
 }
 
+/**
+ * An approved or rejected order is a record: no step, verdict, sheet change
+ * or upload changes it any more (a regrowth is a new release).
+ */
+function assertOpen(o: GrowthOrder): void {
+  if (o.state === 'approved' || o.state === 'rejected') {
+    throw new HttpError(409, `The order is closed (${o.state}); a closed order no longer changes — release the run again for a new batch.`, [{ field: 'state', message: `closed: ${o.state}` }], 'Conflict');
+  }
+}
+
 function dto(o: GrowthOrder, designName: string, releasedBy: string): GrowthOrderDto {
   return {
     id: o.id, runId: o.runId, designName, batch: o.batch, dueDate: o.dueDate, notes: o.notes, state: o.state, closeReason: o.closeReason,
@@ -46,7 +56,7 @@ const sendSheetJob = (boss: PgBoss, m: EntityManager, orderId: string) =>
   boss.send(queues.growthSheet, { orderId }, { db: { executeSql: async (text: string, values: unknown[]) => ({ rows: await m.query(text, values) }) } });
 
 async function mailRoles(ds: DataSource, team: Team, roles: string[]): Promise<string[]> {
-  const rows: Array<{ email: string }> = await ds.query('SELECT email FROM app_user WHERE team_id = $1 AND role = ANY($2)', [team.id, roles]);
+  const rows: Array<{ email: string }> = await ds.query('SELECT email FROM app_user WHERE team_id = $1 AND role = ANY($2) AND removed_at IS NULL', [team.id, roles]);
   return rows.map((r) => r.email);
 }
 
@@ -77,6 +87,7 @@ export async function releaseRun(d: GrowthDeps, team: Team, actor: Actor, runId:
   return dto(order.o, order.designName, actor.displayName);
 }
 
+/** Who released each order: history, so a member since removed keeps their name. */
 async function withNames(m: EntityManager, orders: GrowthOrder[]): Promise<GrowthOrderDto[]> {
   if (orders.length === 0) return [];
   const runs: Array<{ id: string; name: string }> = await m.query(`SELECT id, design_snapshot->>'name' AS name FROM run WHERE id = ANY($1)`, [orders.map((o) => o.runId)]);
@@ -106,6 +117,7 @@ export async function orderDetail(ds: DataSource, team: Team, id: unknown): Prom
 export async function changeState(ds: DataSource, team: Team, actor: Actor, id: unknown, input: z.output<typeof growthStateChangeSchema>): Promise<void> {
   await ds.transaction(async (m) => {
     const o = await findOrder(m, team, id, true);
+    assertOpen(o);
     const from = growerStates.indexOf(o.state as (typeof growerStates)[number]);
     const to = growerStates.indexOf(input.state);
     if (from < 0) throw new HttpError(409, `The order is ${o.state}; it can no longer change.`, [{ field: 'state', message: o.state }], 'Conflict');
@@ -119,7 +131,7 @@ export async function changeState(ds: DataSource, team: Team, actor: Actor, id: 
 export async function closeOrder(ds: DataSource, team: Team, actor: Actor, id: unknown, input: z.output<typeof closeOrderSchema>): Promise<void> {
   await ds.transaction(async (m) => {
     const o = await findOrder(m, team, id, true);
-    if (o.state === 'approved' || o.state === 'rejected') throw new HttpError(409, `The order is already ${o.state}.`, [{ field: 'verdict', message: o.state }], 'Conflict');
+    assertOpen(o);
     if (input.verdict === 'approved' && o.state !== 'measured') throw new ValidationError([{ field: 'verdict', message: 'approve an order once the grown piece has been measured' }]);
     await m.query('UPDATE growth_order SET state = $2, close_reason = $3, updated_at = now() WHERE id = $1', [o.id, input.verdict, input.reason]);
     await event(m, o.id, actor.displayName, 'closed', o.state, input.verdict, input.reason);
@@ -130,6 +142,7 @@ export async function closeOrder(ds: DataSource, team: Team, actor: Actor, id: u
 export async function updateSheetSettings(d: GrowthDeps, team: Team, actor: Actor, id: unknown, input: z.output<typeof sheetSettingsSchema>): Promise<void> {
   await d.ds.transaction(async (m) => {
     const o = await findOrder(m, team, id, true);
+    assertOpen(o);
     const next = { zones: input.zones ?? o.zones, lossBudget: input.lossBudget ?? o.lossBudget, measureTemperature: input.measureTemperature ?? o.measureTemperature };
     const recompute = next.lossBudget !== o.lossBudget || next.measureTemperature !== o.measureTemperature;
     await m.query(`UPDATE growth_order SET zones = $2, loss_budget = $3, measure_temperature = $4, sheet_status = CASE WHEN $5 THEN 'computing' ELSE sheet_status END, updated_at = now() WHERE id = $1`,
@@ -144,6 +157,7 @@ export async function updateSheetSettings(d: GrowthDeps, team: Team, actor: Acto
 /** `file` is read only once the order is known to be the caller's: another team's order answers 404 first. */
 export async function uploadMeasurements(d: GrowthDeps, team: Team, actor: Actor, id: unknown, file: () => Buffer, temperature: number | undefined): Promise<Record<string, unknown>> {
   const o = await findOrder(d.ds.manager, team, id);
+  assertOpen(o);
   if (o.sheetStatus !== 'ready' || !o.sheet) throw new HttpError(409, 'The growth sheet is not ready yet.', [{ field: 'sheet', message: o.sheetStatus }], 'Conflict');
   const run = await d.ds.getRepository(Run).findOneByOrFail({ id: o.runId });
   const sheet = o.sheet as unknown as GrowthSheet;
@@ -153,11 +167,13 @@ export async function uploadMeasurements(d: GrowthDeps, team: Team, actor: Actor
   const input: ReportThreadInput = { caseJson: run.caseJson, sheet, zones: o.zones, points: parsed.points, temperature: t };
   const report = { ...(await runInThread<MeasurementReport>(join(__dirname, 'report-thread.ts'), input)), uploadWarnings: parsed.warnings };
   await d.ds.transaction(async (m) => {
+    // The report took a while: the order may have been closed meanwhile.
+    assertOpen(await findOrder(m, team, o.id, true));
     await m.query('INSERT INTO growth_measurement (order_id, uploaded_by, temperature, points, prediction) VALUES ($1, $2, $3, $4, $5)', [o.id, actor.displayName, t, JSON.stringify(parsed.points), JSON.stringify(report)]);
     await event(m, o.id, actor.displayName, 'measured', null, null, `${parsed.points.length} positions uploaded`);
   });
   const flagged = report.verdicts.filter((v) => v.verdict === 'low' || v.verdict === 'high');
-  const to: Array<{ email: string }> = await d.ds.query(`SELECT DISTINCT email FROM app_user WHERE id = $1 OR id IN (SELECT user_id FROM design_follower WHERE design_id = $2)`, [o.releasedBy, run.designId]);
+  const to: Array<{ email: string }> = await d.ds.query(`SELECT DISTINCT email FROM app_user WHERE removed_at IS NULL AND (id = $1 OR id IN (SELECT user_id FROM design_follower WHERE design_id = $2))`, [o.releasedBy, run.designId]);
   if (to.length > 0) {
     await d.mailer.send({
       to: to.map((r) => r.email),

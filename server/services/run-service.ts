@@ -122,7 +122,8 @@ export async function cancelRun(d: RunDeps, team: Team, id: unknown): Promise<Ru
     throw new HttpError(409, `The run has already ${now.state}.`, [{ field: 'state', message: now.state }], 'Conflict');
   }
   const run = await findRun(d.ds.manager, team, r.id);
-  return summarise(run, String(run.designSnapshot.name), run.launchedBy);
+  const who = await names(d.ds.manager, [run.launchedBy]);
+  return summarise(run, String(run.designSnapshot.name), who.get(run.launchedBy) ?? 'a former member');
 }
 
 async function names(m: EntityManager, userIds: string[]): Promise<Map<string, string>> {

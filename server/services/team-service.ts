@@ -1,5 +1,5 @@
 import { randomBytes } from 'node:crypto';
-import type { DataSource, EntityManager } from 'typeorm';
+import { IsNull, type DataSource, type EntityManager } from 'typeorm';
 import type { InvitationPreview, Member, Role, TeamResponse } from '../../shared/api';
 import type { Auth } from '../auth/lucia';
 import { hashPassword } from '../auth/passwords';
@@ -9,6 +9,8 @@ import { HttpError, NotFoundError, ValidationError } from '../http/errors';
 import { isUuid } from '../http/validate';
 import type { Mailer } from '../mail/mailer';
 import { invitationMail } from '../mail/templates';
+import { announceAccountEnded } from '../realtime/session-end';
+import { activeByEmail } from './active-accounts';
 
 const INVITE_DAYS = 7;
 
@@ -21,9 +23,11 @@ function stateOf(i: Invitation): 'pending' | 'accepted' | 'revoked' | 'expired' 
 }
 
 export async function teamOverview(ds: DataSource, team: Team): Promise<TeamResponse> {
-  const members = await ds.getRepository(AppUser).find({ where: { teamId: team.id }, order: { createdAt: 'ASC' } });
+  const everyone = await ds.getRepository(AppUser).find({ where: { teamId: team.id }, order: { createdAt: 'ASC' } });
+  const members = everyone.filter((u) => u.removedAt === null);
   const invitations = await ds.getRepository(Invitation).find({ where: { teamId: team.id }, order: { createdAt: 'DESC' }, take: 100 });
-  const names = new Map(members.map((m) => [m.id, m.displayName]));
+  // Invitations are history: one sent by a member since removed keeps their name.
+  const names = new Map(everyone.map((m) => [m.id, m.displayName]));
   return {
     members: members.map((m): Member => ({ id: m.id, email: m.email, displayName: m.displayName, role: m.role, joinedAt: m.createdAt.toISOString() })),
     invitations: invitations.map((i) => ({
@@ -34,7 +38,7 @@ export async function teamOverview(ds: DataSource, team: Team): Promise<TeamResp
 }
 
 export async function invite(d: TeamDeps, team: Team, inviter: { id: string; displayName: string }, email: string, role: Role): Promise<void> {
-  if (await d.ds.getRepository(AppUser).createQueryBuilder('u').where('lower(u.email) = :e', { e: email }).getExists()) {
+  if (await activeByEmail(d.ds.manager, email).getExists()) {
     throw new ValidationError([{ field: 'email', message: 'this address already has a Frostgrade account (one team per account)' }]);
   }
   const { token, hash } = newToken();
@@ -68,7 +72,7 @@ export async function acceptInvitation(d: TeamDeps, input: { token: string; pass
   const userId = await d.ds.transaction(async (m) => {
     const inv = await m.getRepository(Invitation).createQueryBuilder('i').setLock('pessimistic_write').where('i.tokenHash = :h', { h: hashToken(input.token) }).getOne();
     if (!inv || stateOf(inv) !== 'pending') throw new ValidationError([{ field: 'token', message: 'this invitation link is invalid, used, revoked or expired: ask your admin for a new one' }]);
-    if (await m.getRepository(AppUser).createQueryBuilder('u').where('lower(u.email) = :e', { e: inv.email }).getExists()) {
+    if (await activeByEmail(m, inv.email).getExists()) {
       throw new ValidationError([{ field: 'token', message: 'this address already has an account: sign in instead' }]);
     }
     const id = randomBytes(15).toString('base64url');
@@ -83,31 +87,42 @@ export async function acceptInvitation(d: TeamDeps, input: { token: string; pass
 /** The team must keep an admin: the last one can be neither demoted nor removed. */
 async function assertAdminRemains(m: EntityManager, team: Team, member: AppUser, nextRole: Role | null): Promise<void> {
   if (member.role !== 'admin' || nextRole === 'admin') return;
-  const admins = await m.getRepository(AppUser).countBy({ teamId: team.id, role: 'admin' });
+  const admins = await m.getRepository(AppUser).countBy({ teamId: team.id, role: 'admin', removedAt: IsNull() });
   if (admins <= 1) throw new HttpError(409, 'The team needs at least one admin: make someone else admin first.', [{ field: 'role', message: 'last admin' }], 'Conflict');
 }
 
 async function memberOf(m: EntityManager, team: Team, id: string): Promise<AppUser> {
-  const member = await m.getRepository(AppUser).findOneBy({ id, teamId: team.id });
+  const member = await m.getRepository(AppUser).findOneBy({ id, teamId: team.id, removedAt: IsNull() });
   if (!member) throw new NotFoundError('member');
   return member;
 }
 
+/** A new role applies to the next request at once; open sockets reconnect to carry it. */
 export async function changeRole(d: Pick<TeamDeps, 'ds'>, team: Team, id: string, role: Role): Promise<void> {
   await d.ds.transaction(async (m) => {
     await m.query('SELECT pg_advisory_xact_lock(hashtext($1))', [`team-admins:${team.id}`]);
     const member = await memberOf(m, team, id);
     await assertAdminRemains(m, team, member, role);
+    if (member.role === role) return;
     await m.getRepository(AppUser).update({ id: member.id }, { role });
+    await announceAccountEnded(m, team.id, { userId: member.id, reason: 'role' });
   });
 }
 
-/** The account goes, and its sessions with it (ON DELETE CASCADE). */
+/**
+ * Soft removal: the account row stays, so runs, releases, uploads and growth
+ * events keep the person's name; it no longer signs in, owns its address,
+ * follows designs or receives mail, and its sessions and sockets end now.
+ */
 export async function removeMember(d: Pick<TeamDeps, 'ds'>, team: Team, id: string): Promise<void> {
   await d.ds.transaction(async (m) => {
     await m.query('SELECT pg_advisory_xact_lock(hashtext($1))', [`team-admins:${team.id}`]);
     const member = await memberOf(m, team, id);
     await assertAdminRemains(m, team, member, null);
-    await m.getRepository(AppUser).delete({ id: member.id });
+    await m.getRepository(AppUser).update({ id: member.id }, { removedAt: () => 'now()' });
+    await m.query('DELETE FROM design_follower WHERE user_id = $1', [member.id]);
+    await m.query('UPDATE password_reset SET used_at = now() WHERE user_id = $1 AND used_at IS NULL', [member.id]);
+    await m.query('DELETE FROM user_session WHERE user_id = $1', [member.id]);
+    await announceAccountEnded(m, team.id, { userId: member.id, reason: 'removed' });
   });
 }

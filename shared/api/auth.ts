@@ -50,3 +50,11 @@ export type Member = z.infer<typeof memberSchema>;
 export type Invitation = z.infer<typeof invitationSchema>;
 export type TeamResponse = z.infer<typeof teamResponseSchema>;
 export type InvitationPreview = z.infer<typeof invitationPreviewSchema>;
+
+/**
+ * Between processes (PostgreSQL NOTIFY → socket server), never sent to a
+ * browser: this member's sockets must close, because they were removed or
+ * their role changed (a reconnect then carries the new role).
+ */
+export const accountEndedSchema = z.object({ userId: z.string(), reason: z.enum(['removed', 'role']) });
+export type AccountEnded = z.infer<typeof accountEndedSchema>;

@@ -114,6 +114,39 @@ describe('accounts in a real browser', () => {
     await phone.close();
   });
 
+  it('removing a member signs their open page out at once; the team list drops them', async () => {
+    const member = fresh('leaving');
+    const password = 'a leaving member passphrase';
+    await makeMember(adminSession, member, password);
+    const leaver = await openBrowser();
+    try {
+      const theirs = await leaver.newPage('phone');
+      await signIn(theirs, member, password);
+      // The growth page keeps a socket open: the server closes it on removal.
+      await theirs.goto(`${baseUrl}/growth`);
+      await shellNav(theirs).waitFor({ state: 'visible', timeout: 30_000 });
+
+      const page = await adminSession.newPage('desktop');
+      await page.goto(`${baseUrl}/team`);
+      const row = visible(page, `member-${member}`);
+      const name = `Test ${member.split('@')[0]}`;
+      await row.getByRole('button', { name: `Remove ${name}` }).click();
+      const confirm = row.getByTestId('confirm-remove');
+      await expectText(confirm, /signed out everywhere at once[\s\S]*runs, releases, uploads and growth steps stay with the team under their name/);
+      await confirm.scrollIntoViewIfNeeded();
+      await saveScreenshot(page, 'team-remove-confirm-desktop');
+      await confirm.getByTestId('confirm').click();
+      await visible(page, `member-${member}`).waitFor({ state: 'detached', timeout: 15_000 });
+      await page.close();
+
+      await theirs.waitForURL(/\/sign-in/, { timeout: 15_000 });
+      await saveScreenshot(theirs, 'removed-member-signed-out-phone');
+      expect(leaver.pageErrors).toEqual([]);
+    } finally {
+      await leaver.close();
+    }
+  });
+
   it('resets a password through the e-mailed link: the old one is refused, the new one works', async () => {
     const member = fresh('reset');
     const oldPassword = 'the first long passphrase';

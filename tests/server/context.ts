@@ -54,7 +54,7 @@ export function agent(ctx: TestContext): ReturnType<typeof request.agent> {
 
 /** A client signed in as the given account, without the sign-in route (which is rate-limited). */
 export async function signedIn(ctx: TestContext, email: string): Promise<ReturnType<typeof request.agent>> {
-  const [row] = await ctx.ds.query('SELECT id FROM app_user WHERE lower(email) = lower($1)', [email]);
+  const [row] = await ctx.ds.query('SELECT id FROM app_user WHERE lower(email) = lower($1) AND removed_at IS NULL', [email]);
   if (!row) throw new Error(`no account ${email}`);
   const session = await ctx.auth.createSession((row as { id: string }).id, {});
   return agent(ctx).set('Cookie', ctx.auth.createSessionCookie(session.id).serialize());

@@ -82,7 +82,17 @@ it('release → sheet (K = 1 is the best uniform leg) → grower steps → measu
   expect(closed.order.state).toBe('rejected');
   expect(closed.timeline.map((e) => e.toState ?? e.kind)).toEqual(['requested', 'accepted', 'growing', 'grown', 'measured', 'measured', 'rejected']);
   expect(closed.timeline.map((e) => e.by)).toContain('Greta Moreau');
-  expect((await grower.put(`/api/growth-orders/${orderId}/state`).send({ state: 'measured' })).status).toBe(409);
+  // A closed order is a record: no step, upload, sheet change or second verdict; each 409 names `state`.
+  const refusals = [
+    await grower.put(`/api/growth-orders/${orderId}/state`).send({ state: 'measured' }),
+    await grower.post(`/api/growth-orders/${orderId}/measurements`).attach('file', Buffer.from(lines.join('\n')), 'again.csv'),
+    await physicist.put(`/api/growth-orders/${orderId}/sheet`).send({ zones: 2 }),
+    await physicist.put(`/api/growth-orders/${orderId}/sheet`).send({ lossBudget: 2 }),
+    await physicist.post(`/api/growth-orders/${orderId}/close`).send({ verdict: 'rejected', reason: 'twice' }),
+  ];
+  for (const r of refusals) expect([r.status, r.body.errors?.[0]?.field, r.body.message]).toEqual([409, 'state', expect.stringMatching(/closed \(rejected\)/)]);
+  const after = growthOrderDetailSchema.parse((await physicist.get(`/api/growth-orders/${orderId}`)).body);
+  expect([after.order.zones, after.order.lossBudget, after.measurements.length, after.timeline.length]).toEqual([closed.order.zones, closed.order.lossBudget, closed.measurements.length, closed.timeline.length]);
 
   const csv = await grower.get(`/api/growth-orders/${orderId}/sheet.csv`);
   expect(csv.text).toMatch(/Model predictions: verify/);

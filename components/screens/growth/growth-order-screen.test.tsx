@@ -128,6 +128,20 @@ describe('GrowthOrderScreen: actions', () => {
     expect(await screen.findByTestId('close-reason')).toBeOnTheScreen();
   });
 
+  it('a change refused because the order was closed meanwhile reloads it: the verdict shows, the actions go', async () => {
+    let current = detail('grown');
+    show(() => current, 'physicist', {
+      [`PUT ${orderUrl}/sheet`]: () => {
+        current = detail('rejected');
+        return { status: 409, body: { name: 'Conflict', message: 'The order is closed (rejected).', errors: [{ field: 'state', message: 'closed: rejected' }] } };
+      },
+    });
+    fireEvent.changeText(await screen.findByTestId('field-loss-budget'), '2');
+    await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Apply settings' })));
+    await waitFor(() => expect(screen.getByTestId('order-state')).toHaveTextContent(/Rejected/));
+    for (const id of ['close-order', 'sheet-settings']) expect(screen.queryByTestId(id)).toBeNull();
+  });
+
   it('refreshes the order when the team room says it changed', async () => {
     let current = detail('requested');
     show(() => current, 'viewer');

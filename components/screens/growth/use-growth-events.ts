@@ -18,7 +18,7 @@ export function useGrowthEvents(enabled = true): void {
   const queryClient = useQueryClient();
   useEffect(() => {
     if (!enabled) return undefined;
-    const socket = openSocket();
+    const socket = openSocket(queryClient);
     socket.on('growth:changed', (raw: unknown) => {
       const parsed = growthChangedSchema.safeParse(raw);
       if (!parsed.success) return;

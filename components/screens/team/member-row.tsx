@@ -29,7 +29,7 @@ function RemoveStep({ member, onCancel }: { member: Member; onCancel: () => void
     <>
       <ConfirmBox
         question={`Remove ${member.displayName} from the team?`}
-        consequence="Their account and every session of it end at once. Families, designs and runs they made stay with the team."
+        consequence={`${member.displayName} is signed out everywhere at once and no longer gets Frostgrade mail. Their runs, releases, uploads and growth steps stay with the team under their name; their address can be invited again.`}
         confirmLabel={`Remove ${member.displayName}`}
         busyLabel="Removing…"
         busy={remove.isPending}

@@ -83,6 +83,8 @@ describe('TeamScreen', () => {
     fireEvent.press(screen.getByRole('button', { name: 'Remove Piet Jansen' }));
     const confirm = screen.getByTestId('confirm-remove');
     expect(confirm).toHaveTextContent(/Remove Piet Jansen from the team\?/);
+    expect(confirm).toHaveTextContent(/Piet Jansen is signed out everywhere at once/);
+    expect(confirm).toHaveTextContent(/runs, releases, uploads and growth steps stay with the team under their name/);
     expect(requests).toHaveLength(1);
 
     fireEvent.press(within(confirm).getByTestId('confirm'));

@@ -25,4 +25,8 @@ export class AppUser {
 
   @CreateDateColumn({ type: 'timestamptz' })
   createdAt!: Date;
+
+  /** Set when an admin removes the member: the row stays so history keeps the name. */
+  @Column({ type: 'timestamptz', nullable: true })
+  removedAt!: Date | null;
 }
