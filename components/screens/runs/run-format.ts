@@ -91,3 +91,8 @@ export function runChoiceLabel(r: RunSummary): string {
   const o = asObjective(r.objective);
   return `${r.designName} · ${objectiveInfo[o].symbol} ${formatObjective(o, r.best, 3)} · ${formatDay(r.createdAt)}`;
 }
+
+/** "next in line" or "number 4 in line", for a queued run. */
+export function placeInLine(position: number): string {
+  return position === 1 ? 'next in line' : `number ${position} in line`;
+}

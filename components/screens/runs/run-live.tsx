@@ -12,12 +12,7 @@ import { ChartCard } from '@/components/charts/chart-card';
 import { ConnectionLine } from './connection-line';
 import { liveDopingSeries, mergeTrace, objectiveSeries } from './live-series';
 import { ProgressBar } from './progress-bar';
-import { asObjective, formatDuration, formatObjective, objectiveInfo, quantity } from './run-format';
-
-/** "next in line" or "number 4 in line". */
-export function placeInLine(position: number): string {
-  return position === 1 ? 'next in line' : `number ${position} in line`;
-}
+import { asObjective, formatDuration, formatObjective, objectiveInfo, placeInLine, quantity } from './run-format';
 
 function caption(detail: RunDetail, p: RunProgress | null): string {
   const w = detail.run.waiting;

@@ -8,8 +8,7 @@ import { Chip } from '@/components/ui/chip';
 import { Glyph } from '@/components/ui/glyph';
 import { AppText } from '@/components/ui/text';
 import { ProgressBar } from './progress-bar';
-import { asObjective, formatObjective, objectiveInfo } from './run-format';
-import { placeInLine } from './run-live';
+import { asObjective, formatObjective, objectiveInfo, placeInLine } from './run-format';
 import { RunStateBadge } from './run-state-badge';
 
 export type RunRowProps = {

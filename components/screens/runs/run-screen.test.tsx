@@ -41,7 +41,9 @@ describe('RunScreen', () => {
     expect(await screen.findByTestId('run-state')).toHaveTextContent(/Queued.*waiting for a worker/);
     const bar = screen.getByTestId('run-progress');
     expect(bar.props['aria-valuenow']).toBe(0);
-    expect(screen.getByText(/waiting for a free worker/)).toBeOnTheScreen();
+    // Its place in line and the server's reason for the wait, in words.
+    expect(screen.getByText(/number 2 in line/)).toBeOnTheScreen();
+    expect(screen.getByTestId('run-waiting')).toHaveTextContent(/1 run ahead of it in the queue/);
     expect(screen.getByRole('button', { name: 'Cancel run' })).toBeOnTheScreen();
     // Watching the run's own room once connected.
     act(() => lastSocket().serverConnect());

@@ -16,6 +16,7 @@ const runs = [
   runSummary('succeeded', { id: id(2), best: 87.27 }),
   runSummary('cancelled', { id: id(3), best: 85.1 }),
   runSummary('failed', { id: id(4) }),
+  runSummary('queued', { id: id(5), waiting: { position: 1, reason: 'Your team already has 4 runs running, the most one team may run at once (4); it starts when one of them ends.' } }),
 ];
 
 afterEach(() => {
@@ -28,8 +29,10 @@ describe('RunsScreen', () => {
     renderRoutes(routes, '/runs', sessionAs('viewer'));
     expect(await screen.findByTestId(`run-row-${id(2)}`)).toHaveTextContent(/Succeeded.*Best ΔT 87\.27\sK/);
     expect(screen.getByTestId(`run-row-${id(4)}`)).toHaveTextContent(/Failed.*no current gives a steady state/);
+    // A waiting run says where it stands and why, as the server worked it out.
+    expect(screen.getByTestId(`run-row-${id(5)}`)).toHaveTextContent(/Queued.*waiting: next in line.*the most one team may run at once \(4\)/);
     act(() => lastSocket().serverConnect());
-    expect(lastSocket().watched()).toEqual([`run:${id(1)}`]);
+    expect(lastSocket().watched()).toEqual([`run:${id(1)}`, `run:${id(5)}`]);
     act(() => lastSocket().serverEmit('run:progress', progress({ runId: id(1), fractionDone: 0.55, best: 86 })));
     expect(screen.getByTestId(`run-row-${id(1)}`)).toHaveTextContent(/Running.*Best so far ΔT 86\sK.*55 %/);
   });
