@@ -41,7 +41,11 @@ async function persist<T>(what: string, write: () => Promise<T>, giveUpMs = 10 *
     try {
       return await write();
     } catch (err) {
-      if (!isDatabaseUnavailable(err) || Date.now() - t0 > giveUpMs) throw err;
+      if (!isDatabaseUnavailable(err)) throw err;
+      if (Date.now() - t0 > giveUpMs) {
+        console.error(`[worker] gave up storing the run's ${what} after ${Math.round(giveUpMs / 1000)} s without a database; the sweeper will resume the run from its last checkpoint`);
+        throw err;
+      }
       await new Promise((r) => setTimeout(r, delay));
     }
   }
@@ -121,7 +125,7 @@ export async function runJob(d: RunJobDeps, runId: string, jobId: string): Promi
   clearInterval(checkpointTimer);
   try {
     if (lost) return 'superseded by another worker; nothing written';
-    await flushProgress().catch(() => undefined);
+    await persist('progress', flushProgress).catch(() => undefined);
     await persist('checkpoint', checkpointNow).catch(() => undefined);
 
     if (outcome.type === 'error') return await end(d, run, t0, { state: 'failed', error: outcome.field ? `the engine refused ${outcome.field}: ${outcome.message}` : outcome.message, result: null });

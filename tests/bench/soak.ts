@@ -51,12 +51,14 @@ async function main(): Promise<void> {
   };
   const tally: Tally = { latencies: [], byStatus: new Map(), outage503: 0 };
   let outage = false;
-  const call = async (cookie: string, method: string, path: string, body?: BodyInit, json = true): Promise<Response | null> => {
+  /** One request, timed to its last byte; the body comes back parsed (or null). */
+  const call = async (cookie: string, method: string, path: string, body?: BodyInit, json = true): Promise<{ status: number; body: unknown } | null> => {
     const t0 = performance.now();
     try {
-      const res = await fetch(`${origin}/api${path}`, { method, headers: { cookie, origin, ...(json && body ? { 'content-type': 'application/json' } : {}) }, body });
-      await res.arrayBuffer();
+      const r = await fetch(`${origin}/api${path}`, { method, headers: { cookie, origin, ...(json && body ? { 'content-type': 'application/json' } : {}) }, body });
+      const text = await r.text();
       tally.latencies.push(performance.now() - t0);
+      const res = { status: r.status, body: text.startsWith('{') ? JSON.parse(text) as unknown : null };
       const key = String(res.status);
       if (res.status === 503 && outage) tally.outage503 += 1;
       else tally.byStatus.set(key, (tally.byStatus.get(key) ?? 0) + 1);
@@ -72,15 +74,15 @@ async function main(): Promise<void> {
   const vic = await cookieOf('vic@northlight.example');
   const hana = await cookieOf('hana@harbour.example');
   const family = async (cookie: string): Promise<string> => {
-    const list = (await (await call(cookie, 'GET', '/families'))!.json()) as { families: Array<{ id: string; name: string }> };
+    const list = (await call(cookie, 'GET', '/families'))!.body as { families: Array<{ id: string; name: string }> };
     const found = list.families.find((f) => f.name.startsWith('NL-P7') || f.name === 'Harbour p-band');
     if (found) return found.id;
     const made = await call(cookie, 'POST', '/families', JSON.stringify({ name: 'Harbour p-band', source: 'soak: invented band parameters', definition: { kind: 'band', carrier: 'p', effectiveMass: 1, mobility300: 350, mobilityExponent: -1.5, latticeKappa300: 1, latticeKappaExponent: -1 } }));
-    return ((await made!.json()) as { family: { id: string } }).family.id;
+    return (made!.body as { family: { id: string } }).family.id;
   };
   const design = async (cookie: string, starts: number): Promise<string> => {
     const res = await call(cookie, 'POST', '/designs', JSON.stringify({ name: `Soak ${starts} starts ${Math.random().toString(36).slice(2, 7)}`, familyId: await family(cookie), lengthMm: 1.5, areaMm2: 1, hotSide: 300, minPerCm3: 1e18, maxPerCm3: 1e20, controlPoints: 5, starts }));
-    return ((await res!.json()) as { design: { id: string } }).design.id;
+    return (res!.body as { design: { id: string } }).design.id;
   };
   const designs = { piet: [await design(piet, 30), await design(piet, 120)], hana: [await design(hana, 30)] };
   const launched: string[] = [];
@@ -103,8 +105,9 @@ async function main(): Promise<void> {
         const list = team === 'hana' ? designs.hana : designs.piet;
         const res = await call(cookie, 'POST', `/designs/${list[Math.floor(Math.random() * list.length)]}/runs`);
         if (res?.status === 201) {
-          const id = ((await res.json().catch(() => ({ run: { id: '' } }))) as { run: { id: string } }).run.id;
-          if (id) { launched.push(id); socket.emit('watch', `run:${id}`); }
+          const id = (res.body as { run: { id: string } }).run.id;
+          launched.push(id);
+          socket.emit('watch', `run:${id}`);
         }
       } else if (physicist && team === 'piet' && roll < 0.12) {
         const form = new FormData();
