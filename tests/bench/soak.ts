@@ -18,7 +18,7 @@ import { createAuth } from '../../server/auth/auth-pool';
 import { readEnv } from '../../server/config/env';
 import { createDataSource } from '../../server/db/data-source';
 import { controlCluster } from '../../server/ops/postgres';
-import { freshDataRoot, npmStart } from '../server/npm-start';
+import { freshDataRoot, npmStart, type NpmStart } from '../server/npm-start';
 
 const seconds = Number(process.env.SOAK_SECONDS ?? 180);
 const userCount = Number(process.env.SOAK_USERS ?? 36);
@@ -41,6 +41,14 @@ type Tally = { latencies: number[]; byStatus: Map<string, number>; outage503: nu
 async function main(): Promise<void> {
   freshDataRoot(settings.pgDataRoot);
   const stack = await npmStart(settings);
+  try {
+    await soak(stack);
+  } finally {
+    await stack.interrupt();
+  }
+}
+
+async function soak(stack: NpmStart): Promise<void> {
   const origin = stack.origin;
   const env = readEnv({ ...process.env, FROSTGRADE_PROFILE: 'dev', PG_PORT: String(settings.pgPort) });
   const ds = await createDataSource(env.databaseUrl, 'frostgrade-soak').initialize();
@@ -187,7 +195,6 @@ async function main(): Promise<void> {
   for (const s of sockets) s.disconnect();
   await pool.end();
   await ds.destroy();
-  await stack.interrupt();
 }
 
 main().then(() => process.exit(0), (err: Error) => {

@@ -6,6 +6,7 @@ import {
   eventually,
   getJsonAs,
   openBrowser,
+  postJsonAs,
   saveScreenshot,
   signInAs,
   visible,
@@ -94,6 +95,25 @@ describe('a physicist optimises a leg in a real browser', () => {
     expect(second).toBeGreaterThan(first);
     await waitForDrawnLine(page, visible(page.getByTestId('live-doping')));
     await saveScreenshot(page, 'run-live-chart-desktop');
+    await page.close();
+  });
+
+  it.each<ViewportName>(['phone', 'desktop'])('a run waiting for the worker shows its place in line and why, at %s width', async (size) => {
+    // The stack has one worker: a long run holds it, so a second launch waits behind it.
+    const { design } = runDetailSchema.parse(await getJsonAs(physicist, `/api/runs/${runId}`));
+    const { familyId, lengthMm, areaMm2, hotSide, minPerCm3, maxPerCm3, controlPoints } = design;
+    const long = (await postJsonAs(physicist, '/api/designs', { name: `${designName} blocker ${size}`, familyId, lengthMm, areaMm2, hotSide, minPerCm3, maxPerCm3, controlPoints, starts: 5000 })) as { design: { id: string } };
+    const launch = async () => ((await postJsonAs(physicist, `/api/designs/${long.design.id}/runs`, {})) as { run: { id: string } }).run.id;
+    const blocker = await launch();
+    const waiting = await launch();
+    const page = await physicist.newPage(size);
+    await page.goto(`${baseUrl}/runs/${waiting}`);
+    expect(await visible(page.getByTestId('run-state')).innerText()).toMatch(/Queued/);
+    expect(await visible(page.getByTestId('run-progress')).innerText()).toMatch(/(next|number \d+) in line/);
+    expect(await visible(page.getByTestId('run-waiting')).innerText()).toMatch(/next in line for a free worker|\d+ runs? ahead of it in the queue/);
+    await saveScreenshot(page, `run-waiting-${size}`);
+    for (const id of [waiting, blocker]) await postJsonAs(physicist, `/api/runs/${id}/cancel`, {});
+    await visible(page.getByTestId('run-state')).filter({ hasText: 'Cancelled' }).waitFor({ timeout: 30_000 });
     await page.close();
   });
 

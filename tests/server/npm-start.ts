@@ -96,7 +96,9 @@ export function npmStart(s: NpmStartSettings): Promise<NpmStart> {
     },
     pidOf: (entry) => descendants(child.pid!).filter((p) => p.args.includes(entry)).map((p) => p.pid),
   };
-  return waitFor(/\[frostgrade\] ready in/, 300).then(() => handle, async (err: Error) => {
+  // A start that fails (a port in use, a migration error) exits at once: say so instead of waiting out the timeout.
+  const failedStart = exited.then((code) => { throw new Error(`npm start exited with code ${code} before it was ready:\n${output.slice(-15).join('\n')}`); });
+  return Promise.race([waitFor(/\[frostgrade\] ready in/, 300), failedStart]).then(() => handle, async (err: Error) => {
     await handle.interrupt();
     throw err;
   });
