@@ -12,19 +12,13 @@ import { bicubicCellValue, bicubicPatches, type BicubicPatches } from './bicubic
 import { CaseError } from './case-error';
 import { findInterval } from './cubic-spline';
 import type { MaterialFamily, Properties } from './material-family';
+import { gridLines } from './table-limits';
 
 export type TableRow = { perCm3: number; temperature: number; seebeck: number; sigma: number; kappa: number };
 
 /** Values closer than this (relative for doping, K for temperature) are the same grid line. */
 const SAME_DOPING = 1e-9;
 const SAME_TEMPERATURE = 1e-9;
-
-function gridLines(values: number[], same: (a: number, b: number) => boolean): number[] {
-  const sorted = [...values].sort((a, b) => a - b);
-  const lines: number[] = [];
-  for (const v of sorted) if (lines.length === 0 || !same(lines[lines.length - 1], v)) lines.push(v);
-  return lines;
-}
 
 /**
  * Builds the family; throws CaseError naming `${field}` (or one of its rows)

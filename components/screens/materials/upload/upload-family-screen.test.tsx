@@ -78,6 +78,18 @@ describe('UploadFamilyScreen', () => {
     expect(requests).toHaveLength(1);
   });
 
+  it('shows the server refusing a file over a size cap, naming the cap', async () => {
+    const message = 'the file has 2000 different carrier concentrations; a table holds at most 200 (a measurement campaign has tens)';
+    mockFetch({ status: 400, body: { name: 'ValidationError', message: `file: ${message}`, errors: [{ field: 'file', message }] } });
+    renderRoutes(routes, '/materials/upload', sessionAs('physicist'));
+    picks('sparse.csv', 66_000);
+    await choose();
+
+    expect(await screen.findByText('File refused')).toBeOnTheScreen();
+    expect(screen.getByText(`file: ${message}`)).toBeOnTheScreen();
+    expect(screen.queryByTestId('upload-preview')).toBeNull();
+  });
+
   it('refuses a file over the limit without uploading it', async () => {
     const { calls } = mockFetch({ status: 200, body: okPreview });
     renderRoutes(routes, '/materials/upload', sessionAs('physicist'));
