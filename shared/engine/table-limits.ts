@@ -1,3 +1,5 @@
+import { gridLines, sameDoping, sameTemperature } from './grid-lines';
+
 /**
  * How large a measured table may be, checked before anything proportional to
  * dopings × temperatures is built.
@@ -17,17 +19,6 @@ export const tableLimits = {
   /** Different temperatures: 2 K steps from 100 K to 700 K are 300. */
   temperatures: 300,
 } as const;
-
-/** Sorted grid lines of `values`: neighbours that are `same` collapse into the first. O(n log n), no grid. */
-export function gridLines(values: readonly number[], same: (a: number, b: number) => boolean): number[] {
-  const lines: number[] = [];
-  for (const v of [...values].sort((a, b) => a - b)) if (lines.length === 0 || !same(lines[lines.length - 1]!, v)) lines.push(v);
-  return lines;
-}
-
-/** Same doping within a relative 1e-9; same temperature within 1e-6 K. */
-export const sameDoping = (a: number, b: number): boolean => Math.abs(a - b) <= 1e-9 * Math.max(a, b);
-export const sameTemperature = (a: number, b: number): boolean => Math.abs(a - b) <= 1e-6;
 
 export type TableLimitBreach = { limit: keyof typeof tableLimits; found: number; max: number; message: string };
 

@@ -1,25 +1,9 @@
 import type { UploadIssue, UploadPreview } from '../api/family-upload';
 import { coverageDrawLimit, holesListed } from '../api/family-upload';
-import { gridLines, sameDoping, sameTemperature } from '../engine/table-limits';
+import { gridLines, lineOf, sameDoping, sameTemperature } from '../engine/grid-lines';
 
 export type GridRow = { line: number; perCm3: number; temperature: number };
 export type Coverage = UploadPreview['coverage'];
-
-/**
- * The grid line a value fell on: `gridLines` keeps the first value of each
- * cluster and the rest lie above it, so it is the last line at or below the
- * value (binary search; lines are sorted).
- */
-function lineOf(lines: number[], value: number): number {
-  let lo = 0;
-  let hi = lines.length - 1;
-  while (lo < hi) {
-    const mid = (lo + hi + 1) >> 1;
-    if (lines[mid]! <= value) lo = mid;
-    else hi = mid - 1;
-  }
-  return lo;
-}
 
 /**
  * Which doping × temperature points were measured. Duplicates and holes are
