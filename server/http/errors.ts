@@ -28,12 +28,23 @@ export class ValidationError extends HttpError {
   }
 }
 
+/** The server is at capacity for this kind of work (503 with Retry-After); asking again later may succeed. */
+export class BusyError extends HttpError {
+  constructor(
+    message: string,
+    readonly retryAfterSeconds: number,
+  ) {
+    super(503, message, undefined, 'Busy');
+  }
+}
+
 export const notFoundApi: RequestHandler = (req, _res, next) => next(new NotFoundError(`route ${req.method} ${req.path}`));
 
 /** One error shape for every route: { name, message, errors? }. No stack traces in answers. */
 export function errorHandler(logStacks: boolean): ErrorRequestHandler {
   return (err: unknown, _req, res, _next) => {
     if (err instanceof HttpError) {
+      if (err instanceof BusyError) res.set('Retry-After', String(err.retryAfterSeconds));
       res.status(err.status).json({ name: err.name, message: err.message, ...(err.errors ? { errors: err.errors } : {}) });
       return;
     }

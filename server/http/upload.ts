@@ -20,7 +20,11 @@ export function fileOf(req: Request): Buffer {
 /** Reads one multipart file, then answers with what `handle` returns. */
 export function uploadThen(handle: (req: Request) => Promise<unknown>, status: number): RequestHandler {
   return (req, res, next) => {
-    if (tooLarge(req)) return next(new HttpError(413, `The file is larger than ${maxUploadBytes / 1024 / 1024} MB.`, [{ field: 'file', message: 'too large' }], 'PayloadTooLarge'));
+    if (tooLarge(req)) {
+      const found = `${(Number(req.get('content-length')) / 1024 / 1024).toFixed(1)} MB`;
+      const limit = `${maxUploadBytes / 1024 / 1024} MB`;
+      return next(new HttpError(413, `The upload is ${found}; files are limited to ${limit}.`, [{ field: 'file', message: `too large: ${found} sent, at most ${limit} accepted` }], 'PayloadTooLarge'));
+    }
     upload(req, res, (err: unknown) => {
       if (err) return next(err);
       handle(req).then((out) => res.status(status).json(out), next);

@@ -1,14 +1,14 @@
 import type PgBoss from 'pg-boss';
 import type { DataSource, EntityManager } from 'typeorm';
 import type { RunDetail, RunProgress, RunSummary, Sweep as SweepDto, SweepRequest } from '../../shared/api';
-import { CaseError, parseCase, type MaterialInput } from '../../shared/engine';
+import type { MaterialInput } from '../../shared/engine';
 import { designToCase, withSweepValue, type DesignParameters } from '../../shared/runs/design-case';
 import { Design, MaterialFamilyVersion, Run, Sweep, Team } from '../db/entities';
-import { HttpError, NotFoundError, ValidationError } from '../http/errors';
+import { HttpError, NotFoundError } from '../http/errors';
 import { isUuid } from '../http/validate';
 import { publishEvent } from '../realtime/events';
 import { version as appVersion } from '../version';
-import { describe, findDesign } from './design-service';
+import { checkSweep, describe, findDesign } from './design-service';
 
 export type RunDeps = { ds: DataSource; boss: PgBoss; runQueue: string };
 
@@ -64,18 +64,9 @@ export async function launchRun(d: RunDeps, team: Team, user: { id: string }, de
 }
 
 export async function launchSweep(d: RunDeps, team: Team, user: { id: string; displayName: string }, designId: unknown, req: SweepRequest): Promise<SweepDto> {
+  await checkSweep(d.ds, team, designId, req);
   const { sweep, runs, design } = await d.ds.transaction(async (m) => {
     const design = await findDesign(m, team, designId);
-    // Every swept value must make a case the engine accepts, or nothing is queued.
-    const version = await m.getRepository(MaterialFamilyVersion).findOneByOrFail({ familyId: design.familyId, version: design.familyVersion });
-    req.values.forEach((value, i) => {
-      try {
-        parseCase(designToCase(withSweepValue(design, req.parameter, value), version.definition as MaterialInput), 'optimize');
-      } catch (err) {
-        if (err instanceof CaseError) throw new ValidationError([{ field: `values[${i}]`, message: `${req.parameter} = ${value}: ${err.message}` }]);
-        throw err;
-      }
-    });
     const sweep = await m.getRepository(Sweep).save(m.getRepository(Sweep).create({ teamId: team.id, designId: design.id, parameter: req.parameter, values: req.values, createdBy: user.displayName }));
     const runs: Run[] = [];
     for (const value of req.values) {
