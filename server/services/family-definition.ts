@@ -1,11 +1,13 @@
-import { CaseError, familyFromMaterial, type MaterialInput } from '../../shared/engine';
+import type { MaterialInput } from '../../shared/engine';
 import { ValidationError } from '../http/errors';
 import { engineVerdict } from './engine-check';
+import { judge, type EngineVerdict } from './engine-judge';
 
-/** The engine's field (`material.rows[3]`) as the request's (`definition.rows[3]`). */
-function refusal(field: string, engineField: string, message: string): ValidationError {
-  const inner = engineField.replace(/^material\.?/, '');
-  return new ValidationError([{ field: inner ? `${field}.${inner}` : field, message }]);
+/** The carrier a verdict found, or the engine's refusal with its field (`material.rows[3]`) as the request's (`definition.rows[3]`). */
+function carrierOf(verdict: EngineVerdict, field: string): 'p' | 'n' {
+  if (verdict.ok) return verdict.carrier === 'n' ? 'n' : 'p';
+  const inner = verdict.field.replace(/^material\.?/, '');
+  throw new ValidationError([{ field: inner ? `${field}.${inner}` : field, message: verdict.message }]);
 }
 
 /**
@@ -14,23 +16,10 @@ function refusal(field: string, engineField: string, message: string): Validatio
  * Returns the carrier implied by the definition.
  */
 export function checkDefinition(definition: MaterialInput, field = 'definition'): 'p' | 'n' {
-  try {
-    const family = familyFromMaterial(definition);
-    return family.sign < 0 ? 'n' : 'p';
-  } catch (err) {
-    if (err instanceof CaseError) throw refusal(field, err.field, err.message);
-    throw err;
-  }
+  return carrierOf(judge({ kind: 'family', definition }), field);
 }
 
-/**
- * The same check for a request: a measured table is built in an API thread
- * (its spline takes up to a few hundred milliseconds at the size caps), a
- * model here (microseconds).
- */
+/** The same check for a request: a measured table is built in an API thread (up to a few hundred ms at the size caps). */
 export async function checkDefinitionOffLoop(definition: MaterialInput, field = 'definition'): Promise<'p' | 'n'> {
-  if (definition.kind !== 'table') return checkDefinition(definition, field);
-  const verdict = await engineVerdict({ kind: 'family', definition }, field);
-  if (!verdict.ok) throw refusal(field, verdict.field, verdict.message);
-  return verdict.carrier === 'n' ? 'n' : 'p';
+  return carrierOf(await engineVerdict({ kind: 'family', definition }, field), field);
 }

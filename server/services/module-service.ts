@@ -2,12 +2,13 @@ import { join } from 'node:path';
 import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { z } from 'zod';
 import type { LegSource, ModuleCsvVersus, ModuleDesign as ModuleDto, ModuleSummary, moduleInputSchema } from '../../shared/api';
-import { CaseError, legsFromRun, parseModuleCase, type LegDefinitionInput, type RunResultLegs } from '../../shared/engine';
+import { legsFromRun, type LegDefinitionInput, type RunResultLegs } from '../../shared/engine';
 import { MaterialFamily, ModuleDesign, Run, Team } from '../db/entities';
 import { NotFoundError, ValidationError } from '../http/errors';
 import { isUuid } from '../http/validate';
 import { inApiThread } from './api-threads';
 import { engineVerdict } from './engine-check';
+import { judge, type EngineVerdict } from './engine-judge';
 import { findFamily, findVersion } from './family-store';
 import type { CurvesCsvInput } from './module-curves-csv';
 import { findRun } from './run-service';
@@ -44,14 +45,9 @@ async function resolveCase(m: EntityManager, team: Team, input: ModuleInput): Pr
   return JSON.parse(JSON.stringify(c)) as Record<string, unknown>;
 }
 
-/** The engine's check of a resolved case, here on the calling thread (the seed's own demo module). */
-function checkHere(json: Record<string, unknown>): void {
-  try {
-    parseModuleCase(json);
-  } catch (err) {
-    if (err instanceof CaseError) throw new ValidationError([{ field: err.field, message: err.message }]);
-    throw err;
-  }
+/** A module the engine refuses is refused with the engine's field and message. */
+function refuseUnless(verdict: EngineVerdict): void {
+  if (!verdict.ok) throw new ValidationError([{ field: verdict.field, message: verdict.message }]);
 }
 
 async function findModule(m: EntityManager, team: Team, id: unknown): Promise<ModuleDesign> {
@@ -104,7 +100,7 @@ async function storeModule(m: EntityManager, team: Team, by: string, input: Modu
 export async function writeModule(m: EntityManager, team: Team, by: string, input: ModuleInput, id?: unknown): Promise<ModuleDto> {
   if (id !== undefined) await findModule(m, team, id);
   const resolvedCase = await resolveCase(m, team, input);
-  checkHere(resolvedCase);
+  refuseUnless(judge({ kind: 'module', json: resolvedCase }));
   return storeModule(m, team, by, input, resolvedCase, id);
 }
 
@@ -116,8 +112,7 @@ export async function writeModule(m: EntityManager, team: Team, by: string, inpu
 export async function saveModule(ds: DataSource, team: Team, by: string, input: ModuleInput, id?: unknown): Promise<ModuleDto> {
   if (id !== undefined) await findModule(ds.manager, team, id);
   const resolvedCase = await resolveCase(ds.manager, team, input);
-  const verdict = await engineVerdict({ kind: 'module', json: resolvedCase }, 'module');
-  if (!verdict.ok) throw new ValidationError([{ field: verdict.field, message: verdict.message }]);
+  refuseUnless(await engineVerdict({ kind: 'module', json: resolvedCase }, 'module'));
   return ds.transaction((m) => storeModule(m, team, by, input, resolvedCase, id));
 }
 
