@@ -39,6 +39,7 @@ describe('UploadFamilyScreen', () => {
     const { requests } = mockFetch({ status: 200, body: okPreview }, { status: 201, body: { family: saved, preview: okPreview } });
     const result = renderRoutes(routes, '/materials/upload', sessionAs('physicist'));
     expect(screen.getByTestId('csv-format-help')).toHaveTextContent(/seebeck_uV_per_K · seebeck_mV_per_K · seebeck_V_per_K/);
+    expect(screen.getByTestId('csv-format-help')).toHaveTextContent(/Up to 5 MB, 20000 rows, 200 dopings and 300 temperatures\./);
 
     picks('ingot-9.csv', 2048);
     await choose();
