@@ -6,6 +6,7 @@
 import { apiErrorBodySchema, healthResponseSchema, uploadPreviewSchema } from '../../shared/api';
 import { tableLimits } from '../../shared/engine/table-limits';
 import { MaterialFamily } from '../../server/db/entities';
+import { uploadGate } from '../../server/http/upload';
 import { apiThreadGate } from '../../server/services/api-threads';
 import { demo, openContext, signedIn, type TestContext } from './context';
 import { fullGridCsv, sparseGridCsv, sparseGridRows } from './fixtures/table-files';
@@ -140,7 +141,7 @@ describe('hostile JSON families over real HTTP', () => {
   });
 });
 
-describe('the API’s thread gate', () => {
+describe('the API’s gates', () => {
   it('answers 503 with Retry-After and a plain message when every thread and queue place is taken', async () => {
     // The in-process app shares this module's gate: fill it, ask, then give every place back.
     const { maxRunning, maxWaiting } = apiThreadGate;
@@ -162,5 +163,19 @@ describe('the API’s thread gate', () => {
     const again = await (await signedIn(ctx, demo.physicist)).post('/api/families/upload/preview').attach('file', Buffer.from(fullGridCsv(3, 3)), 'small.csv');
     expect(again.status).toBe(200);
     expect(uploadPreviewSchema.parse(again.body).ok).toBe(true);
+  });
+
+  it('answers 503 with Retry-After before reading a file when the uploads held in memory are at their cap', async () => {
+    const held = await Promise.all(Array.from({ length: uploadGate.maxRunning }, () => uploadGate.enter()));
+    try {
+      const api = await signedIn(ctx, demo.physicist);
+      const res = await api.post('/api/families/upload/preview').attach('file', Buffer.from(fullGridCsv(3, 3)), 'small.csv');
+      expect(res.status).toBe(503);
+      expect(res.headers['retry-after']).toBe('5');
+      expect(res.body).toEqual({ name: 'Busy', message: 'The server is receiving too many uploads at once; try again in 5 seconds.' });
+    } finally {
+      held.forEach((leave) => leave());
+    }
+    expect(uploadGate.load).toEqual({ running: 0, waiting: 0 });
   });
 });
