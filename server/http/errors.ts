@@ -37,6 +37,14 @@ export class RetryLaterError extends HttpError {
   }
 }
 
+/** The server is at capacity for this kind of work (503 with Retry-After); asking again later may succeed. */
+export class BusyError extends RetryLaterError {
+  constructor(message: string, retryAfterSeconds: number) {
+    super(503, message, undefined, retryAfterSeconds);
+    this.name = 'Busy';
+  }
+}
+
 export const notFoundApi: RequestHandler = (req, _res, next) => next(new NotFoundError(`route ${req.method} ${req.path}`));
 
 /** One error shape for every route: { name, message, errors? }. No stack traces in answers. */

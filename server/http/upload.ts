@@ -1,7 +1,8 @@
 import type { Request, RequestHandler } from 'express';
 import multer from 'multer';
 import { maxUploadBytes } from '../../shared/api';
-import { HttpError, ValidationError } from './errors';
+import { ThreadGate } from '../threads/thread-gate';
+import { BusyError, HttpError, ValidationError } from './errors';
 
 /** Files stay in memory (≤ 5 MB); multer stops reading at the limit. */
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: maxUploadBytes, files: 1, fields: 10, fieldSize: 10_000 } }).single('file');
@@ -17,13 +18,32 @@ export function fileOf(req: Request): Buffer {
   return req.file.buffer;
 }
 
+/**
+ * Uploads held in memory at once: each is up to 5 MB read before any thread
+ * limit applies, so without a cap a crowd of uploads alone could fill the
+ * API's memory (16 × 5 MB = 80 MB). No queue: a client over the cap is told
+ * to come back.
+ */
+export const uploadGate = new ThreadGate(16, 0, 5);
+
 /** Reads one multipart file, then answers with what `handle` returns. */
 export function uploadThen(handle: (req: Request) => Promise<unknown>, status: number): RequestHandler {
   return (req, res, next) => {
-    if (tooLarge(req)) return next(new HttpError(413, `The file is larger than ${maxUploadBytes / 1024 / 1024} MB.`, [{ field: 'file', message: 'too large' }], 'PayloadTooLarge'));
-    upload(req, res, (err: unknown) => {
-      if (err) return next(err);
-      handle(req).then((out) => res.status(status).json(out), next);
-    });
+    if (tooLarge(req)) {
+      const found = `${(Number(req.get('content-length')) / 1024 / 1024).toFixed(1)} MB`;
+      const limit = `${maxUploadBytes / 1024 / 1024} MB`;
+      return next(new HttpError(413, `The upload is ${found}; files are limited to ${limit}.`, [{ field: 'file', message: `too large: ${found} sent, at most ${limit} accepted` }], 'PayloadTooLarge'));
+    }
+    uploadGate.enter().then(
+      (leave) => {
+        // Finished or abandoned, the answer frees the place (and the file with it).
+        res.once('close', leave);
+        upload(req, res, (err: unknown) => {
+          if (err) return next(err);
+          handle(req).then((out) => res.status(status).json(out), next);
+        });
+      },
+      () => next(new BusyError(`The server is receiving too many uploads at once; try again in ${uploadGate.retryAfterSeconds} seconds.`, uploadGate.retryAfterSeconds)),
+    );
   };
 }

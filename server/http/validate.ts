@@ -7,10 +7,16 @@ export function issuePath(path: readonly PropertyKey[]): string {
   return path.reduce<string>((acc, k) => (typeof k === 'number' ? `${acc}[${k}]` : acc ? `${acc}.${String(k)}` : String(k)), '');
 }
 
+/** Field errors listed per answer: a 2 MB body of bad table rows would otherwise answer with tens of thousands. */
+export const fieldErrorsListed = 50;
+
 export function parseOrThrow<S extends z.ZodType>(schema: S, value: unknown, prefix = ''): z.output<S> {
   const r = schema.safeParse(value);
   if (r.success) return r.data;
-  throw new ValidationError(r.error.issues.map((i) => ({ field: [prefix, issuePath(i.path)].filter(Boolean).join('.') || 'body', message: i.message })));
+  const issues = r.error.issues;
+  const errors = issues.slice(0, fieldErrorsListed).map((i) => ({ field: [prefix, issuePath(i.path)].filter(Boolean).join('.') || 'body', message: i.message }));
+  if (issues.length > fieldErrorsListed) errors.push({ field: prefix || 'body', message: `${issues.length - fieldErrorsListed} more problems not listed; fix the ones above first` });
+  throw new ValidationError(errors);
 }
 
 /** Validates the JSON body at the edge; the handler receives the parsed value in `res.locals.body`. */

@@ -1,9 +1,10 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import type { z } from 'zod';
-import type { Design as DesignDto, designInputSchema } from '../../shared/api';
-import { CaseError, parseCase, type MaterialInput } from '../../shared/engine';
-import { designToCase } from '../../shared/runs/design-case';
-import { Design, MaterialFamily, Team } from '../db/entities';
+import type { Design as DesignDto, designInputSchema, SweepRequest } from '../../shared/api';
+import type { MaterialInput } from '../../shared/engine';
+import { designToCase, withSweepValue } from '../../shared/runs/design-case';
+import { Design, MaterialFamily, MaterialFamilyVersion, Team } from '../db/entities';
+import { engineVerdict } from './engine-check';
 import { NotFoundError, ValidationError } from '../http/errors';
 import { isUuid } from '../http/validate';
 import { findFamily, findVersion } from './family-store';
@@ -44,28 +45,42 @@ export async function listDesigns(ds: DataSource, team: Team, userId: string): P
   return designs.map((d) => toDto(d, families.get(d.familyId)!, following.has(d.id)));
 }
 
-/**
- * The family (of the caller's team) and version a design uses, and the
- * engine's verdict on the whole case, so a design that cannot run is refused
- * when it is saved rather than when a worker picks it up.
- */
-async function checkAgainstEngine(m: EntityManager, team: Team, input: DesignInput): Promise<{ version: number }> {
+/** The family (of the caller's team) and the version a design uses. */
+async function designFamily(m: EntityManager, team: Team, input: { familyId: string; familyVersion?: number }): Promise<MaterialFamilyVersion> {
   let family: MaterialFamily;
   try {
     family = await findFamily(m, team, input.familyId);
   } catch {
     throw new ValidationError([{ field: 'familyId', message: 'no such material family in this team' }]);
   }
-  const version = await findVersion(m, family, input.familyVersion ?? family.currentVersion).catch(() => {
+  return findVersion(m, family, input.familyVersion ?? family.currentVersion).catch(() => {
     throw new ValidationError([{ field: 'familyVersion', message: `the family has no version ${input.familyVersion}` }]);
   });
-  try {
-    parseCase(designToCase({ ...input, coldSide: input.coldSide ?? null }, version.definition as MaterialInput), 'optimize');
-  } catch (err) {
-    if (err instanceof CaseError) throw new ValidationError([{ field: engineFieldToDesign(err.field), message: err.message }]);
-    throw err;
-  }
+}
+
+/**
+ * The engine's verdict on a design's case, so a design that cannot run is
+ * refused when it is saved rather than when a worker picks it up. Computed in
+ * an API thread: with a large measured family it takes a few hundred ms.
+ */
+async function checkAgainstEngine(m: EntityManager, team: Team, input: DesignInput): Promise<{ version: number }> {
+  const version = await designFamily(m, team, input);
+  const verdict = await engineVerdict({ kind: 'cases', cases: [designToCase({ ...input, coldSide: input.coldSide ?? null }, version.definition as MaterialInput)] }, 'design');
+  if (!verdict.ok) throw new ValidationError([{ field: engineFieldToDesign(verdict.field), message: verdict.message }]);
   return { version: version.version };
+}
+
+/**
+ * Every swept value must make a case the engine accepts, or nothing is
+ * queued: up to 40 cases, each building the family's spline, so in an API
+ * thread and before any transaction (no database connection waits on it).
+ */
+export async function checkSweep(ds: DataSource, team: Team, designId: unknown, req: SweepRequest): Promise<void> {
+  const design = await findDesign(ds.manager, team, designId);
+  const version = await ds.getRepository(MaterialFamilyVersion).findOneByOrFail({ familyId: design.familyId, version: design.familyVersion });
+  const cases = req.values.map((value) => designToCase(withSweepValue(design, req.parameter, value), version.definition as MaterialInput));
+  const verdict = await engineVerdict({ kind: 'cases', cases }, 'values');
+  if (!verdict.ok) throw new ValidationError([{ field: `values[${verdict.index}]`, message: `${req.parameter} = ${req.values[verdict.index]}: ${verdict.message}` }]);
 }
 
 /** Engine case fields back to the form's fields, so the error lands beside the right input. */
@@ -76,10 +91,11 @@ function engineFieldToDesign(field: string): string {
 }
 
 export async function saveDesign(ds: DataSource, team: Team, user: { id: string; displayName: string }, input: DesignInput, id?: unknown): Promise<DesignDto> {
+  // An unknown design answers 404 before its body is judged; the engine judges it before the transaction.
+  if (id !== undefined) await findDesign(ds.manager, team, id);
+  const { version } = await checkAgainstEngine(ds.manager, team, input);
   return ds.transaction(async (m) => {
-    // An unknown design answers 404 before its body is judged.
     const existing = id === undefined ? undefined : await findDesign(m, team, id);
-    const { version } = await checkAgainstEngine(m, team, input);
     const repo = m.getRepository(Design);
     const { familyVersion: _v, ...fields } = input;
     const d = existing

@@ -6,7 +6,7 @@ import type { z } from 'zod';
 import { MaterialFamily, MaterialFamilyVersion, Team } from '../db/entities';
 import { HttpError, ValidationError } from '../http/errors';
 import { publishEvent } from '../db/events';
-import { checkDefinition } from './family-definition';
+import { checkDefinition, checkDefinitionOffLoop } from './family-definition';
 import { detail, findFamily, findVersion, summarise } from './family-store';
 
 type CreateInput = z.output<typeof createFamilyRequestSchema>;
@@ -40,9 +40,12 @@ async function assertNameFree(m: EntityManager, team: Team, name: string, except
 
 type NewFamily = { name: string; summary: string; source: string; definition: MaterialInput; isDemo?: boolean };
 
-/** Inserts the family and its version 1 in the caller's transaction. */
-export async function insertFamily(m: EntityManager, team: Team, input: NewFamily, by: string): Promise<MaterialFamily> {
-  const carrier = checkDefinition(input.definition);
+/**
+ * Inserts the family and its version 1 in the caller's transaction. Requests
+ * pass the `carrier` the engine found when it checked the definition off the
+ * event loop; without it (seed, tests) the definition is checked here.
+ */
+export async function insertFamily(m: EntityManager, team: Team, input: NewFamily, by: string, carrier: 'p' | 'n' = checkDefinition(input.definition)): Promise<MaterialFamily> {
   await assertNameFree(m, team, input.name);
   const families = m.getRepository(MaterialFamily);
   const f = await families.save(families.create({ teamId: team.id, name: input.name, kind: input.definition.kind, carrier, createdBy: by, isDemo: input.isDemo ?? false, currentVersion: 1 }));
@@ -60,8 +63,10 @@ export async function announceFamily(ds: DataSource, team: Team, f: FamilySummar
 }
 
 export async function createFamily(ds: DataSource, team: Team, input: CreateInput, by: string): Promise<FamilySummary> {
+  // Checked before the transaction: no database connection waits on the engine.
+  const carrier = await checkDefinitionOffLoop(input.definition);
   const created = await ds.transaction(async (m) => {
-    const f = await insertFamily(m, team, input, by);
+    const f = await insertFamily(m, team, input, by, carrier);
     return summarise(f, await findVersion(m, f));
   });
   return announceFamily(ds, team, created);
@@ -69,15 +74,19 @@ export async function createFamily(ds: DataSource, team: Team, input: CreateInpu
 
 /** Name changes in place; any change of content writes the next immutable version. */
 export async function updateFamily(ds: DataSource, team: Team, id: unknown, input: UpdateInput, by: string): Promise<FamilySummary> {
+  // An unknown family answers 404 and a change of kind 400 before the engine is asked; the engine
+  // checks a new definition before the transaction, so no database connection waits on it.
+  const before = await findFamily(ds.manager, team, id);
+  if (input.definition && input.definition.kind !== before.kind) {
+    throw new ValidationError([{ field: 'definition.kind', message: `this family is a ${before.kind} family; a ${input.definition.kind} family is a new family` }]);
+  }
+  const carrier = input.definition ? await checkDefinitionOffLoop(input.definition) : undefined;
   return announceFamily(ds, team, await ds.transaction(async (m) => {
     const f = await findFamily(m, team, id, true);
     const current = await findVersion(m, f);
     if (input.name !== undefined && input.name !== f.name) {
       await assertNameFree(m, team, input.name, f.id);
       f.name = input.name;
-    }
-    if (input.definition && input.definition.kind !== f.kind) {
-      throw new ValidationError([{ field: 'definition.kind', message: `this family is a ${f.kind} family; a ${input.definition.kind} family is a new family` }]);
     }
     const next = {
       definition: (input.definition ?? current.definition) as MaterialInput,
@@ -86,8 +95,8 @@ export async function updateFamily(ds: DataSource, team: Team, id: unknown, inpu
     };
     const changed = JSON.stringify(next.definition) !== JSON.stringify(current.definition) || next.summary !== current.summary || next.source !== current.source;
     if (changed) {
-      const carrier = checkDefinition(next.definition);
-      if (f.carrier && carrier !== f.carrier) throw new ValidationError([{ field: 'definition', message: `the family is ${f.carrier}-type; this definition is ${carrier}-type` }]);
+      // Without a new definition the current one stays: it was checked when it was written.
+      if (carrier && f.carrier && carrier !== f.carrier) throw new ValidationError([{ field: 'definition', message: `the family is ${f.carrier}-type; this definition is ${carrier}-type` }]);
       const versions = m.getRepository(MaterialFamilyVersion);
       f.currentVersion += 1;
       await versions.save(versions.create({ familyId: f.id, version: f.currentVersion, ...next, definition: next.definition as Record<string, unknown>, createdBy: by }));
@@ -101,12 +110,13 @@ export async function duplicateFamily(ds: DataSource, team: Team, id: unknown, i
   return announceFamily(ds, team, await ds.transaction(async (m) => {
     const f = await findFamily(m, team, id);
     const v = await findVersion(m, f);
+    // The engine checked this version when it was written; the copy takes its carrier instead of building it again.
     const copy = await insertFamily(m, team, {
       name: input.name,
       summary: v.summary,
       source: `${v.source}${v.source ? '\n' : ''}Duplicated from "${f.name}" version ${v.version}.`,
       definition: v.definition as MaterialInput,
-    }, by);
+    }, by, f.carrier ?? undefined);
     return summarise(copy, await findVersion(m, copy));
   }));
 }

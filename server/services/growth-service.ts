@@ -5,10 +5,8 @@ import type { z } from 'zod';
 import type { GrowthOrderDetail, GrowthOrderDto, closeOrderSchema, growthStateChangeSchema, releaseRequestSchema, sheetSettingsSchema } from '../../shared/api';
 import { growerStates } from '../../shared/api';
 import type { GrowthSheet } from '../../shared/growth/growth-sheet';
-import type { MeasurementReport } from '../../shared/growth/measurement-report';
-import { runInThread } from '../threads/run-in-thread';
-import type { ReportThreadInput } from './report-thread';
-import { parseMeasurementsCsv } from '../../shared/growth/parse-measurements';
+import { inApiThread } from './api-threads';
+import type { ReportThreadAnswer, ReportThreadInput } from './report-thread';
 import { GrowthOrder, Run, Team } from '../db/entities';
 import { HttpError, NotFoundError, ValidationError } from '../http/errors';
 import { isUuid } from '../http/validate';
@@ -161,11 +159,11 @@ export async function uploadMeasurements(d: GrowthDeps, team: Team, actor: Actor
   if (o.sheetStatus !== 'ready' || !o.sheet) throw new HttpError(409, 'The growth sheet is not ready yet.', [{ field: 'sheet', message: o.sheetStatus }], 'Conflict');
   const run = await d.ds.getRepository(Run).findOneByOrFail({ id: o.runId });
   const sheet = o.sheet as unknown as GrowthSheet;
-  const parsed = parseMeasurementsCsv(uploadText(file()), sheet.lengthMm);
-  if (!parsed.ok) throw new ValidationError(parsed.errors.map((e) => ({ field: ['file', e.line ? `line ${e.line}` : '', e.column ?? ''].filter(Boolean).join(':'), message: e.message })));
   const t = temperature ?? o.measureTemperature;
-  const input: ReportThreadInput = { caseJson: run.caseJson, sheet, zones: o.zones, points: parsed.points, temperature: t };
-  const report = { ...(await runInThread<MeasurementReport>(join(__dirname, 'report-thread.ts'), input)), uploadWarnings: parsed.warnings };
+  const input: ReportThreadInput = { text: uploadText(file()), caseJson: run.caseJson, sheet, zones: o.zones, temperature: t };
+  const parsed = await inApiThread<ReportThreadAnswer>(join(__dirname, 'report-thread.ts'), input, 'file');
+  if ('errors' in parsed) throw new ValidationError(parsed.errors.map((e) => ({ field: ['file', e.line ? `line ${e.line}` : '', e.column ?? ''].filter(Boolean).join(':'), message: e.message })));
+  const report = { ...parsed.report, uploadWarnings: parsed.warnings };
   await d.ds.transaction(async (m) => {
     // The report took a while: the order may have been closed meanwhile.
     assertOpen(await findOrder(m, team, o.id, true));

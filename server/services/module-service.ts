@@ -1,11 +1,16 @@
+import { join } from 'node:path';
 import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { z } from 'zod';
 import type { LegSource, ModuleCsvVersus, ModuleDesign as ModuleDto, ModuleSummary, moduleInputSchema } from '../../shared/api';
-import { CaseError, legsFromRun, moduleCurve, moduleDeltaTCurve, parseModuleCase, type CurveSamples, type LegDefinitionInput, type RunResultLegs } from '../../shared/engine';
+import { legsFromRun, type LegDefinitionInput, type RunResultLegs } from '../../shared/engine';
 import { MaterialFamily, ModuleDesign, Run, Team } from '../db/entities';
 import { NotFoundError, ValidationError } from '../http/errors';
 import { isUuid } from '../http/validate';
+import { inApiThread } from './api-threads';
+import { engineVerdict } from './engine-check';
+import { judge, type EngineVerdict } from './engine-judge';
 import { findFamily, findVersion } from './family-store';
+import type { CurvesCsvInput } from './module-curves-csv';
 import { findRun } from './run-service';
 
 type ModuleInput = z.output<typeof moduleInputSchema>;
@@ -25,7 +30,7 @@ async function resolveLeg(m: EntityManager, team: Team, s: LegSource, field: str
   return { length: s.lengthMm * 1e-3, area: s.areaMm2 * 1e-6, material: version.definition as LegDefinitionInput['material'], doping: s.perCm3 };
 }
 
-/** The engine case of a module, checked by the engine so a saved module always computes. */
+/** The engine case of a module (checked separately, so a saved module always computes). */
 async function resolveCase(m: EntityManager, team: Team, input: ModuleInput): Promise<Record<string, unknown>> {
   const p = await resolveLeg(m, team, input.p, 'p');
   const n = await resolveLeg(m, team, input.n, 'n');
@@ -37,14 +42,12 @@ async function resolveCase(m: EntityManager, team: Team, input: ModuleInput): Pr
     ...(input.hotPlateResistance !== undefined ? { hotPlateResistance: input.hotPlateResistance } : {}),
     ...(input.currentLimit !== undefined ? { currentLimit: input.currentLimit } : {}),
   };
-  const json = JSON.parse(JSON.stringify(c)) as Record<string, unknown>;
-  try {
-    parseModuleCase(json);
-  } catch (err) {
-    if (err instanceof CaseError) throw new ValidationError([{ field: err.field, message: err.message }]);
-    throw err;
-  }
-  return json;
+  return JSON.parse(JSON.stringify(c)) as Record<string, unknown>;
+}
+
+/** A module the engine refuses is refused with the engine's field and message. */
+function refuseUnless(verdict: EngineVerdict): void {
+  if (!verdict.ok) throw new ValidationError([{ field: verdict.field, message: verdict.message }]);
 }
 
 async function findModule(m: EntityManager, team: Team, id: unknown): Promise<ModuleDesign> {
@@ -85,20 +88,33 @@ export async function getModule(ds: DataSource, team: Team, id: unknown): Promis
   return toDto(await findModule(ds.manager, team, id));
 }
 
-/** Create (no id) or replace a module inside the caller's transaction; the engine checks the resolved case first. */
-export async function writeModule(m: EntityManager, team: Team, by: string, input: ModuleInput, id?: unknown): Promise<ModuleDto> {
+/** Create (no id) or replace a module whose resolved case the engine has accepted, inside the caller's transaction. */
+async function storeModule(m: EntityManager, team: Team, by: string, input: ModuleInput, resolvedCase: Record<string, unknown>, id?: unknown): Promise<ModuleDto> {
   const existing = id === undefined ? undefined : await findModule(m, team, id);
-  const resolvedCase = await resolveCase(m, team, input);
   const repo = m.getRepository(ModuleDesign);
   const row = existing ? Object.assign(existing, { name: input.name, input, resolvedCase }) : repo.create({ teamId: team.id, name: input.name, input, resolvedCase, createdBy: by });
   return toDto(await repo.save(row));
 }
 
-export async function saveModule(ds: DataSource, team: Team, by: string, input: ModuleInput, id?: unknown): Promise<ModuleDto> {
-  return ds.transaction((m) => writeModule(m, team, by, input, id));
+/** Create or replace a module inside the caller's transaction, checked on the calling thread (the seed, whose families exist only in its transaction). */
+export async function writeModule(m: EntityManager, team: Team, by: string, input: ModuleInput, id?: unknown): Promise<ModuleDto> {
+  if (id !== undefined) await findModule(m, team, id);
+  const resolvedCase = await resolveCase(m, team, input);
+  refuseUnless(judge({ kind: 'module', json: resolvedCase }));
+  return storeModule(m, team, by, input, resolvedCase, id);
 }
 
-const f = (v: number | null | undefined): string => (typeof v === 'number' && Number.isFinite(v) ? Number(v.toPrecision(6)).toString() : '');
+/**
+ * A request's create or replace: 404 for an unknown module first, then the
+ * engine's check in an API thread (building two legs' families takes up to a
+ * few hundred ms with large measured tables), then the transaction.
+ */
+export async function saveModule(ds: DataSource, team: Team, by: string, input: ModuleInput, id?: unknown): Promise<ModuleDto> {
+  if (id !== undefined) await findModule(ds.manager, team, id);
+  const resolvedCase = await resolveCase(ds.manager, team, input);
+  refuseUnless(await engineVerdict({ kind: 'module', json: resolvedCase }, 'module'));
+  return ds.transaction((m) => storeModule(m, team, by, input, resolvedCase, id));
+}
 
 /** Delete a saved module (runs and families it was built from are untouched). */
 export async function deleteModule(ds: DataSource, team: Team, id: unknown): Promise<void> {
@@ -107,25 +123,11 @@ export async function deleteModule(ds: DataSource, team: Team, id: unknown): Pro
   });
 }
 
-/** One CSV line per sample, with `first` (the ΔT of each sample) in front when given. */
-const csvRows = (curve: CurveSamples, first?: number[]) =>
-  curve.currents.map((i, k) => [...(first ? [f(first[k])] : []), f(i), f(curve.heatLoad[k]), f(curve.heatRejected[k]), f(curve.voltage[k]), f(curve.power[k]), f(curve.cop[k]), curve.overLimit[k] ? 'yes' : 'no'].join(','));
+const curvesThread = join(__dirname, 'module-curves-thread.ts');
 
-/** The module's curve versus current (at its ΔT) or versus ΔT (each at its max-Qc current) as CSV, computed now with the engine. */
+/** The module's curve versus current (at its ΔT) or versus ΔT as CSV, computed now by the engine in an API thread (seconds of root finding). */
 export async function moduleCurvesCsv(ds: DataSource, team: Team, id: unknown, versus: ModuleCsvVersus = 'current'): Promise<{ filename: string; body: string }> {
   const row = await findModule(ds.manager, team, id);
-  const c = parseModuleCase(row.resolvedCase);
-  const columns = 'current_A,heat_load_W,heat_rejected_W,voltage_V,power_W,cop,over_current_limit';
-  const caution = `# Frostgrade module "${row.name}": ${c.module.couples ?? 1} couples; model prediction, verify by measurement; modules run at high currents and their hot side can burn`;
-  const slug = row.name.replace(/[^A-Za-z0-9._-]+/g, '-');
-  if (versus === 'deltaT') {
-    const d = moduleDeltaTCurve(c.module, { hotSide: c.conditions.hotSide }, c.deltaT);
-    const end = d.deltaTMax;
-    const lines = [caution, `# hot side ${f(d.hotSide)} K; each ΔT at its current of maximum heat load`, `# maximum ΔT ${f(end.hotSide - end.coldSide)} K at ${f(end.current)} A`, `delta_T_K,${columns}`, ...csvRows(d, d.deltaT)];
-    return { filename: `module-${slug}-versus-deltaT.csv`, body: `${lines.join('\n')}\n` };
-  }
-  const curve = moduleCurve(c.module, c.conditions, c.options);
-  const marks = [`# maximum heat load ${f(curve.maxHeatLoad.heatLoad)} W at ${f(curve.maxHeatLoad.current)} A`, ...(curve.maxCop ? [`# maximum COP ${f(curve.maxCop.cop)} at ${f(curve.maxCop.current)} A`] : [])];
-  const lines = [caution, `# ΔT ${f(curve.deltaT)} K, hot side ${f(curve.hotSide)} K`, ...marks, columns, ...csvRows(curve)];
-  return { filename: `module-${slug}.csv`, body: `${lines.join('\n')}\n` };
+  const input: CurvesCsvInput = { name: row.name, resolvedCase: row.resolvedCase, versus };
+  return inApiThread<{ filename: string; body: string }>(curvesThread, input, 'module');
 }

@@ -1,18 +1,18 @@
 import type PgBoss from 'pg-boss';
 import type { DataSource, EntityManager } from 'typeorm';
 import { traceShownMax, type RunDetail, type RunProgress, type RunSummary, type RunWaiting, type Sweep as SweepDto, type SweepRequest, type TracePage } from '../../shared/api';
-import { CaseError, parseCase, type MaterialInput } from '../../shared/engine';
+import type { MaterialInput } from '../../shared/engine';
 import { designToCase, withSweepValue, type DesignParameters } from '../../shared/runs/design-case';
 import { Design, MaterialFamilyVersion, Run, Sweep, Team } from '../db/entities';
 import type { FairShare } from '../config/env';
-import { HttpError, NotFoundError, RetryLaterError, ValidationError } from '../http/errors';
+import { HttpError, NotFoundError, RetryLaterError } from '../http/errors';
 import { isUuid } from '../http/validate';
 import { publishEvent } from '../db/events';
 import { waitingOf, type WaitContext } from '../runs/queue-position';
 import { sendRunJob } from '../runs/run-jobs';
 import { cancelRunState } from '../runs/run-lifecycle';
 import { version as appVersion } from '../version';
-import { describe, findDesign } from './design-service';
+import { checkSweep, describe, findDesign } from './design-service';
 
 export type RunDeps = { ds: DataSource; boss: PgBoss; runQueue: string; fair: FairShare; heartbeatSeconds: number };
 
@@ -82,18 +82,9 @@ export async function launchRun(d: RunDeps, team: Team, user: { id: string }, de
 }
 
 export async function launchSweep(d: RunDeps, team: Team, user: { id: string; displayName: string }, designId: unknown, req: SweepRequest): Promise<SweepDto> {
+  await checkSweep(d.ds, team, designId, req);
   const { sweep, runs, design } = await d.ds.transaction(async (m) => {
     const design = await findDesign(m, team, designId);
-    // Every swept value must make a case the engine accepts, or nothing is queued.
-    const version = await m.getRepository(MaterialFamilyVersion).findOneByOrFail({ familyId: design.familyId, version: design.familyVersion });
-    req.values.forEach((value, i) => {
-      try {
-        parseCase(designToCase(withSweepValue(design, req.parameter, value), version.definition as MaterialInput), 'optimize');
-      } catch (err) {
-        if (err instanceof CaseError) throw new ValidationError([{ field: `values[${i}]`, message: `${req.parameter} = ${value}: ${err.message}` }]);
-        throw err;
-      }
-    });
     await admitLaunch(m, team, req.values.length, d.fair);
     const sweep = await m.getRepository(Sweep).save(m.getRepository(Sweep).create({ teamId: team.id, designId: design.id, parameter: req.parameter, values: req.values, createdBy: user.displayName }));
     const runs: Run[] = [];

@@ -1,21 +1,69 @@
 import { parentPort, Worker, workerData } from 'node:worker_threads';
+import type { ThreadGate } from './thread-gate';
 
 type Answer<T> = { ok: true; value: T } | { ok: false; message: string };
+
+/** What one thread may take. Without limits a thread runs as long and as large as it likes (the worker's own jobs). */
+export type ThreadLimits = {
+  /** Wall-clock limit from the thread's start; past it the thread is terminated. */
+  timeoutMs?: number;
+  /** The thread's V8 heap (old generation), MB; past it the thread is stopped, never the calling process. */
+  heapMb?: number;
+  /** Concurrency cap the thread waits at before it starts. */
+  gate?: ThreadGate;
+};
+
+/** The thread was stopped at its time or memory limit. */
+export class ThreadLimitError extends Error {
+  constructor(
+    readonly limit: 'time' | 'memory',
+    message: string,
+  ) {
+    super(message);
+    this.name = 'ThreadLimitError';
+  }
+}
+
+const outOfMemory = (err: unknown): boolean => (err as { code?: unknown } | null)?.code === 'ERR_WORKER_OUT_OF_MEMORY';
 
 /**
  * Runs a worker-thread entry file (one that calls `answerInThread`) with
  * `data` and resolves its answer, so seconds of engine work never stall the
  * calling process's event loop (an API answering others, a worker beating).
  * The thread loads TypeScript through tsx, as every Frostgrade process does.
+ *
+ * With limits: waits for a slot at `gate` (or is refused with
+ * ThreadBusyError), and a thread that runs past `timeoutMs` or its heap of
+ * `heapMb` is stopped and rejects with ThreadLimitError. The slot is given
+ * back only once the thread has exited, so a stopped runaway still counts
+ * until it is gone.
  */
-export function runInThread<T>(file: string, data: unknown): Promise<T> {
+export async function runInThread<T>(file: string, data: unknown, limits: ThreadLimits = {}): Promise<T> {
+  const leave = limits.gate ? await limits.gate.enter() : () => undefined;
+  let thread: Worker;
+  try {
+    const resourceLimits = limits.heapMb ? { maxOldGenerationSizeMb: limits.heapMb } : undefined;
+    thread = new Worker(file, { execArgv: ['--require', 'tsx/cjs'], workerData: data, resourceLimits });
+  } catch (err) {
+    leave();
+    throw err;
+  }
+  thread.once('exit', leave);
   return new Promise<T>((resolve, reject) => {
-    const thread = new Worker(file, { execArgv: ['--require', 'tsx/cjs'], workerData: data });
-    thread.once('message', (answer: Answer<T>) => (answer.ok ? resolve(answer.value) : reject(new Error(answer.message))));
-    thread.once('error', reject);
-    thread.once('exit', (code) => {
-      if (code !== 0) reject(new Error(`the thread stopped with exit code ${code}`));
-    });
+    let settled = false;
+    const settle = (finish: () => void): void => {
+      if (settled) return;
+      settled = true;
+      clearTimeout(timer);
+      finish();
+    };
+    const timer = limits.timeoutMs === undefined ? undefined : setTimeout(() => {
+      settle(() => reject(new ThreadLimitError('time', `the computation took longer than ${limits.timeoutMs! / 1000} s and was stopped`)));
+      void thread.terminate();
+    }, limits.timeoutMs);
+    thread.once('message', (answer: Answer<T>) => settle(() => (answer.ok ? resolve(answer.value) : reject(new Error(answer.message)))));
+    thread.once('error', (err) => settle(() => reject(outOfMemory(err) ? new ThreadLimitError('memory', `the computation needed more than ${limits.heapMb ?? 'the available'} MB of memory and was stopped`) : err)));
+    thread.once('exit', (code) => settle(() => reject(new Error(`the thread stopped with exit code ${code}`))));
   });
 }
 

@@ -29,9 +29,36 @@ export const uploadRowSchema = z.object({
   kappa: z.number(),
 });
 
+/** The first missing grid points a preview names; the rest are counted in `holes`. */
+export const holesListed = 5;
+
+/**
+ * Largest grid (dopings × temperatures) whose cell-by-cell `present` map a
+ * preview carries: 50 × 50 draws comfortably on a page (a full campaign of
+ * 30 dopings × 40 temperatures is 1,200 cells); larger grids are described by
+ * their counts and first holes.
+ */
+export const coverageDrawLimit = 2500;
+
+/** Which doping × temperature points a file holds. */
+export const uploadCoverageSchema = z.object({
+  dopings: z.array(z.number()),
+  temperatures: z.array(z.number()),
+  /** Grid points the file holds (a duplicate counts once). */
+  measured: z.number().int().min(0),
+  /** dopings × temperatures − measured: counted, never listed in full. */
+  holes: z.number().int().min(0),
+  /** The first `holesListed` missing points, doping by doping. */
+  firstHoles: z.array(z.object({ perCm3: z.number(), temperature: z.number() })),
+  /** `present[i][j]`: doping i was measured at temperature j; null when the grid has more than `coverageDrawLimit` cells. */
+  present: z.array(z.array(z.boolean())).nullable(),
+});
+
 /**
  * `POST /api/families/upload/preview` (multipart: `file`) — nothing is saved.
- * `coverage.present[i][j]` tells whether doping i was measured at temperature j.
+ * A file over a size cap (5 MB, `tableLimits` rows, distinct dopings or
+ * temperatures) is refused with 400/413 naming the field `file`; any other
+ * problem comes back here, in `errors`, located by line and column.
  */
 export const uploadPreviewSchema = z.object({
   ok: z.boolean(),
@@ -39,11 +66,7 @@ export const uploadPreviewSchema = z.object({
   columns: z.array(uploadColumnSchema),
   rows: z.array(uploadRowSchema),
   carrier: z.enum(['p', 'n']).nullable(),
-  coverage: z.object({
-    dopings: z.array(z.number()),
-    temperatures: z.array(z.number()),
-    present: z.array(z.array(z.boolean())),
-  }),
+  coverage: uploadCoverageSchema,
   warnings: z.array(uploadIssueSchema),
   errors: z.array(uploadIssueSchema),
 });
@@ -61,4 +84,5 @@ export type UploadIssue = z.infer<typeof uploadIssueSchema>;
 export type UploadColumn = z.infer<typeof uploadColumnSchema>;
 export type UploadRow = z.infer<typeof uploadRowSchema>;
 export type UploadPreview = z.infer<typeof uploadPreviewSchema>;
+export type UploadCoverage = z.infer<typeof uploadCoverageSchema>;
 export type UploadSaved = z.infer<typeof uploadSavedSchema>;

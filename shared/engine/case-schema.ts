@@ -8,6 +8,7 @@
  * objective needs) are in check-case.ts.
  */
 import { z } from 'zod';
+import { tableBreach } from './table-limits';
 
 /** Doping range accepted anywhere [cm⁻³]; a value 10⁶ off (m⁻³ typed as cm⁻³) lands outside. */
 export const MIN_PER_CM3 = 1e14;
@@ -56,7 +57,14 @@ export const materialSchema = z.discriminatedUnion(
     z.strictObject({ kind: z.literal('constant'), seebeck: seebeck('seebeck'), sigma: sigma('sigma'), kappa: kappa('kappa') }),
     z.strictObject({
       kind: z.literal('table'),
-      rows: z.array(tableRowSchema, { error: 'rows must be a list of measured points' }).min(4, { error: 'rows needs at least a 2 × 2 grid of measured points' }),
+      rows: z
+        .array(tableRowSchema, { error: 'rows must be a list of measured points' })
+        .min(4, { error: 'rows needs at least a 2 × 2 grid of measured points' })
+        // Row count, then distinct dopings and temperatures (counted by sorting), before the engine builds its grid.
+        .superRefine((rows, ctx) => {
+          const over = tableBreach(rows);
+          if (over) ctx.addIssue({ code: 'custom', message: over.message });
+        }),
     }),
     z.strictObject({
       kind: z.literal('band'),

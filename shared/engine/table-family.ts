@@ -12,19 +12,14 @@ import { bicubicCellValue, bicubicPatches, type BicubicPatches } from './bicubic
 import { CaseError } from './case-error';
 import { findInterval } from './cubic-spline';
 import type { MaterialFamily, Properties } from './material-family';
+import { gridLines, lineOf } from './grid-lines';
+import { breach } from './table-limits';
 
 export type TableRow = { perCm3: number; temperature: number; seebeck: number; sigma: number; kappa: number };
 
 /** Values closer than this (relative for doping, K for temperature) are the same grid line. */
 const SAME_DOPING = 1e-9;
 const SAME_TEMPERATURE = 1e-9;
-
-function gridLines(values: number[], same: (a: number, b: number) => boolean): number[] {
-  const sorted = [...values].sort((a, b) => a - b);
-  const lines: number[] = [];
-  for (const v of sorted) if (lines.length === 0 || !same(lines[lines.length - 1], v)) lines.push(v);
-  return lines;
-}
 
 /**
  * Builds the family; throws CaseError naming `${field}` (or one of its rows)
@@ -41,6 +36,9 @@ export function tableFamily(rows: readonly TableRow[], field = 'material.rows'):
     rows.map((r) => r.temperature),
     sameTemperature,
   );
+  // Before the dopings × temperatures index below: a sparse table must not get to allocate a huge grid.
+  const over = breach('dopings', dopings.length) ?? breach('temperatures', temperatures.length);
+  if (over) throw new CaseError(field, over.message);
   if (dopings.length < 2) throw new CaseError(field, 'the table needs at least two different dopings (perCm3) to interpolate between');
   if (temperatures.length < 2) throw new CaseError(field, 'the table needs at least two different temperatures to interpolate between');
 
@@ -50,8 +48,8 @@ export function tableFamily(rows: readonly TableRow[], field = 'material.rows'):
     if (row.seebeck === 0 || Math.sign(row.seebeck) !== sign) {
       throw new CaseError(`${field}[${k}].seebeck`, 'every row must have a Seebeck coefficient of the same, non-zero sign (one carrier type per family)');
     }
-    const i = dopings.findIndex((d) => sameDoping(d, row.perCm3));
-    const j = temperatures.findIndex((t) => sameTemperature(t, row.temperature));
+    const i = lineOf(dopings, row.perCm3);
+    const j = lineOf(temperatures, row.temperature);
     if (index[i][j] >= 0) {
       throw new CaseError(`${field}[${k}]`, `duplicates row ${index[i][j]} (same perCm3 ${row.perCm3.toExponential()} and temperature ${row.temperature} K)`);
     }

@@ -1,6 +1,7 @@
 import { familyFromMaterial } from '../engine/check-case';
 import { propertiesAt } from '../engine/family-helpers';
-import { parseTableCsv } from './parse-table-csv';
+import { tableLimits } from '../engine/table-limits';
+import { issuesListed, parseTableCsv, TableLimitError } from './parse-table-csv';
 
 /** A small full grid with invented, plausible values (µV/K, S/cm, W/(m·K)). */
 function grid(opts: { dopings?: number[]; temps?: number[]; sep?: string } = {}): string {
@@ -30,7 +31,8 @@ describe('parseTableCsv: a valid table', () => {
     expect(first.sigma).toBeCloseTo(100 * (300 / 250) * 100, 6); // S/cm → S/m
     expect(p.coverage.dopings).toHaveLength(4);
     expect(p.coverage.temperatures).toEqual([250, 300, 350]);
-    expect(p.coverage.present.flat().every(Boolean)).toBe(true);
+    expect(p.coverage.present!.flat().every(Boolean)).toBe(true);
+    expect(p.coverage).toMatchObject({ measured: 12, holes: 0, firstHoles: [] });
     expect(p.columns.map((c) => c.unit)).toEqual(['cm⁻³', 'K', 'µV/K', 'S/cm', 'W/(m·K)']);
   });
 
@@ -127,7 +129,8 @@ describe('parseTableCsv: bad input names the line and column', () => {
     const p = parseTableCsv(lines.join('\n'));
     expect(p.ok).toBe(false);
     expect(p.errors[0]!.message).toMatch(/hole.*3\.00e\+18 cm⁻³ at 300 K/);
-    expect(p.coverage.present.flat().filter((x) => !x)).toHaveLength(1);
+    expect(p.coverage.present!.flat().filter((x) => !x)).toHaveLength(1);
+    expect(p.coverage).toMatchObject({ measured: 11, holes: 1, firstHoles: [{ perCm3: 3e18, temperature: 300 }] });
   });
 
   it('doping off by 10⁶ (m⁻³ written under a cm⁻³ header) is refused', () => {
@@ -180,5 +183,60 @@ describe('parseTableCsv: warnings that do not block saving', () => {
     const p = parseTableCsv(text);
     expect(p.ok).toBe(true);
     expect(p.warnings[0]).toMatchObject({ column: 'sample_id' });
+  });
+});
+
+/** Rows whose dopings and temperatures are all different: a grid of rows × rows cells with only the diagonal measured. */
+function sparse(rows: number, opts: { dopings?: number; temperatures?: number } = {}): string {
+  const lines = ['n_per_cm3,temperature_K,seebeck_uV_per_K,sigma_S_per_cm,kappa_W_per_m_K'];
+  const dopings = opts.dopings ?? rows;
+  const temperatures = opts.temperatures ?? rows;
+  for (let k = 0; k < rows; k++) lines.push(`${(1e18 * 10 ** ((2 * (k % dopings)) / dopings)).toExponential(8)},${(200 + (300 * (k % temperatures)) / temperatures).toFixed(4)},200,1000,1.5`);
+  return lines.join('\n');
+}
+
+const refusal = (text: string): TableLimitError => {
+  try {
+    parseTableCsv(text);
+  } catch (err) {
+    if (err instanceof TableLimitError) return err;
+    throw err;
+  }
+  throw new Error('the file was not refused');
+};
+
+describe('parseTableCsv: size caps, checked before the grid is built', () => {
+  it('refuses more distinct dopings than a table holds, naming the cap and the count', () => {
+    const err = refusal(sparse(2000, { temperatures: 10 }));
+    expect(err.breach).toMatchObject({ limit: 'dopings', found: 2000, max: tableLimits.dopings });
+    expect(err.message).toMatch(/2000 different carrier concentrations; a table holds at most 200/);
+  });
+
+  it('refuses more distinct temperatures than a table holds', () => {
+    const err = refusal(sparse(1000, { dopings: 10 }));
+    expect(err.breach).toMatchObject({ limit: 'temperatures', found: 1000, max: tableLimits.temperatures });
+  });
+
+  it('refuses more rows than a table holds, counted before the CSV is parsed', () => {
+    const text = sparse(tableLimits.rows + 1, { dopings: 20, temperatures: 20 });
+    expect(refusal(`# comment lines and blank lines are not rows\n\n${text}\n\n`).breach).toEqual(expect.objectContaining({ limit: 'rows', found: tableLimits.rows + 1 }));
+    expect(() => parseTableCsv(sparse(tableLimits.rows, { dopings: 100, temperatures: 200 }))).not.toThrow();
+  });
+
+  it('counts the holes of a sparse grid under the caps, names the first few and leaves the large grid undrawn', () => {
+    const p = parseTableCsv(sparse(tableLimits.dopings));
+    const cells = tableLimits.dopings * tableLimits.dopings;
+    expect(p.coverage).toMatchObject({ measured: tableLimits.dopings, holes: cells - tableLimits.dopings, present: null });
+    expect(p.coverage.firstHoles).toHaveLength(5);
+    expect(p.coverage.firstHoles[0]!.perCm3).toBe(p.coverage.dopings[0]);
+    expect(p.coverage.firstHoles[0]!.temperature).toBe(p.coverage.temperatures[1]);
+    expect(p.errors[0]!.message).toMatch(new RegExp(`the grid has ${cells - tableLimits.dopings} hole`));
+  });
+
+  it('lists at most a hundred errors of a broken file and says how many more there are', () => {
+    const text = sparse(400, { dopings: 20, temperatures: 20 }).replace(/,1\.5$/gm, ',abc');
+    const p = parseTableCsv(text);
+    expect(p.errors).toHaveLength(issuesListed + 1);
+    expect(p.errors[issuesListed]!.message).toMatch(/^300 more errors not listed/);
   });
 });

@@ -3,18 +3,53 @@ import type { UploadIssue, UploadPreview, UploadRow } from '../api/family-upload
 import { CaseError } from '../engine/case-error';
 import { tableRowSchema } from '../engine/case-schema';
 import { familyFromMaterial } from '../engine/check-case';
+import { breach, tableBreach, type TableLimitBreach } from '../engine/table-limits';
 import { readHeader, type Column, type Quantity } from './csv-columns';
 import { parseCell } from './parse-number';
 import { gridCoverage } from './table-coverage';
 import { magnitudeWarnings } from './magnitude-warnings';
 
-/** More rows than any doping × temperature campaign produces; beyond it the file is refused. */
-export const maxTableRows = 20000;
+/**
+ * A file over one of the size caps (tableLimits): refused as a whole before
+ * anything proportional to its grid is built. Not a preview error, because
+ * nothing below the cap was checked.
+ */
+export class TableLimitError extends Error {
+  constructor(readonly breach: TableLimitBreach) {
+    super(`the file has ${breach.message}`);
+    this.name = 'TableLimitError';
+  }
+}
+
+/** Problems listed per kind; a broken 20,000-row file would otherwise answer with megabytes of the same complaint. */
+export const issuesListed = 100;
+
+function listed(issues: UploadIssue[], kind: string): UploadIssue[] {
+  if (issues.length <= issuesListed) return issues;
+  return [...issues.slice(0, issuesListed), { message: `${issues.length - issuesListed} more ${kind} not listed; fix the ones above and upload the file again` }];
+}
+
+/** Non-blank, non-comment lines after the header: the rows csv-parse would return, counted before it runs. */
+function dataLineCount(text: string): number {
+  let count = 0;
+  for (let start = 0; start < text.length; ) {
+    const nl = text.indexOf('\n', start);
+    const end = nl < 0 ? text.length : nl;
+    const line = text.slice(start, end).trim();
+    if (line !== '' && !line.startsWith('#')) count += 1;
+    start = end + 1;
+  }
+  return Math.max(0, count - 1);
+}
 
 type Parsed = { record: string[]; info: { lines: number } };
 
 function emptyPreview(errors: UploadIssue[], warnings: UploadIssue[] = []): UploadPreview {
-  return { ok: false, rowCount: 0, columns: [], rows: [], carrier: null, coverage: { dopings: [], temperatures: [], present: [] }, warnings, errors };
+  return {
+    ok: false, rowCount: 0, columns: [], rows: [], carrier: null,
+    coverage: { dopings: [], temperatures: [], measured: 0, holes: 0, firstHoles: [], present: [] },
+    warnings: listed(warnings, 'warnings'), errors: listed(errors, 'errors'),
+  };
 }
 
 /** Comma or semicolon; anything else is named so the user knows what to change. */
@@ -61,6 +96,8 @@ function readColumns(header: string[]): { columns: TableColumn[]; errors: Upload
  */
 export function parseTableCsv(input: string): UploadPreview {
   const text = input.replace(/^\uFEFF/, '');
+  const tooMany = breach('rows', dataLineCount(text));
+  if (tooMany) throw new TableLimitError(tooMany);
   const firstLine = text.split(/\r?\n/).find((l) => l.trim() !== '' && !l.trim().startsWith('#'));
   if (firstLine === undefined) return emptyPreview([{ message: 'the file is empty: expected a header row and one row per measured point' }]);
   const d = detectDelimiter(firstLine);
@@ -76,7 +113,6 @@ export function parseTableCsv(input: string): UploadPreview {
   const { columns, errors, warnings } = readColumns(head!.record);
   if (errors.length > 0) return emptyPreview(errors, warnings);
   if (body.length === 0) return { ...emptyPreview([{ message: 'the file has a header but no data rows' }], warnings), columns: columns.map(strip) };
-  if (body.length > maxTableRows) return emptyPreview([{ message: `${body.length} rows is more than the ${maxTableRows} a family may hold` }], warnings);
 
   const rows: UploadRow[] = [];
   for (const { record, info } of body) {
@@ -88,13 +124,15 @@ export function parseTableCsv(input: string): UploadPreview {
     const row = readRow(record, line, columns, d.delimiter, errors);
     if (row) rows.push(row);
   }
+  const over = tableBreach(rows);
+  if (over) throw new TableLimitError(over);
   warnings.push(...magnitudeWarnings(body.map((b) => ({ line: b.info.lines, record: b.record })), columns));
   const grid = gridCoverage(rows);
   errors.push(...grid.errors);
   warnings.push(...grid.warnings);
   const carrier = rows.length > 0 ? (rows[0]!.seebeck < 0 ? 'n' : 'p') : null;
   if (errors.length === 0) checkWithEngine(rows, errors);
-  return { ok: errors.length === 0, rowCount: body.length, columns: columns.map(strip), rows, carrier, coverage: grid.coverage, warnings, errors };
+  return { ok: errors.length === 0, rowCount: body.length, columns: columns.map(strip), rows, carrier, coverage: grid.coverage, warnings: listed(warnings, 'warnings'), errors: listed(errors, 'errors') };
 }
 
 function strip(c: TableColumn): { header: string; quantity: TableQuantity; unit: string; toEngine: string } {

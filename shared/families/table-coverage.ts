@@ -1,49 +1,52 @@
-import type { UploadIssue } from '../api/family-upload';
-
-/** Grid lines closer than this (relative) are the same doping; temperatures within 1e-6 K are the same. */
-const SAME_DOPING = 1e-9;
-const SAME_TEMPERATURE = 1e-6;
+import type { UploadIssue, UploadPreview } from '../api/family-upload';
+import { coverageDrawLimit, holesListed } from '../api/family-upload';
+import { gridLines, lineOf, sameDoping, sameTemperature } from '../engine/grid-lines';
 
 export type GridRow = { line: number; perCm3: number; temperature: number };
-export type Coverage = { dopings: number[]; temperatures: number[]; present: boolean[][] };
-
-function lines(values: number[], same: (a: number, b: number) => boolean): number[] {
-  const out: number[] = [];
-  for (const v of [...values].sort((a, b) => a - b)) if (out.length === 0 || !same(out[out.length - 1]!, v)) out.push(v);
-  return out;
-}
-
-const sameDoping = (a: number, b: number): boolean => Math.abs(a - b) <= SAME_DOPING * Math.max(a, b);
-const sameTemperature = (a: number, b: number): boolean => Math.abs(a - b) <= SAME_TEMPERATURE;
+export type Coverage = UploadPreview['coverage'];
 
 /**
  * Which doping × temperature points were measured. Duplicates and holes are
  * errors (the engine interpolates on a full grid); widely spaced grid lines
  * are warnings, because interpolation across them is a guess.
+ *
+ * Work and memory grow with the rows, not with dopings × temperatures: the
+ * measured points are kept in a map, holes are counted (cells − measured) and
+ * only the first few are named; the cell-by-cell `present` grid is built only
+ * when it is small enough to draw. Callers cap distinct dopings and
+ * temperatures first (table-limits.ts).
  */
 export function gridCoverage(rows: GridRow[]): { coverage: Coverage; errors: UploadIssue[]; warnings: UploadIssue[] } {
-  const dopings = lines(rows.map((r) => r.perCm3), sameDoping);
-  const temperatures = lines(rows.map((r) => r.temperature), sameTemperature);
-  const owner: number[][] = dopings.map(() => temperatures.map(() => 0));
+  const dopings = gridLines(rows.map((r) => r.perCm3), sameDoping);
+  const temperatures = gridLines(rows.map((r) => r.temperature), sameTemperature);
+  const width = temperatures.length;
+  const owner = new Map<number, number>();
   const errors: UploadIssue[] = [];
   for (const r of rows) {
-    const i = dopings.findIndex((d) => sameDoping(d, r.perCm3));
-    const j = temperatures.findIndex((t) => sameTemperature(t, r.temperature));
-    if (owner[i]![j]) errors.push({ line: r.line, message: `duplicate point: n = ${r.perCm3.toExponential(3)} cm⁻³ at ${r.temperature} K is already on line ${owner[i]![j]}` });
-    else owner[i]![j] = r.line;
+    const cell = lineOf(dopings, r.perCm3) * width + lineOf(temperatures, r.temperature);
+    const first = owner.get(cell);
+    if (first !== undefined) errors.push({ line: r.line, message: `duplicate point: n = ${r.perCm3.toExponential(3)} cm⁻³ at ${r.temperature} K is already on line ${first}` });
+    else owner.set(cell, r.line);
   }
-  const present = owner.map((row) => row.map((l) => l > 0));
-  const missing: string[] = [];
-  present.forEach((row, i) => row.forEach((p, j) => {
-    if (!p) missing.push(`n = ${dopings[i]!.toExponential(2)} cm⁻³ at ${temperatures[j]} K`);
-  }));
+  const cells = dopings.length * width;
+  const holes = cells - owner.size;
+  const firstHoles: Coverage['firstHoles'] = [];
+  // Stops at the last listed hole; at most `cells` steps, which the callers' caps bound.
+  for (let cell = 0; cell < cells && firstHoles.length < Math.min(holes, holesListed); cell++) {
+    if (!owner.has(cell)) firstHoles.push({ perCm3: dopings[Math.floor(cell / width)]!, temperature: temperatures[cell % width]! });
+  }
+  const present = cells <= coverageDrawLimit ? dopings.map((_, i) => temperatures.map((_, j) => owner.has(i * width + j))) : null;
   if (rows.length > 0 && dopings.length < 2) errors.push({ message: 'the table needs at least two different carrier concentrations' });
   if (rows.length > 0 && temperatures.length < 2) errors.push({ message: 'the table needs at least two different temperatures' });
-  if (missing.length > 0) {
-    const shown = missing.slice(0, 5).join('; ');
-    errors.push({ message: `the grid has ${missing.length} hole(s) — every carrier concentration must be measured at every temperature; missing: ${shown}${missing.length > 5 ? '; …' : ''}` });
+  if (holes > 0) {
+    const shown = firstHoles.map((h) => `n = ${h.perCm3.toExponential(2)} cm⁻³ at ${h.temperature} K`).join('; ');
+    errors.push({ message: `the grid has ${holes} hole(s) — every carrier concentration must be measured at every temperature; missing: ${shown}${holes > firstHoles.length ? '; …' : ''}` });
   }
-  return { coverage: { dopings, temperatures, present }, errors, warnings: sparseWarnings(dopings, temperatures) };
+  return {
+    coverage: { dopings, temperatures, measured: owner.size, holes, firstHoles, present },
+    errors,
+    warnings: sparseWarnings(dopings, temperatures),
+  };
 }
 
 function median(xs: number[]): number {

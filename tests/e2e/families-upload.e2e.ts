@@ -10,6 +10,7 @@ import {
   waitForVisibleText,
   type BrowserSession,
 } from './browser';
+import { sparseGridCsv } from '../server/fixtures/table-files';
 
 jest.setTimeout(240_000);
 
@@ -134,6 +135,27 @@ describe('uploading a measured family in a real browser', () => {
     await saveScreenshot(page, 'upload-error-phone');
     const save = page.getByRole('button', { name: 'Save measured family' }).filter({ visible: true });
     await expect(save.getAttribute('aria-disabled')).resolves.toBe('true');
+    await page.close();
+  });
+
+  it.each(['desktop', 'phone'] as const)('describes a grid too large to draw, and shows a file over a cap refused by name (%s)', async (viewport) => {
+    const page = await session.newPage(viewport);
+    await openUpload(page);
+    // 200 rows, every doping and temperature different: under the caps, a 200 × 200 grid with 39,800 holes.
+    await chooseFile(page, 'sparse-200.csv', sparseGridCsv(200));
+    await waitForVisibleText(page, 'This file cannot be saved');
+    const grid = visible(page, 'coverage-grid');
+    await grid.scrollIntoViewIfNeeded();
+    await expect(grid.innerText()).resolves.toMatch(/200 dopings × 200 temperatures: 200 measured, 39800 missing\.[\s\S]*40000 grid points are too many to draw here\./);
+    await expect(visible(page, 'coverage-holes').innerText()).resolves.toMatch(/^First missing: .* at 201\.5 K; .*; and 39795 more\.$/);
+    await saveScreenshot(page, `upload-sparse-grid-${viewport}`);
+
+    // 2,000 such rows: refused whole, naming the cap and the count.
+    await chooseFile(page, 'sparse-2000.csv', sparseGridCsv(2000));
+    await waitForVisibleText(page, 'File refused');
+    await waitForVisibleText(page, 'file: the file has 2000 different carrier concentrations; a table holds at most 200 (a measurement campaign has tens)');
+    await expect(page.getByTestId('upload-preview').filter({ visible: true }).count()).resolves.toBe(0);
+    await saveScreenshot(page, `upload-refused-${viewport}`);
     await page.close();
   });
 

@@ -71,7 +71,7 @@ export function brokenPreview(): UploadPreview {
       { line: 6, perCm3: 3e19, temperature: 300, seebeck: 160e-6, sigma: 2.1e5, kappa: 2.0 },
     ],
     carrier: 'p',
-    coverage: { dopings: [1e19, 3e19], temperatures: [250, 300, 350], present: [[true, true, true], [true, true, false]] },
+    coverage: { dopings: [1e19, 3e19], temperatures: [250, 300, 350], measured: 5, holes: 1, firstHoles: [{ perCm3: 3e19, temperature: 350 }], present: [[true, true, true], [true, true, false]] },
     warnings: [{ line: 3, column: 'seebeck_uV_per_K', message: 'suspicious magnitude: below 1 µV/K: was it written in V/K under a µV/K header?' }],
     errors: [
       { line: 7, column: 'kappa_W_per_m_K', message: '"1,3" is not a number' },

@@ -1,5 +1,5 @@
 import { ScrollView, StyleSheet, View } from 'react-native';
-import type { UploadPreview } from '@/shared/api/family-upload';
+import type { UploadCoverage } from '@/shared/api/family-upload';
 import { formatNumber, formatScientific } from '@/components/format/number';
 import { colors, radii, spacing } from '@/components/theme';
 import { Glyph } from '@/components/ui/glyph';
@@ -8,24 +8,39 @@ import { AppText } from '@/components/ui/text';
 const rowHeaderWidth = 112;
 const cellWidth = 52;
 
-type Coverage = UploadPreview['coverage'];
-
-export function missingCount(coverage: Coverage): number {
-  return coverage.present.reduce((sum, row) => sum + row.filter((p) => !p).length, 0);
+/** The first missing points, and how many more there are, in words. */
+function holesText(coverage: UploadCoverage): string {
+  const listed = coverage.firstHoles.map((h) => `${formatScientific(h.perCm3, 3)} cm⁻³ at ${formatNumber(h.temperature, 4)} K`).join('; ');
+  return `First missing: ${listed}${coverage.holes > coverage.firstHoles.length ? `; and ${coverage.holes - coverage.firstHoles.length} more` : ''}.`;
 }
 
-/** Doping (rows) × temperature (columns): a tick where measured, a cross where missing, in words for screen readers. */
-export function CoverageGrid({ coverage }: { coverage: Coverage }) {
-  const { dopings, temperatures, present } = coverage;
+/**
+ * Doping (rows) × temperature (columns): a tick where measured, a cross where
+ * missing, in words for screen readers. A grid too large to draw (the server
+ * sends no cell map) is described by its counts and its first holes.
+ */
+export function CoverageGrid({ coverage }: { coverage: UploadCoverage }) {
+  const { dopings, temperatures, present, measured, holes } = coverage;
   if (dopings.length === 0 || temperatures.length === 0) {
     return <AppText tone="muted">No complete row to place on the grid.</AppText>;
   }
-  const missing = missingCount(coverage);
+  const summary = (
+    <AppText tone={holes > 0 ? 'heat' : 'muted'}>
+      {`${dopings.length} dopings × ${temperatures.length} temperatures: ${measured} measured, ${holes} missing.`}
+    </AppText>
+  );
+  if (!present) {
+    return (
+      <View style={styles.wrap} testID="coverage-grid">
+        {summary}
+        <AppText tone="muted">{`${dopings.length * temperatures.length} grid points are too many to draw here.`}</AppText>
+        {holes > 0 ? <AppText testID="coverage-holes">{holesText(coverage)}</AppText> : null}
+      </View>
+    );
+  }
   return (
     <View style={styles.wrap} testID="coverage-grid">
-      <AppText tone={missing > 0 ? 'heat' : 'muted'}>
-        {`${dopings.length} dopings × ${temperatures.length} temperatures: ${dopings.length * temperatures.length - missing} measured, ${missing} missing.`}
-      </AppText>
+      {summary}
       <ScrollView horizontal contentContainerStyle={styles.scroll}>
         <View role="table" aria-label="Grid coverage">
           <View style={styles.row} role="row">

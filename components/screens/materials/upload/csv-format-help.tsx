@@ -1,4 +1,6 @@
 import { StyleSheet, View } from 'react-native';
+import { maxUploadBytes } from '@/shared/api/family-upload';
+import { tableLimits } from '@/shared/engine/table-limits';
 import { colors, radii, spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';
 
@@ -45,7 +47,7 @@ export function CsvFormatHelp() {
         {exampleCsv}
       </AppText>
       <AppText variant="caption" tone="muted">
-        Every doping should be measured at every temperature (a full grid); the preview shows which points are missing. Up to 5 MB.
+        {`Every doping should be measured at every temperature (a full grid); the preview shows which points are missing. Up to ${maxUploadBytes / 1024 / 1024} MB, ${tableLimits.rows} rows, ${tableLimits.dopings} dopings and ${tableLimits.temperatures} temperatures.`}
       </AppText>
     </View>
   );

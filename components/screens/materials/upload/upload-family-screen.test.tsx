@@ -39,6 +39,7 @@ describe('UploadFamilyScreen', () => {
     const { requests } = mockFetch({ status: 200, body: okPreview }, { status: 201, body: { family: saved, preview: okPreview } });
     const result = renderRoutes(routes, '/materials/upload', sessionAs('physicist'));
     expect(screen.getByTestId('csv-format-help')).toHaveTextContent(/seebeck_uV_per_K · seebeck_mV_per_K · seebeck_V_per_K/);
+    expect(screen.getByTestId('csv-format-help')).toHaveTextContent(/Up to 5 MB, 20000 rows, 200 dopings and 300 temperatures\./);
 
     picks('ingot-9.csv', 2048);
     await choose();
@@ -76,6 +77,18 @@ describe('UploadFamilyScreen', () => {
     expect(screen.getByTestId('error-name')).toHaveTextContent('Name is required');
     expect(screen.getByTestId('error-source')).toHaveTextContent(/Source is required/);
     expect(requests).toHaveLength(1);
+  });
+
+  it('shows the server refusing a file over a size cap, naming the cap', async () => {
+    const message = 'the file has 2000 different carrier concentrations; a table holds at most 200 (a measurement campaign has tens)';
+    mockFetch({ status: 400, body: { name: 'ValidationError', message: `file: ${message}`, errors: [{ field: 'file', message }] } });
+    renderRoutes(routes, '/materials/upload', sessionAs('physicist'));
+    picks('sparse.csv', 66_000);
+    await choose();
+
+    expect(await screen.findByText('File refused')).toBeOnTheScreen();
+    expect(screen.getByText(`file: ${message}`)).toBeOnTheScreen();
+    expect(screen.queryByTestId('upload-preview')).toBeNull();
   });
 
   it('refuses a file over the limit without uploading it', async () => {

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { useRouter } from 'expo-router';
 import { maxUploadBytes } from '@/shared/api/family-upload';
+import { ApiError } from '@/components/api/client';
 import { usePreviewUpload, useSaveUpload, type PickedFile } from '@/components/api/family-upload';
 import { ScreenFrame } from '@/components/shell/screen-frame';
 import { spacing } from '@/components/theme';
@@ -66,7 +67,7 @@ export function UploadFamilyScreen() {
         </Section>
         {preview.isPending ? <LoadingState label="Reading the file…" /> : null}
         {preview.isError ? (
-          <Notice tone="danger" title="Could not read the file">
+          <Notice tone="danger" title={preview.error instanceof ApiError && preview.error.isClientError ? 'File refused' : 'Could not read the file'}>
             <AppText>{preview.error.message}</AppText>
           </Notice>
         ) : null}

@@ -29,6 +29,19 @@ describe('UploadPreview', () => {
     expect(screen.getAllByLabelText(/: measured$/)).toHaveLength(5);
   });
 
+  it('describes a grid too large to draw by its counts and first holes, drawing no cells', () => {
+    const preview = brokenPreview();
+    const dopings = Array.from({ length: 200 }, (_, i) => 1e18 * 10 ** (i / 100));
+    const temperatures = Array.from({ length: 200 }, (_, j) => 200 + j);
+    const firstHoles = temperatures.slice(1, 6).map((temperature) => ({ perCm3: 1e18, temperature }));
+    renderWithProviders(<UploadPreview preview={{ ...preview, coverage: { dopings, temperatures, measured: 200, holes: 39800, firstHoles, present: null } }} />);
+
+    expect(screen.getByTestId('coverage-grid')).toHaveTextContent(/200 dopings × 200 temperatures: 200 measured, 39800 missing\./);
+    expect(screen.getByTestId('coverage-grid')).toHaveTextContent(/40000 grid points are too many to draw here\./);
+    expect(screen.getByTestId('coverage-holes')).toHaveTextContent(/^First missing: 1 × 10¹⁸ cm⁻³ at 201 K; .*1 × 10¹⁸ cm⁻³ at 205 K; and 39795 more\.$/);
+    expect(screen.queryByLabelText(/: missing$/)).toBeNull();
+  });
+
   it('lists the recognised columns, the converted rows and plots the measured points', () => {
     renderWithProviders(<UploadPreview preview={brokenPreview()} />);
 
@@ -52,7 +65,7 @@ describe('UploadPreview', () => {
       warnings: [],
       rowCount: 4,
       rows: preview.rows.filter((r) => r.temperature !== 350 && r.line !== 3).concat([{ line: 3, perCm3: 1e19, temperature: 300, seebeck: 2e-4, sigma: 8e4, kappa: 1.4 }]),
-      coverage: { dopings: [1e19, 3e19], temperatures: [250, 300], present: [[true, true], [true, true]] },
+      coverage: { dopings: [1e19, 3e19], temperatures: [250, 300], measured: 4, holes: 0, firstHoles: [], present: [[true, true], [true, true]] },
     };
     renderWithProviders(<UploadPreview preview={clean} />);
     expect(screen.getByTestId('preview-status')).toHaveTextContent(/Ready to save.*4 rows on 2 dopings × 2 temperatures · p-type · holes/);
