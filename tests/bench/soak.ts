@@ -92,8 +92,9 @@ async function soak(stack: NpmStart): Promise<void> {
     const res = await call(cookie, 'POST', '/designs', JSON.stringify({ name: `Soak ${starts} starts ${Math.random().toString(36).slice(2, 7)}`, familyId: await family(cookie), lengthMm: 1.5, areaMm2: 1, hotSide: 300, minPerCm3: 1e18, maxPerCm3: 1e20, controlPoints: 5, starts }));
     return (res!.body as { design: { id: string } }).design.id;
   };
-  const designs = { piet: [await design(piet, 30), await design(piet, 120)], hana: [await design(hana, 30)] };
+  const designs = { piet: [await design(piet, 30), await design(piet, 30), await design(piet, 150)], hana: [await design(hana, 30)] };
   const launched: string[] = [];
+  const launchedBy = { piet: [] as string[], hana: [] as string[] };
   const sockets: Socket[] = [];
   let progressEvents = 0;
   const csv = smallTable();
@@ -109,12 +110,14 @@ async function soak(stack: NpmStart): Promise<void> {
     await sleep(k * 100);
     while (Date.now() < end) {
       const roll = Math.random();
-      if (physicist && roll < 0.06) {
+      // About one launch every few seconds in all: what two workers can keep up with, so the drain below ends.
+      if (physicist && roll < 0.012) {
         const list = team === 'hana' ? designs.hana : designs.piet;
         const res = await call(cookie, 'POST', `/designs/${list[Math.floor(Math.random() * list.length)]}/runs`);
         if (res?.status === 201) {
           const id = (res.body as { run: { id: string } }).run.id;
           launched.push(id);
+          launchedBy[team].push(id);
           socket.emit('watch', `run:${id}`);
         }
       } else if (physicist && team === 'piet' && roll < 0.12) {
@@ -123,8 +126,9 @@ async function soak(stack: NpmStart): Promise<void> {
         await call(cookie, 'POST', '/families/upload/preview', form, false);
       } else if (roll < 0.5) {
         await call(cookie, 'GET', roll < 0.3 ? '/runs' : '/families');
-      } else if (roll < 0.8 && launched.length > 0) {
-        await call(cookie, 'GET', `/runs/${launched[Math.floor(Math.random() * launched.length)]}`);
+      } else if (roll < 0.8 && launchedBy[team].length > 0) {
+        const own = launchedBy[team];
+        await call(cookie, 'GET', `/runs/${own[Math.floor(Math.random() * own.length)]}`);
       } else {
         await call(cookie, 'GET', roll < 0.9 ? '/designs' : '/modules');
       }
@@ -171,8 +175,8 @@ async function soak(stack: NpmStart): Promise<void> {
   await Promise.all([...Array.from({ length: userCount }, (_, k) => user(k)), faults]);
   clearInterval(sampler);
 
-  // Drain: every launched run must end; one still unfinished after three minutes, or failed, is lost.
-  const drainUntil = Date.now() + 180_000;
+  // Drain: every launched run must end; one still unfinished after five minutes, or failed, is lost.
+  const drainUntil = Date.now() + 300_000;
   let states: Array<{ state: string; n: number }> = [];
   for (;;) {
     states = (await ds.query('SELECT state, count(*)::int AS n FROM run WHERE id = ANY($1) GROUP BY state', [launched])) as Array<{ state: string; n: number }>;
@@ -191,6 +195,9 @@ async function soak(stack: NpmStart): Promise<void> {
   console.log(`runs launched: ${launched.length}; succeeded ${count('succeeded')}, cancelled ${count('cancelled')}, resumed after a lost worker ${resumed}; runs lost: ${lost}`);
   console.log(`live progress events received: ${progressEvents}; supervisor restarts: ${restarts}`);
   console.log(`API peak resident memory: ${(peakRss / 1024).toFixed(0)} MB`);
+  // A 500 is a bug whatever the load: show what the API logged about each.
+  const logged = stack.output.filter((l) => /^\[api\].*(Error|error)/.test(l));
+  if (logged.length > 0) console.log(`API error lines (first 20 of ${logged.length}):\n  ${logged.slice(0, 20).join('\n  ')}`);
 
   for (const s of sockets) s.disconnect();
   await pool.end();
