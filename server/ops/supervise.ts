@@ -10,6 +10,8 @@ export type SuperviseOptions = {
   /** Give up after this many unexpected exits of one service within `windowMs` (default 5 in 2 minutes). */
   maxExits?: number;
   windowMs?: number;
+  /** First restart delay, doubling with each recent exit up to 30 s (default 1 s). */
+  firstDelayMs?: number;
   /** Told of every unexpected exit (the test runner counts them as failures). */
   onExit?: (name: string, how: string) => void;
   /** Told once when a service keeps crashing; the caller decides what to stop. */
@@ -20,7 +22,6 @@ export type Stack = { stop: () => Promise<void>; pid: (name: string) => number |
 
 const root = join(__dirname, '..', '..');
 /** Backoff before a restart: 1 s, doubling with each recent crash, at most 30 s. */
-const firstDelayMs = 1000;
 const maxDelayMs = 30_000;
 /** A worker hands its run back within its 15 s graceful stop; then it is killed. */
 const forceAfterMs = 20_000;
@@ -42,6 +43,7 @@ export function startServices(services: Service[], env: NodeJS.ProcessEnv, o: Su
   const restart = o.restart ?? true;
   const maxExits = o.maxExits ?? 5;
   const windowMs = o.windowMs ?? 120_000;
+  const firstDelayMs = o.firstDelayMs ?? 1000;
   let stopping = false;
   const live = new Map<string, ChildProcess>();
   const pending = new Set<ReturnType<typeof setTimeout>>();
@@ -76,7 +78,7 @@ export function startServices(services: Service[], env: NodeJS.ProcessEnv, o: Su
         return;
       }
       const delay = Math.min(maxDelayMs, firstDelayMs * 2 ** (recent.length - 1));
-      log('supervisor', `${s.name} ${how}; restarting it in ${(delay / 1000).toFixed(0)} s (${recent.length} of ${maxExits} restarts allowed within ${Math.round(windowMs / 1000)} s)`);
+      log('supervisor', `${s.name} ${how}; restarting it in ${delay < 1000 ? `${delay} ms` : `${(delay / 1000).toFixed(0)} s`} (${recent.length} of ${maxExits} restarts allowed within ${Math.round(windowMs / 1000)} s)`);
       const timer = setTimeout(() => {
         pending.delete(timer);
         if (!stopping) run(s, recent, tail);

@@ -4,6 +4,8 @@
  * the service must stay up or come back by itself and the run must finish,
  * resumed from its checkpoint where its worker was lost.
  */
+import { mkdirSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
 import type { Socket } from 'socket.io-client';
 import { runDetailSchema, type RunDetail, type RunProgress } from '../../shared/api';
 import { controlCluster } from '../../server/ops/postgres';
@@ -30,7 +32,12 @@ beforeAll(async () => {
 
 afterAll(async () => {
   for (const s of sockets) s.disconnect();
-  if (stack) await stack.interrupt();
+  if (stack) {
+    await stack.interrupt();
+    // What the stack said, for whoever reads a failure: every process's log, in order.
+    mkdirSync(join(__dirname, '..', '..', 'test-results'), { recursive: true });
+    writeFileSync(join(__dirname, '..', '..', 'test-results', 'fault-tolerance-npm-start.log'), `${stack.output.join('\n')}\n`);
+  }
 });
 
 const detail = async (runId: string): Promise<RunDetail> => runDetailSchema.parse((await client.api('GET', `/runs/${runId}`)).body);
@@ -64,13 +71,17 @@ it('PostgreSQL stopped and started under a running run: requests answer 503 mean
   expect(pidsBefore).toHaveLength(2);
 
   controlCluster(stack.dataDir, 'stop');
-  const health = await fetch(`${stack.origin}/api/health`);
-  expect(health.status).toBe(503);
-  const during = await client.api<{ name: string; message: string }>('GET', `/runs/${runId}`);
-  expect(during.status).toBe(503);
-  expect(during.body.message).toMatch(/database is unavailable/);
-  await new Promise((r) => setTimeout(r, 5000));
-  controlCluster(stack.dataDir, 'start');
+  try {
+    const health = await fetch(`${stack.origin}/api/health`);
+    expect(health.status).toBe(503);
+    const during = await client.api<{ name: string; message: string }>('GET', `/runs/${runId}`);
+    expect(during.status).toBe(503);
+    expect(during.body.message).toMatch(/database is unavailable/);
+    await new Promise((r) => setTimeout(r, 5000));
+  } finally {
+    // Whatever failed above, the tests that follow need their database back.
+    controlCluster(stack.dataDir, 'start');
+  }
   const back = Date.now();
 
   await eventually(async () => ((await fetch(`${stack.origin}/api/health`)).status === 200 ? true : undefined), 30);
