@@ -34,8 +34,16 @@ function codeOf(err: object): string | undefined {
   return undefined;
 }
 
+/**
+ * TypeORM's words for a transaction whose connection died under it: the
+ * driver released the broken connection, and the transaction's next query
+ * finds it gone. Seen only when PostgreSQL went away mid-request.
+ */
+const releasedRunner = new Set(['QueryRunnerAlreadyReleasedError', 'QueryRunnerProviderAlreadyReleasedError']);
+
 export function isDatabaseUnavailable(err: unknown): boolean {
   if (!err || typeof err !== 'object') return false;
+  if (err instanceof Error && releasedRunner.has(err.name)) return true;
   const code = codeOf(err);
   if (code && (unavailableCodes.has(code) || code.startsWith('08'))) return true;
   const message = err instanceof Error ? err.message : '';
