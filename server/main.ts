@@ -11,6 +11,7 @@ import type { RelayStatus } from './realtime/event-relay';
 import { attachRealtime } from './realtime/socket-server';
 import { watchRules } from './realtime/watch-rules';
 import { startRunSweeper } from './runs/run-sweeper';
+import { closeApiThreads } from './services/api-threads';
 import { version } from './version';
 
 /**
@@ -46,6 +47,7 @@ async function main(): Promise<void> {
     await realtime.close();
     await boss.stop({ graceful: true, timeout: 5000 }).catch(() => undefined);
     mailer.close();
+    await closeApiThreads().catch(() => undefined);
     await pool.end().catch(() => undefined);
     await ds.destroy().catch(() => undefined);
     process.exit(0);

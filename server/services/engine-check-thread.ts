@@ -3,7 +3,7 @@
  * building the spline of a large measured table takes a few hundred
  * milliseconds per case, which the API's event loop owes to other requests.
  */
-import { answerInThread } from '../threads/run-in-thread';
 import { judge } from './engine-judge';
 
-answerInThread(judge);
+/** Run by the API's thread pool (server/services/api-threads.ts). */
+export default judge;

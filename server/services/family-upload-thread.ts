@@ -5,16 +5,16 @@
  */
 import type { UploadPreview } from '../../shared/api';
 import { parseTableCsv, TableLimitError } from '../../shared/families/parse-table-csv';
-import { answerInThread } from '../threads/run-in-thread';
 
 /** The preview, or why the file was refused whole (a size cap: nothing below it was checked). */
 export type UploadThreadAnswer = { preview: UploadPreview } | { refused: string };
 
-answerInThread((text: string): UploadThreadAnswer => {
+/** Run by the API's thread pool (server/services/api-threads.ts). */
+export default function readUpload(text: string): UploadThreadAnswer {
   try {
     return { preview: parseTableCsv(text) };
   } catch (err) {
     if (err instanceof TableLimitError) return { refused: err.message };
     throw err;
   }
-});
+}

@@ -8,15 +8,15 @@ import type { UploadIssue } from '../../shared/api';
 import type { GrowthSheet } from '../../shared/growth/growth-sheet';
 import { reportMeasurements, type MeasurementReport } from '../../shared/growth/measurement-report';
 import { parseMeasurementsCsv, type MeasuredPoint } from '../../shared/growth/parse-measurements';
-import { answerInThread } from '../threads/run-in-thread';
 
 export type ReportThreadInput = { text: string; caseJson: unknown; sheet: GrowthSheet; zones: number; temperature: number };
 
 /** The file's errors (nothing is predicted), or the points read, the warnings about them and the prediction. */
 export type ReportThreadAnswer = { errors: UploadIssue[] } | { points: MeasuredPoint[]; warnings: UploadIssue[]; report: MeasurementReport };
 
-answerInThread((i: ReportThreadInput): ReportThreadAnswer => {
+/** Run by the API's thread pool (server/services/api-threads.ts). */
+export default function readAndPredict(i: ReportThreadInput): ReportThreadAnswer {
   const parsed = parseMeasurementsCsv(i.text, i.sheet.lengthMm);
   if (!parsed.ok) return { errors: parsed.errors };
   return { points: parsed.points, warnings: parsed.warnings, report: reportMeasurements(i.caseJson, i.sheet, i.zones, parsed.points, i.temperature) };
-});
+}
