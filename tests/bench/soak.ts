@@ -18,11 +18,11 @@ import { createAuth } from '../../server/auth/auth-pool';
 import { readEnv } from '../../server/config/env';
 import { createDataSource } from '../../server/db/data-source';
 import { controlCluster } from '../../server/ops/postgres';
-import { freshDataRoot, npmStart, type NpmStart } from '../server/npm-start';
+import { freshDataRoot, npmStart, privateStack, type NpmStart } from '../server/npm-start';
 
 const seconds = Number(process.env.SOAK_SECONDS ?? 180);
 const userCount = Number(process.env.SOAK_USERS ?? 36);
-const settings = { pgDataRoot: '/var/tmp/frostgrade-soak', pgPort: 54370, port: 8370, smtpPort: 2570, env: { WORKERS: '2', RUN_STALE_SECONDS: '5', TEAM_LAUNCHES_PER_MINUTE: '600' } };
+const settings = privateStack('soak', 31, { WORKERS: '2', RUN_STALE_SECONDS: '5', TEAM_LAUNCHES_PER_MINUTE: '600' });
 
 const pct = (xs: number[], p: number): number => [...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor((p / 100) * xs.length))] ?? NaN;
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));

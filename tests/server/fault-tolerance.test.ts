@@ -10,9 +10,9 @@ import type { Socket } from 'socket.io-client';
 import { runDetailSchema, type RunDetail, type RunProgress } from '../../shared/api';
 import { controlCluster } from '../../server/ops/postgres';
 import { eventually } from './context';
-import { freshDataRoot, npmStart, signIn, socketOf, type NpmStart } from './npm-start';
+import { freshDataRoot, npmStart, privateStack, signIn, socketOf, type NpmStart } from './npm-start';
 
-const settings = { pgDataRoot: '/var/tmp/frostgrade-faults', pgPort: 54360, port: 8360, smtpPort: 2560, env: { RUN_STALE_SECONDS: '5' } };
+const settings = privateStack('faults', 21, { RUN_STALE_SECONDS: '5' });
 let stack: NpmStart;
 let client: Awaited<ReturnType<typeof signIn>>;
 let designId: string;

@@ -26,6 +26,18 @@ export type NpmStart = {
 
 export type NpmStartSettings = { pgDataRoot: string; pgPort: number; port: number; smtpPort: number; env?: Record<string, string> };
 
+/**
+ * Ports and a data directory for a private `npm start`, set apart from the
+ * test stack's own (PORT, PG_PORT, SMTP_PORT as `npm test` was given them)
+ * by `offset`, so two test runs on other ports never share them.
+ */
+export function privateStack(name: string, offset: number, env: Record<string, string> = {}): NpmStartSettings {
+  const port = Number(process.env.PORT ?? 8341);
+  const pgPort = Number(process.env.PG_PORT ?? 54339);
+  const smtpPort = Number(process.env.SMTP_PORT ?? 2526);
+  return { pgDataRoot: `/var/tmp/frostgrade-${name}-${pgPort + offset}`, pgPort: pgPort + offset, port: port + offset, smtpPort: smtpPort + offset, env };
+}
+
 /** Stops a cluster a previous, crashed run may have left and removes it, so every test run starts clean. */
 export function freshDataRoot(pgDataRoot: string): void {
   const dataDir = join(pgDataRoot, 'dev', 'pgdata');
