@@ -52,7 +52,7 @@ async function main(): Promise<void> {
   for (const port of [env.port, env.smtp.port]) {
     if (await portInUse(port)) throw new Error(`port ${port} is in use: is another test run going? (set PORT / SMTP_PORT)`);
   }
-  const cluster = await prepareDatabase(env, { fresh: true });
+  const { cluster } = await prepareDatabase(env, { fresh: true });
   const steps: Array<[string, boolean]> = [];
   if (!focused) {
     steps.push(['typecheck', step('typecheck', 'npx', ['tsc', '--noEmit', '-p', 'tsconfig.json'])]);
@@ -75,7 +75,7 @@ async function main(): Promise<void> {
     if (existsSync(out)) summary = JSON.parse(readFileSync(out, 'utf8')) as JestSummary;
   } finally {
     await stack.stop();
-    if (cluster.startedHere) stopCluster(cluster);
+    if (cluster?.startedHere) stopCluster(cluster);
   }
   const stepFailures = steps.filter(([, ok]) => !ok).map(([n]) => n);
   for (const [n, ok] of steps) log('test', `${n}: ${ok ? 'passed' : 'failed'}`);

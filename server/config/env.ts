@@ -3,22 +3,25 @@ import { z } from 'zod';
 /**
  * Every setting the API, worker, mail catcher and ops scripts read, in one
  * place, with the defaults a fresh machine needs. `profile` separates the
- * development stack (`npm start`) from the test stack (`npm test`) so the
- * two can run side by side without sharing a database or a port.
+ * development stack (`npm start`), the test stack (`npm test`) and a lab's
+ * production stack (`NODE_ENV=production npm start`), so they never share a
+ * database, a port or a data directory. Production data lives under
+ * /var/lib, not /var/tmp.
  */
 const profiles = {
-  dev: { pgPort: 54329, apiPort: 8340, smtpPort: 2525, database: 'frostgrade' },
-  test: { pgPort: 54339, apiPort: 8341, smtpPort: 2526, database: 'frostgrade_test' },
+  dev: { pgPort: 54329, apiPort: 8340, smtpPort: 2525, database: 'frostgrade', dataRoot: '/var/tmp/frostgrade' },
+  test: { pgPort: 54339, apiPort: 8341, smtpPort: 2526, database: 'frostgrade_test', dataRoot: '/var/tmp/frostgrade' },
+  prod: { pgPort: 54319, apiPort: 8340, smtpPort: 587, database: 'frostgrade', dataRoot: '/var/lib/frostgrade' },
 } as const;
 
 export type Profile = keyof typeof profiles;
 
 const schema = z.object({
-  FROSTGRADE_PROFILE: z.enum(['dev', 'test']).default('dev'),
+  FROSTGRADE_PROFILE: z.enum(['dev', 'test', 'prod']).default('dev'),
   NODE_ENV: z.enum(['development', 'test', 'production']).optional(),
   DATABASE_URL: z.string().url().optional(),
   PG_PORT: z.coerce.number().int().min(1024).max(65535).optional(),
-  PG_DATA_ROOT: z.string().default('/var/tmp/frostgrade'),
+  PG_DATA_ROOT: z.string().optional(),
   PORT: z.coerce.number().int().min(1).max(65535).optional(),
   HOST: z.string().default('127.0.0.1'),
   APP_ORIGIN: z.string().url().optional(),
@@ -32,17 +35,34 @@ const schema = z.object({
   WORKER_HEARTBEAT_SECONDS: z.coerce.number().min(1).max(300).default(5),
   RUN_QUEUE: z.string().regex(/^[a-z0-9-]+$/).default('leg-run'),
   RUN_STALE_SECONDS: z.coerce.number().min(3).max(3600).default(15),
-  WORKERS: z.coerce.number().int().min(1).max(32).default(1),
+  WORKERS: z.coerce.number().int().min(0).max(32).default(1),
   TEAM_RUNNING_LIMIT: z.coerce.number().int().min(1).max(1000).default(4),
   RUN_SLICE_SECONDS: z.coerce.number().min(1).max(86400).default(60),
   TEAM_LAUNCHES_PER_MINUTE: z.coerce.number().int().min(1).max(100000).default(120),
   TEAM_UNFINISHED_LIMIT: z.coerce.number().int().min(1).max(1000000).default(1000),
+  TRUST_PROXY: z.string().regex(/^(loopback|false|true|\d{1,2}|[0-9a-fA-F.:/, ]+)$/, { error: 'TRUST_PROXY must be loopback, false, true, a number of proxy hops, or a list of addresses/subnets' }).default('loopback'),
 });
+
+/**
+ * What production needs and a developer's machine does not: the public
+ * address (links in mail, the cookie's Secure flag, the allowed Origin) and a
+ * real mail relay. Each missing one is named; `npm start` refuses to start
+ * in production until all are set.
+ */
+export function productionProblems(source: Record<string, string | undefined>): string[] {
+  const problems: string[] = [];
+  if (!source.APP_ORIGIN) problems.push('APP_ORIGIN is not set: the address users open, e.g. https://frostgrade.lab.example (mail links and cookies depend on it)');
+  if (!source.SMTP_HOST) problems.push('SMTP_HOST is not set: the mail relay that delivers invitations, resets and run mail (with SMTP_PORT, SMTP_USER, SMTP_PASS as your relay needs)');
+  if (!source.MAIL_FROM) problems.push('MAIL_FROM is not set: the sender address, e.g. "Frostgrade <frostgrade@lab.example>"');
+  return problems;
+}
 
 export type Env = {
   profile: Profile;
   production: boolean;
   databaseUrl: string;
+  /** DATABASE_URL was given: the database is someone else's, no private cluster is started. */
+  externalDatabase: boolean;
   pgPort: number;
   pgDataRoot: string;
   host: string;
@@ -58,11 +78,19 @@ export type Env = {
   runQueue: string;
   /** A running run whose worker has not beaten for this long is handed to another worker. */
   runStaleSeconds: number;
-  /** Worker processes `npm start` runs. */
+  /** Worker processes `npm start` runs (0 on an API machine whose workers run elsewhere: `npm run workers`). */
   workers: number;
   /** Fair share between teams (server/runs): see README "Runs, workers and the growth hand-off". */
   fairShare: FairShare;
+  /** Express's `trust proxy`: which hops' X-Forwarded-For to believe (README, "Running it for a lab"). */
+  trustProxy: boolean | number | string;
 };
+
+function trustProxyValue(v: string): boolean | number | string {
+  if (v === 'true') return true;
+  if (v === 'false') return false;
+  return /^\d+$/.test(v) ? Number(v) : v;
+}
 
 export type FairShare = {
   /** Runs of one team running at once on one queue; more wait. */
@@ -90,8 +118,9 @@ export function readEnv(source: Record<string, string | undefined> = process.env
     profile: e.FROSTGRADE_PROFILE,
     production,
     databaseUrl: e.DATABASE_URL ?? `postgres://postgres@127.0.0.1:${pgPort}/${d.database}`,
+    externalDatabase: e.DATABASE_URL !== undefined,
     pgPort,
-    pgDataRoot: e.PG_DATA_ROOT,
+    pgDataRoot: e.PG_DATA_ROOT ?? d.dataRoot,
     host: e.HOST,
     port,
     appOrigin: e.APP_ORIGIN ?? `http://127.0.0.1:${port}`,
@@ -104,5 +133,6 @@ export function readEnv(source: Record<string, string | undefined> = process.env
     runStaleSeconds: e.RUN_STALE_SECONDS,
     workers: e.WORKERS,
     fairShare: { teamRunningLimit: e.TEAM_RUNNING_LIMIT, sliceSeconds: e.RUN_SLICE_SECONDS, launchesPerMinute: e.TEAM_LAUNCHES_PER_MINUTE, unfinishedLimit: e.TEAM_UNFINISHED_LIMIT },
+    trustProxy: trustProxyValue(e.TRUST_PROXY),
   };
 }

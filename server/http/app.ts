@@ -53,7 +53,8 @@ const devCors: RequestHandler = (req, res, next) => {
 export function createApp(d: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  // Behind a reverse proxy req.ip (rate limits, the audit trail) comes from X-Forwarded-For, believed only for the hops TRUST_PROXY names.
+  app.set('trust proxy', d.env.trustProxy);
   if (!d.env.production) app.use('/api', devCors);
   app.use('/api', express.json({ limit: '2mb' }));
   app.use('/api', originCheck(d.env.appOrigin, !d.env.production));
@@ -61,7 +62,7 @@ export function createApp(d: AppDeps): Express {
   app.use('/api', mountRoutes(d.ds, apiRoutes(d)));
   app.use('/api', notFoundApi);
   serveWeb(app, resolve(d.env.webDist));
-  app.use(errorHandler(!d.env.production && d.env.profile !== 'test'));
+  app.use(errorHandler(d.env.profile !== 'test'));
   return app;
 }
 

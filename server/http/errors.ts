@@ -1,6 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { MulterError } from 'multer';
 import { isDatabaseUnavailable } from '../db/db-errors';
+import { logError } from '../ops/error-log';
 import { uniqueConflict } from './unique-conflict';
 
 export type FieldError = { field: string; message: string };
@@ -47,9 +48,13 @@ export class BusyError extends RetryLaterError {
 
 export const notFoundApi: RequestHandler = (req, _res, next) => next(new NotFoundError(`route ${req.method} ${req.path}`));
 
-/** One error shape for every route: { name, message, errors? }. No stack traces in answers. */
-export function errorHandler(logStacks: boolean): ErrorRequestHandler {
-  return (err: unknown, _req, res, _next) => {
+/**
+ * One error shape for every route: { name, message, errors? }. No stack
+ * traces in answers; an unexpected error is logged with its request (JSON
+ * lines in production), except in the test profile, whose runs check answers.
+ */
+export function errorHandler(logUnexpected: boolean): ErrorRequestHandler {
+  return (err: unknown, req, res, _next) => {
     if (err instanceof HttpError) {
       if (err instanceof RetryLaterError) res.set('Retry-After', String(Math.ceil(err.retryAfterSeconds)));
       res.status(err.status).json({ name: err.name, message: err.message, ...(err.errors ? { errors: err.errors } : {}) });
@@ -65,7 +70,7 @@ export function errorHandler(logStacks: boolean): ErrorRequestHandler {
       res.status(known.status).json({ name: known.name, message: known.message, errors: known.errors });
       return;
     }
-    if (logStacks) console.error(err);
+    if (logUnexpected) logError('api', 'unexpected error answered 500', err, { method: req.method, path: req.path, ip: req.ip });
     res.status(500).json({ name: 'InternalError', message: 'Something went wrong on the server; the error has been logged.' });
   };
 }

@@ -10,7 +10,7 @@ const { existsSync, readFileSync, writeFileSync } = require('node:fs');
 const { join } = require('node:path');
 
 const root = join(__dirname, '..', '..');
-const targets = { start: ['server/ops/start.ts'], dev: ['server/ops/start.ts', '--dev'], test: ['tests/run-all.ts'] };
+const targets = { start: ['server/ops/start.ts'], dev: ['server/ops/start.ts', '--dev'], test: ['tests/run-all.ts'], workers: ['server/ops/workers.ts'] };
 const [command, ...rest] = process.argv.slice(2);
 if (!targets[command]) {
   console.error(`usage: node server/ops/launch.js ${Object.keys(targets).join('|')} [args]`);

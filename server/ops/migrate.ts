@@ -1,15 +1,14 @@
 import 'reflect-metadata';
 import { readEnv } from '../config/env';
 import { createDataSource } from '../db/data-source';
+import { provideDatabase } from './database';
 import { log } from './log';
-import { ensureCluster, ensureDatabase } from './postgres';
 
-/** `npm run migration:run` / `npm run migration:revert` against the dev database. */
+/** `npm run migration:run` / `npm run migration:revert` against the development database (or DATABASE_URL). */
 async function main(): Promise<void> {
   const env = readEnv();
-  ensureCluster(env.pgDataRoot, env.profile, env.pgPort);
-  await ensureDatabase(env.pgPort, new URL(env.databaseUrl).pathname.slice(1));
-  const ds = await createDataSource(env.databaseUrl, 'frostgrade-migrate').initialize();
+  const db = await provideDatabase(env);
+  const ds = await createDataSource(db.url, 'frostgrade-migrate').initialize();
   try {
     if (process.argv.includes('--revert')) {
       await ds.undoLastMigration({ transaction: 'all' });

@@ -1,4 +1,5 @@
 import { execFileSync, spawnSync } from 'node:child_process';
+import { randomBytes } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync, chownSync } from 'node:fs';
 import { join } from 'node:path';
 import { Client } from 'pg';
@@ -9,7 +10,14 @@ import { log } from './log';
  * directory the `postgres` user can reach (a checkout under /root is not).
  * initdb and pg_ctl refuse to run as root, so they run as `postgres`.
  */
-export type Cluster = { dataDir: string; port: number; startedHere: boolean };
+export type Cluster = { dataDir: string; port: number; startedHere: boolean; /** Set when the cluster asks for a password (production). */ password?: string };
+
+/**
+ * How a private cluster is run. Durability is on (fsync) everywhere but the
+ * throw-away test cluster; production asks for a password (scram-sha-256),
+ * development trusts loopback connections, as a developer's own machine may.
+ */
+export type ClusterPolicy = { fsync: boolean; password: boolean };
 
 function pgBin(): string {
   for (const v of ['17', '16', '15']) {
@@ -61,46 +69,70 @@ function isRunning(bin: string, dataDir: string): boolean {
   return asPostgres(bin, ['pg_ctl', 'status', '-D', dataDir], '/').status === 0;
 }
 
+/** The password of a cluster made with `password: true`, readable by root only. */
+const passwordFile = (base: string): string => join(base, 'postgres-password');
+
+function initCluster(bin: string, base: string, dataDir: string, port: number, policy: ClusterPolicy): void {
+  log('postgres', `initdb ${dataDir}${policy.password ? ' (password authentication)' : ''}`);
+  rmSync(dataDir, { recursive: true, force: true });
+  const auth = ['-A', 'trust'];
+  if (policy.password) {
+    // initdb reads the password from a file the postgres user can read; it is removed at once.
+    const pw = randomBytes(24).toString('base64url');
+    writeFileSync(passwordFile(base), `${pw}\n`, { mode: 0o600 });
+    const once = join(base, '.initdb-pw');
+    writeFileSync(once, `${pw}\n`, { mode: 0o600 });
+    chownSync(once, uid('postgres'), gid('postgres'));
+    auth.splice(0, 2, '-A', 'scram-sha-256', `--pwfile=${once}`);
+  }
+  const r = asPostgres(bin, ['initdb', '-D', dataDir, '-U', 'postgres', ...auth, '-E', 'UTF8', '--locale=C.UTF-8'], '/');
+  rmSync(join(base, '.initdb-pw'), { force: true });
+  if (r.status !== 0) throw new Error(`initdb failed: ${String(r.stderr)}`);
+  writeConf(dataDir, { listen_addresses: `'127.0.0.1'`, port: String(port), unix_socket_directories: `'${dataDir}'`, max_connections: '200' });
+}
+
+/** Sets `key = value` lines in the cluster's postgresql.auto.conf (read at every start), keeping the others. */
+function writeConf(dataDir: string, settings: Record<string, string>): void {
+  const conf = join(dataDir, 'postgresql.auto.conf');
+  const kept = (existsSync(conf) ? readFileSync(conf, 'utf8') : '').split('\n')
+    .filter((l) => l !== '' && !Object.keys(settings).some((k) => new RegExp(`^${k}\\s*=`).test(l)));
+  writeFileSync(conf, [...kept, ...Object.entries(settings).map(([k, v]) => `${k} = ${v}`), ''].join('\n'));
+  chownSync(conf, uid('postgres'), gid('postgres'));
+}
+
 /** Start (or reuse) the cluster; idempotent and safe after a crash. */
-export function ensureCluster(root: string, profile: string, port: number): Cluster {
+export function ensureCluster(root: string, profile: string, port: number, policy: ClusterPolicy): Cluster {
   const bin = ensureServerInstalled();
   const base = join(root, profile);
   const dataDir = join(base, 'pgdata');
   mkdirSync(base, { recursive: true, mode: 0o755 });
   execFileSync('chown', ['postgres:postgres', root, base]);
-  if (!existsSync(join(dataDir, 'PG_VERSION'))) {
-    log('postgres', `initdb ${dataDir}`);
-    rmSync(dataDir, { recursive: true, force: true });
-    const r = asPostgres(bin, ['initdb', '-D', dataDir, '-U', 'postgres', '-A', 'trust', '-E', 'UTF8', '--locale=C.UTF-8'], '/');
-    if (r.status !== 0) throw new Error(`initdb failed: ${String(r.stderr)}`);
-    writeFileSync(
-      join(dataDir, 'postgresql.auto.conf'),
-      [`listen_addresses = '127.0.0.1'`, `port = ${port}`, `unix_socket_directories = '${dataDir}'`, 'fsync = off',
-        'synchronous_commit = off', 'full_page_writes = off', 'max_connections = 200', ''].join('\n'),
-    );
-    chownSync(join(dataDir, 'postgresql.auto.conf'), uid('postgres'), gid('postgres'));
-  }
+  if (!existsSync(join(dataDir, 'PG_VERSION'))) initCluster(bin, base, dataDir, port, policy);
+  const password = existsSync(passwordFile(base)) ? readFileSync(passwordFile(base), 'utf8').trim() : undefined;
+  if (policy.password && !password) throw new Error(`the cluster in ${dataDir} was made without a password (a development cluster?): give production its own PG_DATA_ROOT`);
+  // Durability is decided at every start: a cluster made by an older version with fsync off gets it back.
+  const durable = policy.fsync ? 'on' : 'off';
+  writeConf(dataDir, { fsync: durable, synchronous_commit: durable, full_page_writes: durable });
   clearStaleLock(dataDir, port);
   if (isRunning(bin, dataDir)) {
     // postmaster.pid's fourth line is the port the running server listens on.
     const running = Number(readFileSync(join(dataDir, 'postmaster.pid'), 'utf8').split('\n')[3]);
     if (running !== port) throw new Error(`the cluster in ${dataDir} is already running on port ${running}, not PG_PORT=${port}: stop it (pg_ctl stop -D ${dataDir}) or set PG_PORT=${running}`);
-    return { dataDir, port, startedHere: false };
+    // Settings written above take effect at its next restart; a running server keeps its own.
+    return { dataDir, port, startedHere: false, password };
   }
   // The port asked for now wins over the one written when the cluster was made (PG_PORT may have changed since).
-  setPort(dataDir, port);
+  writeConf(dataDir, { port: String(port) });
   const r = asPostgres(bin, ['pg_ctl', 'start', '-w', '-t', '60', '-D', dataDir, '-l', join(base, 'postgres.log')], '/');
   if (r.status !== 0) throw new Error(`PostgreSQL did not start (see ${join(base, 'postgres.log')}): ${String(r.stderr || r.stdout)}`);
-  log('postgres', `listening on 127.0.0.1:${port}`);
-  return { dataDir, port, startedHere: true };
+  log('postgres', `listening on 127.0.0.1:${port}${policy.fsync ? '' : ' (fsync off: a throw-away test cluster)'}`);
+  return { dataDir, port, startedHere: true, password };
 }
 
-function setPort(dataDir: string, port: number): void {
-  const conf = join(dataDir, 'postgresql.auto.conf');
-  const lines = readFileSync(conf, 'utf8').split('\n').filter((l) => !/^port\s*=/.test(l));
-  const text = [...lines.filter((l) => l !== ''), `port = ${port}`, ''].join('\n');
-  writeFileSync(conf, text);
-  chownSync(conf, uid('postgres'), gid('postgres'));
+/** The connection string of a private cluster's database, with its password when it has one. */
+export function clusterUrl(cluster: Cluster, database: string): string {
+  const user = cluster.password ? `postgres:${encodeURIComponent(cluster.password)}` : 'postgres';
+  return `postgres://${user}@127.0.0.1:${cluster.port}/${database}`;
 }
 
 export function stopCluster(cluster: Cluster): void {
@@ -129,8 +161,8 @@ function gid(name: string): number {
 }
 
 /** Create the database if missing; with `fresh`, drop it first (test runs). */
-export async function ensureDatabase(port: number, name: string, fresh = false): Promise<void> {
-  const client = new Client({ host: '127.0.0.1', port, user: 'postgres', database: 'postgres' });
+export async function ensureDatabase(cluster: Cluster, name: string, fresh = false): Promise<void> {
+  const client = new Client({ connectionString: clusterUrl(cluster, 'postgres') });
   await client.connect();
   try {
     if (fresh) await client.query(`DROP DATABASE IF EXISTS ${quoteIdent(name)} WITH (FORCE)`);

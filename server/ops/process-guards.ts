@@ -1,4 +1,5 @@
 import { isDatabaseUnavailable } from '../db/db-errors';
+import { logError } from './error-log';
 
 /**
  * Last-resort handlers for a long-running process (API, worker, mail
@@ -15,11 +16,10 @@ export function installProcessGuards(source: string): void {
       if (Date.now() - lastQuiet < 10_000) return;
       lastQuiet = Date.now();
     }
-    const text = reason instanceof Error ? reason.stack ?? reason.message : String(reason);
-    console.error(`[${source}] unhandled rejection (kept running): ${text}`);
+    logError(source, 'unhandled rejection (kept running)', reason);
   });
   process.on('uncaughtException', (err) => {
-    console.error(`[${source}] uncaught exception; exiting so the supervisor restarts this process: ${err.stack ?? err.message}`);
+    logError(source, 'uncaught exception; exiting so the supervisor restarts this process', err);
     process.exit(70);
   });
 }

@@ -103,7 +103,7 @@ export function startServices(services: Service[], env: NodeJS.ProcessEnv, o: Su
 
 /** The long-running processes of a stack: mail catcher, API, and `workers` workers. */
 export function stackServices(workers = 1): Service[] {
-  const named = workers === 1 ? [{ name: 'worker', entry: 'worker/main.ts' }] : Array.from({ length: workers }, (_, i) => ({ name: `worker${i + 1}`, entry: 'worker/main.ts' }));
+  const named = workers === 0 ? [] : workers === 1 ? [{ name: 'worker', entry: 'worker/main.ts' }] : Array.from({ length: workers }, (_, i) => ({ name: `worker${i + 1}`, entry: 'worker/main.ts' }));
   return [
     { name: 'mail', entry: 'server/mail/catcher-main.ts' },
     { name: 'api', entry: 'server/main.ts' },

@@ -29,7 +29,7 @@ const pct = (xs: number[], p: number): number => [...xs].sort((a, b) => a - b)[M
 const ms = (v: number): string => `${v.toFixed(0)} ms`;
 
 async function main(): Promise<void> {
-  const cluster = await prepareDatabase(env, { fresh: true });
+  const { cluster } = await prepareDatabase(env, { fresh: true });
   const ds = await createDataSource(env.databaseUrl, 'frostgrade-bench').initialize();
   const boss = await startBoss(env.databaseUrl, 'frostgrade-bench', [env.runQueue]);
   const mailer = createMailer(env);
@@ -79,7 +79,7 @@ async function main(): Promise<void> {
   await pool.end();
   await boss.stop({ graceful: false, wait: true });
   await ds.destroy();
-  if (cluster.startedHere) stopCluster(cluster);
+  if (cluster?.startedHere) stopCluster(cluster);
 }
 
 main().then(() => process.exit(0), (err: Error) => {

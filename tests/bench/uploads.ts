@@ -38,7 +38,7 @@ function paddedToLimit(): string {
 }
 
 async function main(): Promise<void> {
-  const cluster = await prepareDatabase(env, { fresh: true });
+  const { cluster } = await prepareDatabase(env, { fresh: true });
   const stack = startServices([{ name: 'mail', entry: 'server/mail/catcher-main.ts' }, { name: 'api', entry: 'server/main.ts' }], childEnv, { restart: false, onExit: (name, how) => { throw new Error(`${name} ${how}`); } });
   const apiPid = stack.pid('api')!;
   for (let i = 0; i < 120; i += 1) {
@@ -100,7 +100,7 @@ async function main(): Promise<void> {
   await stack.stop();
   await pool.end();
   await ds.destroy();
-  if (cluster.startedHere) stopCluster(cluster);
+  if (cluster?.startedHere) stopCluster(cluster);
 }
 
 main().then(() => process.exit(0), (err: Error) => {
