@@ -1,15 +1,26 @@
+import type { Request } from 'express';
 import { admins, requireTeam } from '../http/access';
 import { NotFoundError } from '../http/errors';
+import { isLocalOperator } from '../http/local-operator';
 import { route, type RouteSpec } from '../http/route-table';
-import { checkHealth, type HealthDeps } from '../services/health-service';
+import { healthChecker, healthFor, type HealthAudience, type HealthDeps } from '../services/health-service';
 import { listOutbox } from '../services/outbox-service';
 
+/** Checks describe the installation, not a team: any team's admin and the local operator may read them. */
+function audience(req: Request): HealthAudience {
+  if (isLocalOperator(req) || req.auth?.user.role === 'admin') return 'details';
+  return req.auth ? 'member' : 'anyone';
+}
+
 export function systemRoutes(deps: HealthDeps & { mailCatcher: boolean }): RouteSpec[] {
+  const checkHealth = healthChecker(deps);
   return [
-    // Public on purpose: load balancers and the start script poll it. It names no team data.
-    route('get', '/health', 'public', async (_req, res) => {
-      const health = await checkHealth(deps);
-      res.status(health.status === 'ok' ? 200 : 503).json(health);
+    // Public on purpose: load balancers and the start script poll it. Strangers learn ok or degraded, nothing more.
+    route('get', '/health', 'public', async (req, res) => {
+      const health = await checkHealth();
+      // The body depends on who asks: no shared cache may hand one caller's answer to another.
+      res.set('Cache-Control', 'no-store').vary('Cookie');
+      res.status(health.status === 'ok' ? 200 : 503).json(healthFor(health, audience(req)));
     }),
     // The outbox exists only where the local catcher does (never in production).
     route('get', '/outbox', admins, async (req, res) => {

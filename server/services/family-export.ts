@@ -2,6 +2,7 @@ import type { DataSource } from 'typeorm';
 import { familyFromMaterial, propertiesAt, type MaterialInput } from '../../shared/engine';
 import { exportHeaders } from '../../shared/families/csv-columns';
 import { Team } from '../db/entities';
+import { csvComment, csvDocument } from './csv-writer';
 import { findFamily, findVersion } from './family-store';
 
 /** Grid on which a model family is sampled for CSV export: 1e18–1e21 cm⁻³, 4 per decade; 200–400 K. */
@@ -15,13 +16,15 @@ function modelRows(definition: MaterialInput): Row[] {
   return sampleDopings.flatMap((n) => sampleTemperatures.map((t) => ({ perCm3: n, temperature: t, ...propertiesAt(family, n, t) })));
 }
 
-const fmt = (v: number): string => Number(v.toPrecision(8)).toString();
+const fmt = (v: number): number => Number(v.toPrecision(8));
 
 /** The upload format with units in the header, so an export can be uploaded again unchanged. */
-function toCsv(rows: Row[], comment: string[]): string {
-  const head = [exportHeaders.perCm3, exportHeaders.temperature, exportHeaders.seebeck, exportHeaders.sigma, exportHeaders.kappa].join(',');
-  const body = rows.map((r) => [fmt(r.perCm3), fmt(r.temperature), fmt(r.seebeck * 1e6), fmt(r.sigma / 100), fmt(r.kappa)].join(','));
-  return `${[...comment.map((c) => `# ${c.replace(/\n/g, ' ')}`), head, ...body].join('\n')}\n`;
+function toCsv(rows: Row[], comments: string[]): string {
+  return csvDocument({
+    comments,
+    header: [exportHeaders.perCm3, exportHeaders.temperature, exportHeaders.seebeck, exportHeaders.sigma, exportHeaders.kappa],
+    rows: rows.map((r) => [fmt(r.perCm3), fmt(r.temperature), fmt(r.seebeck * 1e6), fmt(r.sigma / 100), fmt(r.kappa)]),
+  });
 }
 
 export async function exportFamily(ds: DataSource, team: Team, id: unknown, format: 'csv' | 'json', version?: number): Promise<{ filename: string; body: string }> {
@@ -35,6 +38,9 @@ export async function exportFamily(ds: DataSource, team: Team, id: unknown, form
     return { filename: `${stem}.json`, body: `${body}\n` };
   }
   const rows = definition.kind === 'table' ? definition.rows : modelRows(definition);
-  const comment = [`${f.name}, version ${v.version} (${f.kind === 'table' ? 'measured points' : `${f.kind} model sampled on a grid`})`, `source: ${v.source}`];
-  return { filename: `${stem}.csv`, body: toCsv(rows, comment) };
+  const comments = [
+    csvComment('family', f.name, `version ${v.version} (${f.kind === 'table' ? 'measured points' : `${f.kind} model sampled on a grid`})`),
+    csvComment('source', v.source),
+  ];
+  return { filename: `${stem}.csv`, body: toCsv(rows, comments) };
 }

@@ -2,9 +2,10 @@ import type { DataSource } from 'typeorm';
 import type { GrowthSheet } from '../../shared/growth/growth-sheet';
 import { Team } from '../db/entities';
 import { HttpError } from '../http/errors';
+import { csvComment, csvDocument } from './csv-writer';
 import { findOrder } from './growth-service';
 
-const g = (v: number, digits = 4): string => Number(v.toPrecision(digits)).toString();
+const g = (v: number, digits = 4): number => Number(v.toPrecision(digits));
 
 /** The chosen K of the sheet, one row per zone, units in every header; JSON carries the whole sheet. */
 export async function exportSheet(ds: DataSource, team: Team, id: unknown, format: 'csv' | 'json'): Promise<{ filename: string; body: string }> {
@@ -15,12 +16,12 @@ export async function exportSheet(ds: DataSource, team: Team, id: unknown, forma
   if (format === 'json') return { filename: `${stem}.json`, body: `${JSON.stringify({ batch: o.batch, dueDate: o.dueDate, zones: o.zones, sheet }, null, 2)}\n` };
   const step = sheet.steps.find((s) => s.zones === o.zones) ?? sheet.steps[sheet.steps.length - 1]!;
   const t = sheet.measureTemperature;
-  const head = `zone,start_mm,end_mm,n_target_per_cm3,n_low_per_cm3,n_high_per_cm3,seebeck_${t}K_uV_per_K,seebeck_low_uV_per_K,seebeck_high_uV_per_K,sigma_${t}K_S_per_cm,sigma_low_S_per_cm,sigma_high_S_per_cm`;
-  const rows = step.rows.map((r) => [r.index + 1, g(r.startMm), g(r.endMm), g(r.perCm3), g(r.lowPerCm3), g(r.highPerCm3), g(r.seebeckUvK), g(r.seebeckBandUvK[0]), g(r.seebeckBandUvK[1]), g(r.sigmaSCm), g(r.sigmaBandSCm[0]), g(r.sigmaBandSCm[1])].join(','));
+  const header = ['zone', 'start_mm', 'end_mm', 'n_target_per_cm3', 'n_low_per_cm3', 'n_high_per_cm3', `seebeck_${t}K_uV_per_K`, 'seebeck_low_uV_per_K', 'seebeck_high_uV_per_K', `sigma_${t}K_S_per_cm`, 'sigma_low_S_per_cm', 'sigma_high_S_per_cm'];
+  const rows = step.rows.map((r) => [r.index + 1, g(r.startMm), g(r.endMm), g(r.perCm3), g(r.lowPerCm3), g(r.highPerCm3), g(r.seebeckUvK), g(r.seebeckBandUvK[0]), g(r.seebeckBandUvK[1]), g(r.sigmaSCm), g(r.sigmaBandSCm[0]), g(r.sigmaBandSCm[1])]);
   const comments = [
-    `# Frostgrade growth sheet, batch ${o.batch}, ${step.zones} zones from the cold end; tolerance bands lose at most ${sheet.lossBudget} ${sheet.unit || '(objective units)'} each`,
-    `# predicted ΔT ${g(step.deltaT)} K at ${g(step.current)} A (continuous profile ${g(sheet.continuous.deltaT)} K)`,
-    '# Model predictions: verify the grown piece by measurement before building hardware; follow lab safety rules and local codes.',
+    csvComment('Frostgrade growth sheet for batch', o.batch, `${step.zones} zones from the cold end; tolerance bands lose at most ${sheet.lossBudget} ${sheet.unit || '(objective units)'} each`),
+    csvComment(`predicted ΔT ${g(step.deltaT)} K at ${g(step.current)} A (continuous profile ${g(sheet.continuous.deltaT)} K)`),
+    csvComment('Model predictions: verify the grown piece by measurement before building hardware; follow lab safety rules and local codes.'),
   ];
-  return { filename: `${stem}.csv`, body: `${[...comments, head, ...rows].join('\n')}\n` };
+  return { filename: `${stem}.csv`, body: csvDocument({ comments, header, rows }) };
 }

@@ -2,10 +2,13 @@ import type PgBoss from 'pg-boss';
 import type { DataSource } from 'typeorm';
 import { WorkerHeartbeat } from '../db/entities';
 import type { Mailer } from '../mail/mailer';
+import type { HealthDetails, PublicHealth } from '../../shared/api/health';
 import type { RelayStatus } from '../realtime/event-relay';
+import { cachedCheck, type Freshness } from './cached-check';
+import { withoutSecrets } from './without-secrets';
 
 export type Check = { ok: boolean; detail: string };
-export type Health = { status: 'ok' | 'degraded'; version: string; checks: Record<'database' | 'queue' | 'worker' | 'mail', Check> & { events?: Check } };
+export type Health = HealthDetails;
 
 async function guard(fn: () => Promise<Check>): Promise<Check> {
   let timer: ReturnType<typeof setTimeout> | undefined;
@@ -13,19 +16,33 @@ async function guard(fn: () => Promise<Check>): Promise<Check> {
     const late = new Promise<Check>((resolve) => { timer = setTimeout(() => resolve({ ok: false, detail: `no answer within ${checkTimeoutMs / 1000} s` }), checkTimeoutMs); });
     return await Promise.race([fn(), late]);
   } catch (err) {
-    return { ok: false, detail: err instanceof Error ? err.message : String(err) };
+    return { ok: false, detail: withoutSecrets(err instanceof Error ? err.message : String(err)) };
   } finally {
     clearTimeout(timer);
   }
 }
 
-export type HealthDeps = { ds: DataSource; boss: PgBoss; mailer: Mailer; heartbeatSeconds: number; version: string; eventRelay?: () => RelayStatus };
+/** `mailFreshness`: how long an SMTP check stands (tests shorten it). */
+export type HealthDeps = { ds: DataSource; boss: PgBoss; mailer: Mailer; heartbeatSeconds: number; version: string; eventRelay?: () => RelayStatus; mailFreshness?: Freshness };
 
 /** An answer within this long, or the check reports itself as failed (a half-dead database must not hang health). */
 const checkTimeoutMs = 4000;
 
+/**
+ * The SMTP check opens a session with the mail server: once a minute is
+ * plenty, and an anonymous caller polling health must not make the API
+ * open one per request. A failure is looked at again after 15 s.
+ */
+const mailFreshness: Freshness = { okMs: 60_000, failedMs: 15_000 };
+
+/** One per API process: health checks with the SMTP result kept between requests. */
+export function healthChecker(d: HealthDeps): () => Promise<Health> {
+  const mail = cachedCheck(() => guard(async () => ({ ok: await d.mailer.verify(), detail: 'SMTP server answered' })), d.mailFreshness ?? mailFreshness);
+  return () => checkHealth(d, mail);
+}
+
 /** Each dependency checked independently, so one failure never hides another. */
-export async function checkHealth(d: HealthDeps): Promise<Health> {
+export async function checkHealth(d: HealthDeps, mailCheck: () => Promise<Check>): Promise<Health> {
   const [database, queue, worker, mail] = await Promise.all([
     guard(async () => {
       const t0 = Date.now();
@@ -44,10 +61,18 @@ export async function checkHealth(d: HealthDeps): Promise<Health> {
       const ok = age <= 3 * d.heartbeatSeconds;
       return { ok, detail: `newest heartbeat ${age.toFixed(1)} s ago from ${last.hostname} pid ${last.pid}` };
     }),
-    guard(async () => ({ ok: await d.mailer.verify(), detail: 'SMTP server answered' })),
+    mailCheck(),
   ]);
   const relay = d.eventRelay?.();
-  const checks = { database, queue, worker, mail, ...(relay ? { events: { ok: relay.listening, detail: relay.detail } } : {}) };
+  const checks = { database, queue, worker, mail, ...(relay ? { events: { ok: relay.listening, detail: withoutSecrets(relay.detail) } } : {}) };
   const status = Object.values(checks).every((c) => c.ok) ? 'ok' : 'degraded';
   return { status, version: d.version, checks };
+}
+
+/** Who asks: the operator and admins see every check, members the version too, anyone else only ok or degraded. */
+export type HealthAudience = 'details' | 'member' | 'anyone';
+
+export function healthFor(h: Health, audience: HealthAudience): HealthDetails | PublicHealth {
+  if (audience === 'details') return h;
+  return audience === 'member' ? { status: h.status, version: h.version } : { status: h.status };
 }

@@ -1,11 +1,12 @@
 import type { DataSource } from 'typeorm';
 import { Team } from '../db/entities';
 import { HttpError } from '../http/errors';
+import { csvComment, csvDocument } from './csv-writer';
 import { findRun } from './run-service';
 
 type Profile = { x: number[]; temperature: number[]; seebeck: number[]; sigma: number[]; kappa: number[]; zT: number[]; perCm3?: number[] };
 
-const fmt = (v: number): string => Number(v.toPrecision(7)).toString();
+const fmt = (v: number): number => Number(v.toPrecision(7));
 
 /** The converged profile in trade units, one row per point along the leg, with the headline numbers as comments. */
 export async function exportRun(ds: DataSource, team: Team, id: unknown, format: 'csv' | 'json'): Promise<{ filename: string; body: string }> {
@@ -17,11 +18,11 @@ export async function exportRun(ds: DataSource, team: Team, id: unknown, format:
   }
   const res = r.result as { profile: Profile; deltaT: number; current: number; coldSide: number; hotSide: number; heatLoad: number; cop: number };
   const p = res.profile;
-  const head = 'x_mm,temperature_K,n_per_cm3,seebeck_uV_per_K,sigma_S_per_cm,kappa_W_per_m_K,zT';
-  const rows = p.x.map((x, i) => [fmt(x * 1e3), fmt(p.temperature[i]!), p.perCm3 ? fmt(p.perCm3[i]!) : '', fmt(p.seebeck[i]! * 1e6), fmt(p.sigma[i]! / 100), fmt(p.kappa[i]!), fmt(p.zT[i]!)].join(','));
+  const header = ['x_mm', 'temperature_K', 'n_per_cm3', 'seebeck_uV_per_K', 'sigma_S_per_cm', 'kappa_W_per_m_K', 'zT'];
+  const rows = p.x.map((x, i) => [fmt(x * 1e3), fmt(p.temperature[i]!), p.perCm3 ? fmt(p.perCm3[i]!) : null, fmt(p.seebeck[i]! * 1e6), fmt(p.sigma[i]! / 100), fmt(p.kappa[i]!), fmt(p.zT[i]!)]);
   const comments = [
-    `# Frostgrade run ${r.id} (${r.state}), engine ${r.engineVersion}: model prediction, verify by measurement`,
-    `# cold side ${fmt(res.coldSide)} K, hot side ${fmt(res.hotSide)} K, deltaT ${fmt(res.deltaT)} K, current ${fmt(res.current)} A, heat load ${fmt(res.heatLoad)} W, COP ${fmt(res.cop)}`,
+    csvComment(`Frostgrade run ${r.id} (${r.state})`, `engine ${r.engineVersion}`, 'model prediction to verify by measurement'),
+    csvComment(`cold side ${fmt(res.coldSide)} K`, `hot side ${fmt(res.hotSide)} K`, `deltaT ${fmt(res.deltaT)} K`, `current ${fmt(res.current)} A`, `heat load ${fmt(res.heatLoad)} W`, `COP ${fmt(res.cop)}`),
   ];
-  return { filename: `${stem}.csv`, body: `${[...comments, head, ...rows].join('\n')}\n` };
+  return { filename: `${stem}.csv`, body: csvDocument({ comments, header, rows }) };
 }

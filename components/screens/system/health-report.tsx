@@ -1,8 +1,9 @@
 import { StyleSheet, View } from 'react-native';
-import { healthCheckNames, type HealthCheckName, type HealthResponse } from '@/shared/api/health';
+import { healthCheckNames, type HealthCheckName, type HealthChecks, type HealthResponse } from '@/shared/api/health';
 import { formatDateTime } from '@/components/format/date';
 import { colors, radii, spacing } from '@/components/theme';
 import { Glyph } from '@/components/ui/glyph';
+import { Notice } from '@/components/ui/notice';
 import { AppText } from '@/components/ui/text';
 import { CheckRow } from './check-row';
 
@@ -16,8 +17,14 @@ const checkLabels: Record<HealthCheckName, string> = {
 
 export type HealthReportProps = { health: HealthResponse; checkedAt: number };
 
+/**
+ * The server decides what a caller may see: admins (of any team) and the
+ * local operator get every check, other members ok or degraded and the
+ * version, strangers ok or degraded alone.
+ */
 export function HealthReport({ health, checkedAt }: HealthReportProps) {
   const ok = health.status === 'ok';
+  const checked = `checked ${formatDateTime(new Date(checkedAt).toISOString())}`;
   return (
     <View style={styles.stack}>
       <View style={[styles.banner, ok ? styles.bannerOk : styles.bannerBad]} role="status">
@@ -29,20 +36,34 @@ export function HealthReport({ health, checkedAt }: HealthReportProps) {
             {ok ? 'All systems working' : 'Degraded: some parts need attention'}
           </AppText>
           <AppText variant="mono" tone="muted">
-            {`version ${health.version} · checked ${formatDateTime(new Date(checkedAt).toISOString())}`}
+            {health.version ? `version ${health.version} · ${checked}` : checked}
           </AppText>
         </View>
       </View>
-      <View style={styles.list} role="list" aria-label="Health checks">
-        {healthCheckNames.flatMap((name) => {
-          const check = health.checks[name];
-          return check ? [{ name, check }] : [];
-        }).map(({ name, check }, index) => (
-          <View key={name} style={index > 0 ? styles.divided : undefined}>
-            <CheckRow label={checkLabels[name]} check={check} />
-          </View>
-        ))}
-      </View>
+      {'checks' in health ? (
+        <CheckList checks={health.checks} />
+      ) : (
+        <Notice tone="info" title="Details are for admins" testID="health-details-hidden">
+          <AppText>
+            {"Admins see each part Frostgrade depends on (database, job queue, workers, mail, live updates) and what went wrong. If this says degraded, tell your team's admin."}
+          </AppText>
+        </Notice>
+      )}
+    </View>
+  );
+}
+
+function CheckList({ checks }: { checks: HealthChecks }) {
+  return (
+    <View style={styles.list} role="list" aria-label="Health checks">
+      {healthCheckNames.flatMap((name) => {
+        const check = checks[name];
+        return check ? [{ name, check }] : [];
+      }).map(({ name, check }, index) => (
+        <View key={name} style={index > 0 ? styles.divided : undefined}>
+          <CheckRow label={checkLabels[name]} check={check} />
+        </View>
+      ))}
     </View>
   );
 }

@@ -32,6 +32,26 @@ describe('SystemScreen', () => {
     expect(screen.getByText(/version 0\.1\.0\+abc1234/)).toBeOnTheScreen();
   });
 
+  it('shows a member only ok or degraded and the version, and says who sees the checks', async () => {
+    mockFetch({ status: 503, body: { status: 'degraded', version: '0.1.0' } });
+    renderWithProviders(<SystemScreen />);
+
+    expect(await screen.findByText('Degraded: some parts need attention')).toBeOnTheScreen();
+    expect(screen.getByText(/version 0\.1\.0 · checked/)).toBeOnTheScreen();
+    expect(screen.getByTestId('health-details-hidden')).toHaveTextContent(/Details are for admins/);
+    expect(screen.queryByLabelText('Health checks')).toBeNull();
+    expect(screen.queryByText('Problem')).toBeNull();
+  });
+
+  it('shows a stranger\'s answer (no version) without inventing one', async () => {
+    mockFetch({ status: 200, body: { status: 'ok' } });
+    renderWithProviders(<SystemScreen />);
+
+    expect(await screen.findByText('All systems working')).toBeOnTheScreen();
+    expect(screen.getByText(/^checked /)).toBeOnTheScreen();
+    expect(screen.queryByText(/version/)).toBeNull();
+  });
+
   it('shows a network failure with a retry', async () => {
     global.fetch = jest.fn(async () => {
       throw new TypeError('Failed to fetch');

@@ -5,7 +5,7 @@ import { ErrorState, LoadingState } from '@/components/ui/state-views';
 import { ChartCheck } from './chart-check';
 import { HealthReport } from './health-report';
 
-/** Health of the API and what it depends on (database, queue, workers, mail). */
+/** Health of the API; what it depends on (database, queue, workers, mail) for those the server shows it to. */
 export function SystemScreen() {
   const query = useHealth();
   const refresh = () => void query.refetch();
