@@ -6,9 +6,14 @@ import { route, type RouteSpec } from '../http/route-table';
 import { healthChecker, healthFor, type HealthAudience, type HealthDeps } from '../services/health-service';
 import { listOutbox } from '../services/outbox-service';
 
-/** Checks describe the installation, not a team: any team's admin and the local operator may read them. */
+/**
+ * Checks describe the installation, not a team: the local operator reads
+ * them whole, any team's admin without the machines' names (anyone who signs
+ * up is the admin of a team of their own, so that is not a trusted circle).
+ */
 function audience(req: Request): HealthAudience {
-  if (isLocalOperator(req) || req.auth?.user.role === 'admin') return 'details';
+  if (isLocalOperator(req)) return 'operator';
+  if (req.auth?.user.role === 'admin') return 'details';
   return req.auth ? 'member' : 'anyone';
 }
 

@@ -69,10 +69,14 @@ export async function checkHealth(d: HealthDeps, mailCheck: () => Promise<Check>
   return { status, version: d.version, checks };
 }
 
-/** Who asks: the operator and admins see every check, members the version too, anyone else only ok or degraded. */
-export type HealthAudience = 'details' | 'member' | 'anyone';
+/** Who asks: the operator sees every check whole, admins every check without host names and process ids, members the version too, anyone else only ok or degraded. */
+export type HealthAudience = 'operator' | 'details' | 'member' | 'anyone';
+
+/** " from <host> pid <n>": which machine runs a worker is the operator's business only. */
+const whereFrom = / from \S+ pid \d+$/;
 
 export function healthFor(h: Health, audience: HealthAudience): HealthDetails | PublicHealth {
-  if (audience === 'details') return h;
+  if (audience === 'operator') return h;
+  if (audience === 'details') return { ...h, checks: { ...h.checks, worker: { ...h.checks.worker, detail: h.checks.worker.detail.replace(whereFrom, '') } } };
   return audience === 'member' ? { status: h.status, version: h.version } : { status: h.status };
 }

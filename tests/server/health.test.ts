@@ -88,12 +88,16 @@ describe('GET /api/health from elsewhere', () => {
     }
   });
 
-  it('an admin of any team sees every check: they describe the installation, not a team', async () => {
+  it('an admin of any team sees every check (they describe the installation, not a team), but not which machines run it', async () => {
     for (const who of [demo.admin, demo.otherTeamAdmin]) {
       const res = await (await signedIn(ctx, who)).get('/api/health').set(remote);
       const body = healthDetailsSchema.parse(res.body);
       expect(Object.keys(body.checks).sort()).toEqual(['database', 'mail', 'queue', 'worker']);
+      expect(body.checks.worker.detail).toMatch(/^newest heartbeat \d+\.\d s ago$/);
     }
+    // The operator at the machine itself sees where the worker runs.
+    const local = healthDetailsSchema.parse((await request(ctx.app).get('/api/health')).body);
+    expect(local.checks.worker.detail).toMatch(/ from \S+ pid \d+$/);
   });
 });
 
