@@ -42,15 +42,18 @@ export type BrowserSession = {
 };
 
 /**
- * Console lines that mean something went wrong. Two kinds do not count:
+ * Console lines that mean something went wrong. Three kinds do not count:
  * Chromium reports every 4xx answer to a fetch as "Failed to load resource",
  * and those are the API's deliberate refusals (wrong password, 409, 422) that
- * tests provoke and assert on their own; and its software GL driver notes a
- * "GPU stall due to ReadPixels" whenever a test reads a chart's pixels.
- * Everything else at error or warning level counts.
+ * tests provoke and assert on their own; it warns when the page closes its own
+ * socket during the handshake, as signing out (or being removed) does; and its
+ * software GL driver notes a "GPU stall due to ReadPixels" whenever a test
+ * reads a chart's pixels. Everything else at error or warning level counts —
+ * a socket the policy or the server refused reads differently.
  */
 const notProblems = [
   /^Failed to load resource: the server responded with a status of 4\d\d\b/,
+  /^WebSocket connection to '[^']+' failed: WebSocket is closed before the connection is established\.$/,
   /^\[\.WebGL-[0-9a-fx]+\]GL Driver Message \(OpenGL, Performance, [A-Z_]+, \w+\): GPU stall due to ReadPixels/,
 ];
 
