@@ -26,12 +26,24 @@ ensureCanvasKitWasm(__dirname);
 
 const config = getDefaultConfig(__dirname);
 
-// csv-parse's default build reads Node's global Buffer, which browsers lack;
-// its browser build bundles one. Shared CSV readers (e.g. the as-grown
-// measurements preview) then run in the web client too.
+// Web-only substitutions:
+// - csv-parse's default build reads Node's global Buffer, which browsers lack;
+//   its browser build bundles one. Shared CSV readers (e.g. the as-grown
+//   measurements preview) then run in the web client too.
+// - zod's locale index (every language's messages, ~250 KB before
+//   compression, re-exported as `z.locales`) becomes English only: see
+//   components/api/zod-locales-english.ts. Should zod move its files, the
+//   paths stop matching and the full index is bundled again, nothing breaks.
+const zodLocaleIndex = /[\\/]node_modules[\\/]zod[\\/]v4[\\/](classic|core)[\\/]/;
+const englishOnly = path.join(__dirname, 'components', 'api', 'zod-locales-english.ts');
+function webModule(context, moduleName) {
+  if (moduleName === 'csv-parse/sync') return 'csv-parse/browser/esm/sync';
+  if (moduleName === '../locales/index.js' && zodLocaleIndex.test(context.originModulePath)) return englishOnly;
+  return moduleName;
+}
 const resolveDefault = config.resolver.resolveRequest;
 config.resolver.resolveRequest = (context, moduleName, platform) => {
-  const name = platform === 'web' && moduleName === 'csv-parse/sync' ? 'csv-parse/browser/esm/sync' : moduleName;
+  const name = platform === 'web' ? webModule(context, moduleName) : moduleName;
   return resolveDefault ? resolveDefault(context, name, platform) : context.resolveRequest(context, name, platform);
 };
 

@@ -1,11 +1,8 @@
-import { WithSkiaWeb } from '@shopify/react-native-skia/lib/module/web';
 import { ChartBoundary, ChartFrame, ChartLoading } from './chart-frame';
+import { SkiaWeb } from './skia-web';
 import type { LinePlotProps } from './line-plot-types';
 
-/** CanvasKit's binary, copied into `public/` by metro.config.js. */
-const canvasKitOptions = { locateFile: (file: string) => `/${file}` };
-
-const loadCanvas = () => import('./line-plot-canvas');
+const pick = (canvases: typeof import('./chart-canvases')) => canvases.LinePlotCanvas;
 
 /**
  * Web: loads CanvasKit after mount, then the Skia/Victory drawing code in
@@ -15,12 +12,7 @@ export function LinePlot(props: LinePlotProps) {
   return (
     <ChartFrame {...props}>
       <ChartBoundary>
-        <WithSkiaWeb
-          opts={canvasKitOptions}
-          getComponent={loadCanvas}
-          fallback={<ChartLoading height={props.height} />}
-          componentProps={props}
-        />
+        <SkiaWeb pick={pick} componentProps={props} fallback={<ChartLoading height={props.height} />} />
       </ChartBoundary>
     </ChartFrame>
   );

@@ -1,12 +1,9 @@
-import { WithSkiaWeb } from '@shopify/react-native-skia/lib/module/web';
 import { ChartBoundary, ChartFrame, ChartLoading } from './chart-frame';
+import { SkiaWeb } from './skia-web';
 import { SeriesLegend } from './series-legend';
 import type { SeriesPlotProps } from './series-plot-types';
 
-/** CanvasKit's binary, copied into `public/` by metro.config.js. */
-const canvasKitOptions = { locateFile: (file: string) => `/${file}` };
-
-const loadCanvas = () => import('./series-plot-canvas');
+const pick = (canvases: typeof import('./chart-canvases')) => canvases.SeriesPlotCanvas;
 
 /**
  * Web: loads CanvasKit after mount (once for all charts), then the drawing
@@ -16,12 +13,7 @@ export function SeriesPlot(props: SeriesPlotProps) {
   return (
     <ChartFrame {...props} footer={<SeriesLegend series={props.series} note={props.note} />}>
       <ChartBoundary>
-        <WithSkiaWeb
-          opts={canvasKitOptions}
-          getComponent={loadCanvas}
-          fallback={<ChartLoading height={props.height} />}
-          componentProps={props}
-        />
+        <SkiaWeb pick={pick} componentProps={props} fallback={<ChartLoading height={props.height} />} />
       </ChartBoundary>
     </ChartFrame>
   );

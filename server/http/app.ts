@@ -1,5 +1,5 @@
+import compression from 'compression';
 import express, { type Express, type RequestHandler } from 'express';
-import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import type PgBoss from 'pg-boss';
 import type { DataSource } from 'typeorm';
@@ -18,6 +18,8 @@ import { sessionReader } from './access';
 import { errorHandler, notFoundApi } from './errors';
 import { originCheck } from './origin-check';
 import { mountRoutes, type RouteSpec } from './route-table';
+import { apiHeaders, webHeaders } from './security-headers';
+import { inlineScriptHashes, serveWeb } from './web-assets';
 
 /** `eventRelay`: the API process's socket relay, reported by health (absent where no sockets are attached, as in tests). */
 export type AppDeps = { env: Env; ds: DataSource; boss: PgBoss; mailer: Mailer; auth: Auth; version: string; eventRelay?: () => RelayStatus };
@@ -55,23 +57,18 @@ export function createApp(d: AppDeps): Express {
   app.disable('x-powered-by');
   // Behind a reverse proxy req.ip (rate limits, the audit trail) comes from X-Forwarded-For, believed only for the hops TRUST_PROXY names.
   app.set('trust proxy', d.env.trustProxy);
+  // Bundles, HTML, fonts, CanvasKit's .wasm and JSON shrink to half or less; PNGs (compressed already) go as they are.
+  app.use(compression());
+  app.use('/api', apiHeaders(d.env.appOrigin));
   if (!d.env.production) app.use('/api', devCors);
   app.use('/api', express.json({ limit: '2mb' }));
   app.use('/api', originCheck(d.env.appOrigin, !d.env.production));
   app.use('/api', sessionReader(d.auth));
   app.use('/api', mountRoutes(d.ds, apiRoutes(d)));
   app.use('/api', notFoundApi);
-  serveWeb(app, resolve(d.env.webDist));
+  const dist = resolve(d.env.webDist);
+  app.use(webHeaders(d.env.appOrigin, inlineScriptHashes(join(dist, 'index.html'))));
+  serveWeb(app, dist);
   app.use(errorHandler(d.env.profile !== 'test'));
   return app;
-}
-
-/** The exported web build at the same origin as the API, so cookies just work. */
-function serveWeb(app: Express, dist: string): void {
-  const index = join(dist, 'index.html');
-  app.use(express.static(dist, { index: false, maxAge: '1h' }));
-  app.get('/{*path}', (_req, res) => {
-    if (existsSync(index)) res.sendFile(index);
-    else res.status(503).type('text').send('The web build is missing: run `npm start` (it exports the app) or `npx expo export --platform web`.');
-  });
 }

@@ -5,6 +5,7 @@ import {
   getJsonAs,
   linkIn,
   openBrowser,
+  pageProblems,
   postJsonAs,
   saveScreenshot,
   shellNav,
@@ -141,7 +142,7 @@ describe('accounts in a real browser', () => {
 
       await theirs.waitForURL(/\/sign-in/, { timeout: 15_000 });
       await saveScreenshot(theirs, 'removed-member-signed-out-phone');
-      expect(leaver.pageErrors).toEqual([]);
+      expect(pageProblems(leaver)).toEqual([]);
     } finally {
       await leaver.close();
     }
@@ -233,7 +234,7 @@ describe('accounts in a real browser', () => {
       await visible(phone, 'sign-out').click();
       await phone.getByRole('heading', { name: 'Sign in' }).filter({ visible: true }).waitFor();
       await saveScreenshot(phone, 'sign-in-phone');
-      expect(visitor.pageErrors).toEqual([]);
+      expect(pageProblems(visitor)).toEqual([]);
     } finally {
       await visitor.close();
     }
@@ -286,7 +287,7 @@ describe('accounts in a real browser', () => {
   });
 
   it('raised no uncaught errors in the admin pages', () => {
-    expect(adminSession.pageErrors).toEqual([]);
+    expect(pageProblems(adminSession)).toEqual([]);
   });
 });
 

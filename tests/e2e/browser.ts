@@ -33,9 +33,33 @@ export type BrowserSession = {
   context: BrowserContext;
   /** Uncaught page errors seen so far, in any page of the session. */
   pageErrors: string[];
+  /** Console errors and warnings of any page of the session (the API's deliberate 4xx answers aside). */
+  consoleProblems: string[];
+  /** Content-Security-Policy violations (`securitypolicyviolation` events) of any page of the session. */
+  policyViolations: string[];
   newPage: (viewport: ViewportName) => Promise<Page>;
   close: () => Promise<void>;
 };
+
+/**
+ * Console lines that mean something went wrong. Three kinds do not count:
+ * Chromium reports every 4xx answer to a fetch as "Failed to load resource",
+ * and those are the API's deliberate refusals (wrong password, 409, 422) that
+ * tests provoke and assert on their own; it warns when the page closes its own
+ * socket during the handshake, as signing out (or being removed) does; and its
+ * software GL driver notes a "GPU stall due to ReadPixels" whenever a test
+ * reads a chart's pixels. Everything else at error or warning level counts —
+ * a socket the policy or the server refused reads differently.
+ */
+const notProblems = [
+  /^Failed to load resource: the server responded with a status of 4\d\d\b/,
+  /^WebSocket connection to '[^']+' failed: WebSocket is closed before the connection is established\.$/,
+  /^\[\.WebGL-[0-9a-fx]+\]GL Driver Message \(OpenGL, Performance, [A-Z_]+, \w+\): GPU stall due to ReadPixels/,
+];
+
+function isProblem(type: string, text: string): boolean {
+  return (type === 'error' || type === 'warning') && !notProblems.some((pattern) => pattern.test(text));
+}
 
 /** Debian's Chromium with a fresh, throw-away profile directory. */
 export async function openBrowser(): Promise<BrowserSession> {
@@ -46,12 +70,28 @@ export async function openBrowser(): Promise<BrowserSession> {
     args: chromiumArgs,
   });
   const pageErrors: string[] = [];
+  const consoleProblems: string[] = [];
+  const policyViolations: string[] = [];
   return {
     context,
     pageErrors,
+    consoleProblems,
+    policyViolations,
     newPage: async (viewport) => {
       const page = await context.newPage();
       page.on('pageerror', (error) => pageErrors.push(`${viewport}: ${error.message}`));
+      page.on('console', (message) => {
+        if (isProblem(message.type(), message.text())) consoleProblems.push(`${viewport}: ${message.type()}: ${message.text()}`);
+      });
+      await page.exposeBinding('__frostgradePolicyViolation', (_source, text: string) => {
+        policyViolations.push(`${viewport}: ${text}`);
+      });
+      await page.addInitScript(() => {
+        document.addEventListener('securitypolicyviolation', (e) => {
+          const report = (window as unknown as { __frostgradePolicyViolation: (text: string) => void }).__frostgradePolicyViolation;
+          void report(`${e.effectiveDirective} blocked ${e.blockedURI || '(inline)'} at ${e.sourceFile || e.documentURI}:${e.lineNumber}`);
+        });
+      });
       await page.setViewportSize(viewports[viewport]);
       return page;
     },
@@ -60,6 +100,15 @@ export async function openBrowser(): Promise<BrowserSession> {
       rmSync(profile, { recursive: true, force: true });
     },
   };
+}
+
+/**
+ * Everything that went wrong in the pages of these sessions: uncaught errors,
+ * console errors and warnings, and Content-Security-Policy violations. Every
+ * suite ends by expecting none.
+ */
+export function pageProblems(...sessions: BrowserSession[]): string[] {
+  return sessions.flatMap((s) => [...s.pageErrors, ...s.consoleProblems, ...s.policyViolations]);
 }
 
 /** GET a JSON endpoint of the app under test (from Node, not the page). */

@@ -1,4 +1,4 @@
-import { baseUrl, countWarmPixels, openBrowser, saveScreenshot, signInAs, type BrowserSession } from './browser';
+import { baseUrl, countWarmPixels, openBrowser, pageProblems, saveScreenshot, signInAs, type BrowserSession } from './browser';
 
 jest.setTimeout(120_000);
 
@@ -35,6 +35,6 @@ describe('charts on the web', () => {
     await plot.scrollIntoViewIfNeeded();
     await saveScreenshot(page, 'chart-desktop');
     expect(warm).toBeGreaterThanOrEqual(300);
-    expect(session.pageErrors).toEqual([]);
+    expect(pageProblems(session)).toEqual([]);
   });
 });

@@ -1,6 +1,6 @@
 import type { Page } from 'playwright-core';
 import { familyDetailResponseSchema } from '../../shared/api/families';
-import { baseUrl, getJsonAs, openBrowser, saveScreenshot, signInAs, waitForVisibleText, type BrowserSession } from './browser';
+import { baseUrl, getJsonAs, openBrowser, pageProblems, saveScreenshot, signInAs, waitForVisibleText, type BrowserSession } from './browser';
 
 jest.setTimeout(240_000);
 
@@ -94,6 +94,6 @@ describe('band-model families in a real browser', () => {
   });
 
   it('raised no uncaught errors in the page', () => {
-    expect(session.pageErrors).toEqual([]);
+    expect(pageProblems(session)).toEqual([]);
   });
 });

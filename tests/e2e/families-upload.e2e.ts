@@ -4,6 +4,7 @@ import {
   baseUrl,
   getJsonAs,
   openBrowser,
+  pageProblems,
   saveScreenshot,
   signInAs,
   waitForDrawnChart,
@@ -173,6 +174,6 @@ describe('uploading a measured family in a real browser', () => {
   });
 
   it('raised no uncaught errors in the page', () => {
-    expect(session.pageErrors).toEqual([]);
+    expect(pageProblems(session)).toEqual([]);
   });
 });

@@ -4,6 +4,7 @@ import {
   baseUrl,
   getJsonAs,
   openBrowser,
+  pageProblems,
   saveScreenshot,
   signInAs,
   viewports,
@@ -90,6 +91,6 @@ describe('materials home in a real browser', () => {
   });
 
   it('raised no uncaught errors in the page', () => {
-    expect(session.pageErrors).toEqual([]);
+    expect(pageProblems(session)).toEqual([]);
   });
 });

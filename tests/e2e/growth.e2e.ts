@@ -8,7 +8,7 @@ import { runDetailSchema } from '../../shared/api/runs';
 import { familyFromMaterial, propertiesAt, type MaterialInput } from '../../shared/engine';
 import type { GrowthSheet } from '../../shared/growth/growth-sheet';
 import type { MeasurementReport } from '../../shared/growth/measurement-report';
-import { baseUrl, convergedRun, getJsonAs, openBrowser, saveScreenshot, screenshotDir, signInAs, visible, waitForDrawnChart, type BrowserSession } from './browser';
+import { baseUrl, convergedRun, getJsonAs, openBrowser, pageProblems, saveScreenshot, screenshotDir, signInAs, visible, waitForDrawnChart, type BrowserSession } from './browser';
 
 jest.setTimeout(420_000);
 
@@ -245,6 +245,6 @@ describe('growth hand-off in a real browser: release, print, grow, measure, judg
   });
 
   it('raised no uncaught errors in the page', () => {
-    expect([...physicist.pageErrors, ...grower.pageErrors]).toEqual([]);
+    expect(pageProblems(physicist, grower)).toEqual([]);
   });
 });

@@ -11,6 +11,7 @@ import {
   demoPFamilyName,
   getJsonAs,
   openBrowser,
+  pageProblems,
   saveScreenshot,
   signInAs,
   visible,
@@ -357,6 +358,6 @@ describe('a physicist opens a run’s curves, builds a module and exports its CS
   });
 
   it('raised no uncaught errors in the page', () => {
-    expect(physicist.pageErrors).toEqual([]);
+    expect(pageProblems(physicist)).toEqual([]);
   });
 });
