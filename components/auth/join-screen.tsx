@@ -4,15 +4,14 @@ import { router, useLocalSearchParams } from 'expo-router';
 import { acceptInvitationSchema } from '@/shared/api/auth';
 import { useAcceptInvitation, useInvitationPreview } from '@/components/api/auth';
 import { spacing } from '@/components/theme';
-import { LoadingState } from '@/components/ui/state-views';
 import { AuthFrame } from './auth-frame';
 import { AuthLink } from './auth-link';
 import { AccountField, newPasswordHelp } from './form/account-field';
-import { FormAlert, FormProblem } from './form/form-alert';
-import { errorsFrom } from './form/form-errors';
+import { FormProblem } from './form/form-alert';
 import { SubmitButton } from './form/submit-button';
 import { useAccountForm } from './form/use-account-form';
 import { InvitationSummary } from './invitation-summary';
+import { LinkPage } from './link-page';
 import { useSession } from './session';
 import { SignedInElsewhere } from './signed-in-elsewhere';
 
@@ -51,33 +50,30 @@ export function JoinScreen() {
   const [startedSignedIn] = useState(session !== null);
   const preview = useInvitationPreview(token);
   const footer = <AuthLink lead="Already a member?" label="Sign in" href="/sign-in" />;
-  if (!token || preview.isError) {
-    return (
-      <AuthFrame title="Invitation not usable" footer={footer}>
-        <FormAlert tone="danger" title="This link does not open an invitation" testID="join-unusable">
-          {preview.error
-            ? errorsFrom(preview.error, []).banner
-            : 'Open the link from your invitation e-mail as it is, or ask an admin of the team to invite you again.'}
-        </FormAlert>
-      </AuthFrame>
-    );
-  }
-  if (!preview.data) {
-    return (
-      <AuthFrame title="Join a team">
-        <LoadingState label="Opening the invitation…" />
-      </AuthFrame>
-    );
-  }
   return (
-    <AuthFrame
-      title="You are invited"
-      subtitle={`to ${preview.data.teamName}. Choose your name and a password; you are signed in straight away.`}
+    <LinkPage
+      token={token}
+      preview={preview}
+      unusable={{
+        page: 'Invitation not usable',
+        alert: 'This link does not open an invitation',
+        hint: 'Open the link from your invitation e-mail as it is, or ask an admin of the team to invite you again.',
+        testID: 'join-unusable',
+      }}
+      loading={{ page: 'Join a team', label: 'Opening the invitation…' }}
       footer={footer}
     >
-      <InvitationSummary preview={preview.data} />
-      {startedSignedIn && session ? <SignedInElsewhere session={session} /> : <AcceptForm token={token} />}
-    </AuthFrame>
+      {(invitation) => (
+        <AuthFrame
+          title="You are invited"
+          subtitle={`to ${invitation.teamName}. Choose your name and a password; you are signed in straight away.`}
+          footer={footer}
+        >
+          <InvitationSummary preview={invitation} />
+          {startedSignedIn && session ? <SignedInElsewhere session={session} /> : <AcceptForm token={token} />}
+        </AuthFrame>
+      )}
+    </LinkPage>
   );
 }
 
