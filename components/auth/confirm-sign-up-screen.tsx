@@ -1,10 +1,8 @@
-import { useState } from 'react';
-import { router, useLocalSearchParams } from 'expo-router';
+import { router } from 'expo-router';
 import { signUpConfirmSchema, type SignUpPreview } from '@/shared/api/auth';
 import { useConfirmSignUp, useSignUpPreview } from '@/components/api/auth';
 import { formatDay } from '@/components/format/date';
 import { AppText } from '@/components/ui/text';
-import { AuthFrame } from './auth-frame';
 import { AuthLink } from './auth-link';
 import { AccountField, newPasswordHelp } from './form/account-field';
 import { FormProblem } from './form/form-alert';
@@ -12,8 +10,6 @@ import { SubmitButton } from './form/submit-button';
 import { useAccountForm } from './form/use-account-form';
 import { SummaryCard, SummaryLine } from './invitation-summary';
 import { LinkPage } from './link-page';
-import { useSession } from './session';
-import { SignedInElsewhere } from './signed-in-elsewhere';
 
 const fields = ['password'] as const;
 
@@ -54,16 +50,9 @@ function PasswordForm({ token }: { token: string }) {
 
 /** `/confirm-sign-up?token=…`: sign-up, step two, from the e-mailed link: the password makes the team and signs in. */
 export function ConfirmSignUpScreen() {
-  const { token = '' } = useLocalSearchParams<{ token?: string }>();
-  const session = useSession();
-  // Once this page has made the account, the session belongs to it: no "signed in elsewhere".
-  const [startedSignedIn] = useState(session !== null);
-  const preview = useSignUpPreview(token);
-  const footer = <AuthLink lead="Link expired or used?" label="Sign up again" href="/sign-up" />;
   return (
     <LinkPage
-      token={token}
-      preview={preview}
+      usePreview={useSignUpPreview}
       unusable={{
         page: 'Sign-up link not usable',
         alert: 'This link does not finish a sign-up',
@@ -71,18 +60,14 @@ export function ConfirmSignUpScreen() {
         testID: 'confirm-unusable',
       }}
       loading={{ page: 'Finish creating your team', label: 'Opening the link…' }}
-      footer={footer}
-    >
-      {(data) => (
-        <AuthFrame title="Choose your password" subtitle="Last step: this creates your team with you as its admin, and signs you in." footer={footer}>
-          <SignUpSummary preview={data} />
-          {startedSignedIn && session ? (
-            <SignedInElsewhere session={session} what="This sign-up link" testID="confirm-signed-in" />
-          ) : (
-            <PasswordForm token={token} />
-          )}
-        </AuthFrame>
-      )}
-    </LinkPage>
+      ready={(signUp) => ({
+        title: 'Choose your password',
+        subtitle: 'Last step: this creates your team with you as its admin, and signs you in.',
+        summary: <SignUpSummary preview={signUp} />,
+      })}
+      form={(token) => <PasswordForm token={token} />}
+      signedIn={{ what: 'This sign-up link', testID: 'confirm-signed-in' }}
+      footer={<AuthLink lead="Link expired or used?" label="Sign up again" href="/sign-up" />}
+    />
   );
 }

@@ -1,10 +1,8 @@
-import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { router, useLocalSearchParams } from 'expo-router';
+import { router } from 'expo-router';
 import { acceptInvitationSchema } from '@/shared/api/auth';
 import { useAcceptInvitation, useInvitationPreview } from '@/components/api/auth';
 import { spacing } from '@/components/theme';
-import { AuthFrame } from './auth-frame';
 import { AuthLink } from './auth-link';
 import { AccountField, newPasswordHelp } from './form/account-field';
 import { FormProblem } from './form/form-alert';
@@ -12,8 +10,6 @@ import { SubmitButton } from './form/submit-button';
 import { useAccountForm } from './form/use-account-form';
 import { InvitationSummary } from './invitation-summary';
 import { LinkPage } from './link-page';
-import { useSession } from './session';
-import { SignedInElsewhere } from './signed-in-elsewhere';
 
 const fields = ['displayName', 'password'] as const;
 
@@ -44,16 +40,9 @@ function AcceptForm({ token }: { token: string }) {
 
 /** `/join?token=…`: the link from an invitation e-mail. */
 export function JoinScreen() {
-  const { token = '' } = useLocalSearchParams<{ token?: string }>();
-  const session = useSession();
-  // Once this page has made the account, the session belongs to it: no "signed in elsewhere".
-  const [startedSignedIn] = useState(session !== null);
-  const preview = useInvitationPreview(token);
-  const footer = <AuthLink lead="Already a member?" label="Sign in" href="/sign-in" />;
   return (
     <LinkPage
-      token={token}
-      preview={preview}
+      usePreview={useInvitationPreview}
       unusable={{
         page: 'Invitation not usable',
         alert: 'This link does not open an invitation',
@@ -61,19 +50,15 @@ export function JoinScreen() {
         testID: 'join-unusable',
       }}
       loading={{ page: 'Join a team', label: 'Opening the invitation…' }}
-      footer={footer}
-    >
-      {(invitation) => (
-        <AuthFrame
-          title="You are invited"
-          subtitle={`to ${invitation.teamName}. Choose your name and a password; you are signed in straight away.`}
-          footer={footer}
-        >
-          <InvitationSummary preview={invitation} />
-          {startedSignedIn && session ? <SignedInElsewhere session={session} /> : <AcceptForm token={token} />}
-        </AuthFrame>
-      )}
-    </LinkPage>
+      ready={(invitation) => ({
+        title: 'You are invited',
+        subtitle: `to ${invitation.teamName}. Choose your name and a password; you are signed in straight away.`,
+        summary: <InvitationSummary preview={invitation} />,
+      })}
+      form={(token) => <AcceptForm token={token} />}
+      signedIn={{ what: 'This invitation', testID: 'join-signed-in' }}
+      footer={<AuthLink lead="Already a member?" label="Sign in" href="/sign-in" />}
+    />
   );
 }
 

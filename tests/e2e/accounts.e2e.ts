@@ -39,6 +39,13 @@ async function makeMember(adminSession: BrowserSession, email: string, password:
   if (answer.status() !== 201) throw new Error(`accepting the invitation answered ${answer.status()}`);
 }
 
+/** Signs in on a page and opens the growth list, which keeps a socket open (the server closes it when the session ends). */
+async function signInToLivePage(page: Page, email: string, password: string): Promise<void> {
+  await signIn(page, email, password);
+  await page.goto(`${baseUrl}/growth`);
+  await shellNav(page).waitFor({ state: 'visible', timeout: 30_000 });
+}
+
 describe('accounts in a real browser', () => {
   let adminSession: BrowserSession;
 
@@ -122,10 +129,8 @@ describe('accounts in a real browser', () => {
     const leaver = await openBrowser();
     try {
       const theirs = await leaver.newPage('phone');
-      await signIn(theirs, member, password);
-      // The growth page keeps a socket open: the server closes it on removal.
-      await theirs.goto(`${baseUrl}/growth`);
-      await shellNav(theirs).waitFor({ state: 'visible', timeout: 30_000 });
+      // The server closes its socket on removal.
+      await signInToLivePage(theirs, member, password);
 
       const page = await adminSession.newPage('desktop');
       await page.goto(`${baseUrl}/team`);
@@ -313,10 +318,8 @@ describe('accounts in a real browser', () => {
     const deskBrowser = await openBrowser();
     try {
       const phone = await phoneBrowser.newPage('phone');
-      await signIn(phone, member, password);
-      // The growth page keeps a socket open: the server closes it when the password changes.
-      await phone.goto(`${baseUrl}/growth`);
-      await shellNav(phone).waitFor({ state: 'visible', timeout: 30_000 });
+      // The server closes its socket when the password changes.
+      await signInToLivePage(phone, member, password);
 
       const desk = await deskBrowser.newPage('desktop');
       await signIn(desk, member, password);

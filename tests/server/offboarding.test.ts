@@ -1,11 +1,8 @@
 import { randomUUID } from 'node:crypto';
-import { createServer, type Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
-import { io as connect, type Socket } from 'socket.io-client';
+import type { Socket } from 'socket.io-client';
 import { growthOrderDetailSchema, growthOrdersResponseSchema, meResponseSchema, runsResponseSchema, teamResponseSchema } from '../../shared/api';
-import { attachRealtime } from '../../server/realtime/socket-server';
-import { watchRules } from '../../server/realtime/watch-rules';
 import { accountMailDone, agent, agentAt, databaseNow, demo, eventually, mailTo, newTeam, openContext, signedIn, tokenIn as linkToken, type TestContext } from './context';
+import { socketServer, type SocketServer } from './sockets';
 
 /**
  * Offboarding against the real stack: the test stack's worker takes the
@@ -13,22 +10,15 @@ import { accountMailDone, agent, agentAt, databaseNow, demo, eventually, mailTo,
  * server on the test's own HTTP server relays NOTIFY like the API does.
  */
 let ctx: TestContext;
-let http: Server;
-let url: string;
-let closeRealtime: () => Promise<void>;
-const sockets: Socket[] = [];
+let realtime: SocketServer;
 jest.setTimeout(240_000);
 
 beforeAll(async () => {
   ctx = await openContext();
-  http = createServer(ctx.app);
-  closeRealtime = (await attachRealtime(http, { auth: ctx.auth, databaseUrl: ctx.env.databaseUrl, appOrigin: ctx.env.appOrigin, allowLoopback: false }, watchRules(ctx.ds))).close;
-  await new Promise<void>((r) => http.listen(0, '127.0.0.1', r));
-  url = `http://127.0.0.1:${(http.address() as AddressInfo).port}`;
+  realtime = await socketServer(ctx);
 });
 afterAll(async () => {
-  for (const s of sockets) s.disconnect();
-  await closeRealtime();
+  await realtime.close();
   await ctx.close();
 });
 
@@ -50,12 +40,7 @@ async function join(admin: Api, email: string, role: string, displayName: string
 }
 
 /** A socket as the member's browser opens it: same cookie, the app's Origin; reconnecting is left to the test. */
-async function socketWith(cookie: string): Promise<Socket> {
-  const s = connect(url, { transports: ['websocket'], extraHeaders: { Origin: ctx.env.appOrigin, Cookie: cookie }, reconnection: false, forceNew: true });
-  sockets.push(s);
-  await new Promise<void>((resolve, reject) => { s.once('connect', () => resolve()); s.once('connect_error', reject); });
-  return s;
-}
+const socketWith = (cookie: string): Promise<Socket> => realtime.open(cookie);
 
 /** The reason socket.io gives for the next disconnect (sanity bound only: the point is that it comes). */
 const nextDisconnect = (s: Socket): Promise<string> => new Promise((resolve, reject) => {

@@ -1,12 +1,10 @@
-import { createServer, type Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
-import { io as connect, type Socket } from 'socket.io-client';
+import type { Socket } from 'socket.io-client';
 import { roles, type Role } from '../../shared/api';
 import { apiRoutes } from '../../server/http/app';
 import { objectReaders, type ObjectKind } from '../../server/http/object-access';
-import { attachRealtime } from '../../server/realtime/socket-server';
-import { watchableKinds, watchRules } from '../../server/realtime/watch-rules';
+import { watchableKinds } from '../../server/realtime/watch-rules';
 import { demo, eventually, openContext, signedIn, type TestContext } from './context';
+import { cookieFor, socketServer, type SocketServer } from './sockets';
 
 /**
  * One rule decides who may read an object over HTTP and who may watch its
@@ -15,10 +13,7 @@ import { demo, eventually, openContext, signedIn, type TestContext } from './con
  * watchable kind a real watch answers as the real GET does.
  */
 let ctx: TestContext;
-let http: Server;
-let url: string;
-let closeRealtime: () => Promise<void>;
-const sockets: Socket[] = [];
+let realtime: SocketServer;
 const ids = {} as Record<ObjectKind, string>;
 jest.setTimeout(240_000);
 
@@ -27,10 +22,7 @@ const detailPath: Partial<Record<ObjectKind, string>> = { family: '/families/:id
 
 beforeAll(async () => {
   ctx = await openContext();
-  http = createServer(ctx.app);
-  closeRealtime = (await attachRealtime(http, { auth: ctx.auth, databaseUrl: ctx.env.databaseUrl, appOrigin: ctx.env.appOrigin, allowLoopback: false }, watchRules(ctx.ds))).close;
-  await new Promise<void>((r) => http.listen(0, '127.0.0.1', r));
-  url = `http://127.0.0.1:${(http.address() as AddressInfo).port}`;
+  realtime = await socketServer(ctx);
   // One object of each kind in the demo lab.
   const lab = await signedIn(ctx, demo.admin);
   const family = (await lab.get('/api/families')).body.families.find((f: { isDemo: boolean; kind: string; carrier: string }) => f.isDemo && f.kind === 'band' && f.carrier === 'p');
@@ -42,19 +34,11 @@ beforeAll(async () => {
   ids.growth = (await lab.post(`/api/runs/${ids.run}/release`).send({ batch: `Watch ${Date.now()}` })).body.order.id;
 });
 afterAll(async () => {
-  for (const s of sockets) s.disconnect();
-  await closeRealtime();
+  await realtime.close();
   await ctx.close();
 });
 
-async function socketAs(email: string): Promise<Socket> {
-  const [row] = await ctx.ds.query('SELECT id FROM app_user WHERE email = $1', [email]);
-  const cookie = ctx.auth.createSessionCookie((await ctx.auth.createSession(row.id, {})).id).serialize();
-  const s = connect(url, { transports: ['websocket'], extraHeaders: { Origin: ctx.env.appOrigin, Cookie: cookie }, reconnection: false, forceNew: true });
-  sockets.push(s);
-  await new Promise<void>((resolve, reject) => { s.once('connect', () => resolve()); s.once('connect_error', reject); });
-  return s;
-}
+const socketAs = async (email: string): Promise<Socket> => realtime.open(await cookieFor(ctx, email));
 
 const watch = (s: Socket, room: string) => new Promise<{ ok: boolean }>((r) => s.emit('watch', room, r));
 
