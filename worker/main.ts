@@ -8,6 +8,7 @@ import { installProcessGuards, whenDatabaseAnswers } from '../server/ops/process
 import { startBoss } from '../server/queue/boss';
 import { queues } from '../server/queue/queues';
 import { startRunSweeper } from '../server/runs/run-sweeper';
+import { accountMailJob } from './account-mail-job';
 import { startHeartbeat } from './heartbeat';
 import { runJob } from './run-job';
 import { sheetJob } from './sheet-job';
@@ -44,6 +45,13 @@ async function main(): Promise<void> {
     if (!job) return null;
     const outcome = await sheetJob(ds, job.data.orderId);
     console.log(`[worker] growth order ${job.data.orderId}: ${outcome}`);
+    return { workerId, outcome };
+  });
+  await boss.work(queues.accountMail, { pollingIntervalSeconds: 0.5, batchSize: 1 }, async ([job]) => {
+    if (!job) return null;
+    // The job's data names addresses; the log says only what kind went out.
+    const outcome = await accountMailJob({ ds, mailer, appOrigin: env.appOrigin }, job.data);
+    console.log(`[worker] account mail ${job.id}: ${outcome}`);
     return { workerId, outcome };
   });
   const sweeper = startRunSweeper(life, env.runStaleSeconds, 'worker');

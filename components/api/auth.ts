@@ -1,10 +1,13 @@
 import { useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
-import { z } from 'zod';
 import {
   invitationPreviewSchema,
+  mailQueuedSchema,
   meResponseSchema,
+  signUpPreviewSchema,
+  type ChangePasswordRequest,
   type MeResponse,
   type SignInRequest,
+  type SignUpConfirm,
   type SignUpRequest,
 } from '@/shared/api/auth';
 import { ApiError, apiCommand, apiGet, apiSend } from './client';
@@ -55,10 +58,30 @@ export function useSignIn() {
   );
 }
 
-/** `POST /api/auth/sign-up`: a new account with its own team, which it administers. */
-export function useSignUp() {
-  return useSessionMutation((body: SignUpRequest) =>
-    apiSend('POST', '/api/auth/sign-up', { json: body }, meResponseSchema),
+/**
+ * `POST /api/auth/sign-up`, step one: always 202 "check your inbox", whether
+ * or not the address has an account; no session yet.
+ */
+export function useRequestSignUp() {
+  return useMutation({
+    mutationFn: (body: SignUpRequest) => apiSend('POST', '/api/auth/sign-up', { json: body }, mailQueuedSchema),
+  });
+}
+
+/** `GET /api/sign-up/:token`: the team, name and address a sign-up link will create (400 when unusable). */
+export function useSignUpPreview(token: string) {
+  return useQuery({
+    queryKey: ['auth', 'sign-up', token],
+    queryFn: ({ signal }) => apiGet(`/api/sign-up/${encodeURIComponent(token)}`, signUpPreviewSchema, { signal }),
+    enabled: token.length > 0,
+    staleTime: Infinity,
+  });
+}
+
+/** `POST /api/auth/sign-up/confirm`, step two: the password makes the team and the account, and signs in. */
+export function useConfirmSignUp() {
+  return useSessionMutation((body: SignUpConfirm) =>
+    apiSend('POST', '/api/auth/sign-up/confirm', { json: body }, meResponseSchema),
   );
 }
 
@@ -80,13 +103,27 @@ export function useSignOut() {
   });
 }
 
-const resetRequestedSchema = z.object({ message: z.string() });
+/** `POST /api/auth/sign-out-everywhere`: every session of the account ends, this one too. */
+export function useSignOutEverywhere() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => apiCommand('POST', '/api/auth/sign-out-everywhere', { none: true }),
+    onSuccess: () => switchSession(queryClient, null),
+  });
+}
+
+/** `POST /api/auth/password`: the current password proves it is you; every other session ends. */
+export function useChangePassword() {
+  return useMutation({
+    mutationFn: (body: ChangePasswordRequest) => apiCommand('POST', '/api/auth/password', { json: body }),
+  });
+}
 
 /** `POST /api/auth/reset-request`: always 202, whether or not the address has an account. */
 export function useRequestReset() {
   return useMutation({
     mutationFn: (email: string) =>
-      apiSend('POST', '/api/auth/reset-request', { json: { email } }, resetRequestedSchema),
+      apiSend('POST', '/api/auth/reset-request', { json: { email } }, mailQueuedSchema),
   });
 }
 

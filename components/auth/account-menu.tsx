@@ -3,6 +3,7 @@ import { Modal, Pressable, StyleSheet, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 import { colors, radii, spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';
+import { AccountLink } from './account-link';
 import { Initials } from './initials';
 import { roleSummaries } from './permissions';
 import { RoleBadge } from './role-badge';
@@ -11,7 +12,7 @@ import { SignOutButton } from './sign-out-button';
 
 /**
  * Phone app bar: the member's initials; pressed, a small card with name,
- * role and team, and sign-out.
+ * role and team, a link to password and sessions, and sign-out.
  */
 export function AccountMenu() {
   const session = useSession();
@@ -51,6 +52,7 @@ export function AccountMenu() {
             </AppText>
           </View>
           <AppText variant="label">{team.name}</AppText>
+          <AccountLink onDone={close} />
           <SignOutButton onDone={close} />
         </View>
       </Modal>

@@ -1,12 +1,13 @@
 import { StyleSheet, View } from 'react-native';
 import { colors, radii, spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';
+import { AccountLink } from './account-link';
 import { Initials } from './initials';
 import { RoleBadge } from './role-badge';
 import { useSession } from './session';
 import { SignOutButton } from './sign-out-button';
 
-/** Foot of the side rail: who is signed in, their role and team, and sign-out. */
+/** Foot of the side rail: who is signed in, their role and team, password and sessions, and sign-out. */
 export function AccountPanel() {
   const session = useSession();
   if (!session) return null;
@@ -30,6 +31,7 @@ export function AccountPanel() {
           {team.name}
         </AppText>
       </View>
+      <AccountLink onChrome />
       <SignOutButton onChrome />
     </View>
   );

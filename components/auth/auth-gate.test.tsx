@@ -38,7 +38,7 @@ function tabRoutes(): Record<string, () => ReactNode> {
   const found: Record<string, () => ReactNode> = {};
   for (const tab of tabs) {
     const href = String(tab.href);
-    if (tab.name === 'team') continue;
+    if (tab.name === '(team)') continue;
     if (!tab.name.startsWith('(')) {
       found[`(tabs)/${tab.name}`] = page(`${tab.label} page`);
       continue;
@@ -58,11 +58,13 @@ const routes = {
   '(auth)/forgot-password': page('Forgot page'),
   '(tabs)/_layout': SignedInShell,
   ...tabRoutes(),
-  '(tabs)/team': () => (
+  '(tabs)/(team)/_layout': () => <Slot />,
+  '(tabs)/(team)/team/index': () => (
     <ScreenFrame title="Team page">
       <Text>Members</Text>
     </ScreenFrame>
   ),
+  '(tabs)/(team)/account': page('Account page'),
 };
 
 const unauthorized = { status: 401, body: { name: 'Unauthorized', message: 'Sign in first.' } };
@@ -118,6 +120,19 @@ describe('the auth gate', () => {
     expect(router.getPathname()).toBe('/sign-in');
     expect(router.getSearchParams()).toEqual({});
     expect(requests.map((r) => `${r.method} ${r.url}`)).toEqual(['GET /api/auth/me', 'POST /api/auth/sign-out']);
+  });
+
+  it('opens password and sessions from the phone account menu', async () => {
+    mockFetch({ status: 200, body: sessionAs('viewer', 'Vic Tanaka') });
+    const router = renderRouter(routes, { initialUrl: '/team' });
+    expect(await screen.findByText('Team page')).toBeOnTheScreen();
+
+    fireEvent.press(screen.getByRole('button', { name: 'Account of Vic Tanaka' }));
+    fireEvent.press(screen.getByTestId('open-account'));
+
+    expect(await screen.findByText('Account page')).toBeOnTheScreen();
+    expect(router.getPathname()).toBe('/account');
+    expect(screen.queryByTestId('account-menu')).toBeNull();
   });
 
   it('says so when the server cannot be reached at start, and offers a retry', async () => {

@@ -24,7 +24,7 @@ function Splash() {
  * Asks the API who is signed in (`GET /api/auth/me`) once at start and
  * provides the answer to every route. Which routes need a session is
  * decided by their group layouts: `(tabs)` sends the signed-out to
- * `/sign-in`, `(auth)` sends the signed-in home; `/join` and
+ * `/sign-in`, `(auth)` sends the signed-in home; `/join`, `/confirm-sign-up` and
  * `/reset-password` work either way.
  */
 export function AuthGate({ children }: { children: ReactNode }) {

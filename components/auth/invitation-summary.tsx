@@ -7,7 +7,8 @@ import { AppText } from '@/components/ui/text';
 import { roleSummaries } from './permissions';
 import { RoleBadge } from './role-badge';
 
-function Line({ label, children }: { label: string; children: ReactNode }) {
+/** One labelled line of a link's summary (team, role, address, expiry). */
+export function SummaryLine({ label, children }: { label: string; children: ReactNode }) {
   return (
     <View style={styles.line}>
       <AppText variant="caption" tone="muted" style={styles.label}>
@@ -18,26 +19,35 @@ function Line({ label, children }: { label: string; children: ReactNode }) {
   );
 }
 
+/** What a link will make, before the account exists: lines on a sunken card inside the form's card. */
+export function SummaryCard({ children, testID }: { children: ReactNode; testID: string }) {
+  return (
+    <View style={styles.card} testID={testID}>
+      {children}
+    </View>
+  );
+}
+
 /** Team, role, address and expiry of an invitation, before the account exists. */
 export function InvitationSummary({ preview }: { preview: InvitationPreview }) {
   return (
-    <View style={styles.card} testID="invitation-summary">
-      <Line label="Team">
+    <SummaryCard testID="invitation-summary">
+      <SummaryLine label="Team">
         <AppText variant="bodyStrong">{preview.teamName}</AppText>
-      </Line>
-      <Line label="Role">
+      </SummaryLine>
+      <SummaryLine label="Role">
         <RoleBadge role={preview.role} />
         <AppText variant="caption" tone="muted">
           {roleSummaries[preview.role]}
         </AppText>
-      </Line>
-      <Line label="E-mail">
+      </SummaryLine>
+      <SummaryLine label="E-mail">
         <AppText>{preview.email}</AppText>
-      </Line>
-      <Line label="Valid until">
+      </SummaryLine>
+      <SummaryLine label="Valid until">
         <AppText>{formatDay(preview.expiresAt)}</AppText>
-      </Line>
-    </View>
+      </SummaryLine>
+    </SummaryCard>
   );
 }
 

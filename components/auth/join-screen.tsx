@@ -1,20 +1,15 @@
-import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { router, useLocalSearchParams } from 'expo-router';
+import { router } from 'expo-router';
 import { acceptInvitationSchema } from '@/shared/api/auth';
 import { useAcceptInvitation, useInvitationPreview } from '@/components/api/auth';
 import { spacing } from '@/components/theme';
-import { LoadingState } from '@/components/ui/state-views';
-import { AuthFrame } from './auth-frame';
 import { AuthLink } from './auth-link';
 import { AccountField, newPasswordHelp } from './form/account-field';
-import { FormAlert, FormProblem } from './form/form-alert';
-import { errorsFrom } from './form/form-errors';
+import { FormProblem } from './form/form-alert';
 import { SubmitButton } from './form/submit-button';
 import { useAccountForm } from './form/use-account-form';
 import { InvitationSummary } from './invitation-summary';
-import { useSession } from './session';
-import { SignedInElsewhere } from './signed-in-elsewhere';
+import { LinkPage } from './link-page';
 
 const fields = ['displayName', 'password'] as const;
 
@@ -45,39 +40,25 @@ function AcceptForm({ token }: { token: string }) {
 
 /** `/join?token=…`: the link from an invitation e-mail. */
 export function JoinScreen() {
-  const { token = '' } = useLocalSearchParams<{ token?: string }>();
-  const session = useSession();
-  // Once this page has made the account, the session belongs to it: no "signed in elsewhere".
-  const [startedSignedIn] = useState(session !== null);
-  const preview = useInvitationPreview(token);
-  const footer = <AuthLink lead="Already a member?" label="Sign in" href="/sign-in" />;
-  if (!token || preview.isError) {
-    return (
-      <AuthFrame title="Invitation not usable" footer={footer}>
-        <FormAlert tone="danger" title="This link does not open an invitation" testID="join-unusable">
-          {preview.error
-            ? errorsFrom(preview.error, []).banner
-            : 'Open the link from your invitation e-mail as it is, or ask an admin of the team to invite you again.'}
-        </FormAlert>
-      </AuthFrame>
-    );
-  }
-  if (!preview.data) {
-    return (
-      <AuthFrame title="Join a team">
-        <LoadingState label="Opening the invitation…" />
-      </AuthFrame>
-    );
-  }
   return (
-    <AuthFrame
-      title="You are invited"
-      subtitle={`to ${preview.data.teamName}. Choose your name and a password; you are signed in straight away.`}
-      footer={footer}
-    >
-      <InvitationSummary preview={preview.data} />
-      {startedSignedIn && session ? <SignedInElsewhere session={session} /> : <AcceptForm token={token} />}
-    </AuthFrame>
+    <LinkPage
+      usePreview={useInvitationPreview}
+      unusable={{
+        page: 'Invitation not usable',
+        alert: 'This link does not open an invitation',
+        hint: 'Open the link from your invitation e-mail as it is, or ask an admin of the team to invite you again.',
+        testID: 'join-unusable',
+      }}
+      loading={{ page: 'Join a team', label: 'Opening the invitation…' }}
+      ready={(invitation) => ({
+        title: 'You are invited',
+        subtitle: `to ${invitation.teamName}. Choose your name and a password; you are signed in straight away.`,
+        summary: <InvitationSummary preview={invitation} />,
+      })}
+      form={(token) => <AcceptForm token={token} />}
+      signedIn={{ what: 'This invitation', testID: 'join-signed-in' }}
+      footer={<AuthLink lead="Already a member?" label="Sign in" href="/sign-in" />}
+    />
   );
 }
 

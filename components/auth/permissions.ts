@@ -31,6 +31,8 @@ export const actionRoles = {
   'records.delete': ['admin'],
   /** Read the captured e-mail of the workspace. */
   'outbox.read': ['admin'],
+  /** Read and export the team's audit trail. */
+  'audit.read': ['admin'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Action = keyof typeof actionRoles;

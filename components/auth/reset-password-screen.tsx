@@ -14,7 +14,8 @@ function Done() {
   return (
     <AuthFrame title="Password changed" footer={<AuthLink label="Sign in with the new password" href="/sign-in" testID="link-sign-in" />}>
       <FormAlert tone="ok" title="Your new password is set" testID="reset-done">
-        Every session of this account has been signed out, on every device.
+        Every session of this account has been signed out, on every device, and a note of the change went to its
+        e-mail address.
       </FormAlert>
     </AuthFrame>
   );

@@ -4,14 +4,13 @@ import { AppText } from '@/components/ui/text';
 import { FormAlert } from './form/form-alert';
 import type { Session } from './session';
 
-/** An invitation opened while someone is signed in: it makes a new account, so sign out first. */
-export function SignedInElsewhere({ session }: { session: NonNullable<Session> }) {
+/** A link that makes an account (an invitation, a sign-up) opened while someone is signed in: sign out first. */
+export function SignedInElsewhere({ session, what = 'This invitation', testID = 'join-signed-in' }: { session: NonNullable<Session>; what?: string; testID?: string }) {
   const signOut = useSignOut();
   return (
-    <FormAlert tone="info" title={`You are signed in as ${session.user.displayName}`} testID="join-signed-in">
+    <FormAlert tone="info" title={`You are signed in as ${session.user.displayName}`} testID={testID}>
       <AppText>
-        This invitation makes a new account. Sign out of {session.user.email} ({session.team.name}) first, then accept it
-        here.
+        {what} makes a new account. Sign out of {session.user.email} ({session.team.name}) first, then use it here.
       </AppText>
       <Button label={signOut.isPending ? 'Signing out…' : 'Sign out'} onPress={() => signOut.mutate()} disabled={signOut.isPending} />
     </FormAlert>

@@ -22,7 +22,7 @@ export const tabs: readonly TabSpec[] = [
   { name: '(designs)', href: '/designs', label: 'Designs', icon: 'designs' },
   { name: '(runs)', href: '/runs', label: 'Runs', icon: 'runs' },
   { name: '(growth)', href: '/growth', label: 'Growth', icon: 'growth' },
-  { name: 'team', href: '/team', label: 'Team', icon: 'team' },
+  { name: '(team)', href: '/team', label: 'Team', icon: 'team' },
   { name: 'outbox', href: '/outbox', label: 'Outbox', icon: 'outbox', requires: 'outbox.read' },
   { name: 'system', href: '/system', label: 'System', icon: 'system' },
 ];

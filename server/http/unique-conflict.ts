@@ -14,6 +14,7 @@ export const uniqueFields: Record<string, FieldError> = {
   app_user_email_active: { field: 'email', message: 'this address already has a Frostgrade account (one team per account)' },
   invitation_token_hash_key: { field: 'token', message: 'a link collided with an existing one: try again' },
   password_reset_token_hash_key: { field: 'token', message: 'a link collided with an existing one: try again' },
+  sign_up_request_token_hash_key: { field: 'token', message: 'a link collided with an existing one: try again' },
 };
 
 /** Primary keys are generated or written idempotently; a clash there is a retryable collision on `id`. */

@@ -2,7 +2,8 @@ import 'reflect-metadata';
 import { createInterface } from 'node:readline';
 import { parseArgs } from 'node:util';
 import { z } from 'zod';
-import { signUpRequestSchema } from '../../shared/api';
+import { signUpConfirmSchema, signUpRequestSchema } from '../../shared/api';
+import { recordAudit } from '../audit/audit-log';
 import { hashPassword } from '../auth/passwords';
 import { readEnv } from '../config/env';
 import { createDataSource } from '../db/data-source';
@@ -37,7 +38,7 @@ async function readPassword(): Promise<string> {
 async function main(): Promise<void> {
   const { positionals, values } = parseArgs({ allowPositionals: true, options: { email: { type: 'string' }, name: { type: 'string' }, team: { type: 'string' } } });
   if (positionals[0] !== 'create') throw new Error(usage);
-  const fields = z.object({ email: signUpRequestSchema.shape.email, displayName: signUpRequestSchema.shape.displayName, teamName: signUpRequestSchema.shape.teamName, password: signUpRequestSchema.shape.password });
+  const fields = z.object({ email: signUpRequestSchema.shape.email, displayName: signUpRequestSchema.shape.displayName, teamName: signUpRequestSchema.shape.teamName, password: signUpConfirmSchema.shape.password });
   const parsed = fields.safeParse({ email: values.email, displayName: values.name, teamName: values.team, password: await readPassword() });
   if (!parsed.success) throw new Error(`${parsed.error.issues.map((i) => `${i.path.join('.') === 'displayName' ? 'name' : i.path.join('.') === 'teamName' ? 'team' : i.path.join('.')}: ${i.message}`).join('; ')}\n${usage}`);
   const env = readEnv({ ...process.env, FROSTGRADE_PROFILE: process.env.NODE_ENV === 'production' ? 'prod' : 'dev' });
@@ -45,7 +46,12 @@ async function main(): Promise<void> {
   const ds = await createDataSource(db.url, 'frostgrade-admin').initialize();
   try {
     const passwordHash = await hashPassword(parsed.data.password);
-    const made = await ds.transaction((m) => createTeamWithAdmin(m, { ...parsed.data, passwordHash }));
+    const made = await ds.transaction(async (m) => {
+      const created = await createTeamWithAdmin(m, { ...parsed.data, passwordHash });
+      // No network address: it was made on the server's own command line.
+      await recordAudit(m, { teamId: created.teamId, actorId: created.userId, actorName: parsed.data.displayName, ip: null }, { action: 'team-created', summary: `created the team ${parsed.data.teamName} with npm run admin`, email: parsed.data.email, subjectId: created.teamId });
+      return created;
+    });
     console.log(`[admin] ${parsed.data.email} is the admin of the new team "${parsed.data.teamName}" (user ${made.userId}); sign in at ${env.appOrigin} and invite the others from Team.`);
   } catch (err) {
     if (err instanceof ValidationError) throw new Error(err.message);

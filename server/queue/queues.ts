@@ -4,4 +4,6 @@ export const queues = {
   probe: 'system-probe',
   /** Computes a growth order's sheet (zoning for every K, tolerances) in a worker. */
   growthSheet: 'growth-sheet',
+  /** Account mail (sign-up and invitation links, resets, notices to owners): sent by a worker, never inside a request. */
+  accountMail: 'account-mail',
 } as const;

@@ -7,9 +7,10 @@ import { eventChannel, type TeamEvent } from '../db/events';
 export const accountEnded = 'account:ended';
 
 /**
- * Tells every API process (through NOTIFY) to close this member's sockets.
- * Sent inside the caller's transaction: PostgreSQL delivers it only if the
- * removal or role change commits, and then surely.
+ * Tells every API process (through NOTIFY) to close this member's sockets
+ * (with `sessionId`, only those opened with that session). Sent inside the
+ * caller's transaction: PostgreSQL delivers it only if the removal, role
+ * change, sign-out or password change commits, and then surely.
  */
 export async function announceAccountEnded(m: EntityManager, teamId: string, e: AccountEnded): Promise<void> {
   const event: TeamEvent = { teamId, event: accountEnded, payload: e };
@@ -18,9 +19,10 @@ export async function announceAccountEnded(m: EntityManager, teamId: string, e: 
 
 /**
  * Closes the sockets this process holds for the member named by an
- * `account:ended` event, and says whether the event was one (so it is not
- * relayed to browsers). The server-side disconnect does not auto-reconnect
- * on the client; the client decides (components/realtime/use-realtime.ts).
+ * `account:ended` event (socket.data.user, and socket.data.sessionId when
+ * the event names a session), and says whether the event was one (so it is
+ * not relayed to browsers). The server-side disconnect does not
+ * auto-reconnect on the client; the client decides (components/realtime/socket.ts).
  */
 export function endMemberSockets(io: Server, e: TeamEvent): boolean {
   if (e.event !== accountEnded) return false;
@@ -29,9 +31,11 @@ export function endMemberSockets(io: Server, e: TeamEvent): boolean {
     console.error(`[realtime] ${accountEnded} event without a member id: ignored`);
     return true;
   }
+  const { userId, sessionId } = parsed.data;
   for (const socket of io.of('/').sockets.values()) {
     const user = socket.data.user as { id?: unknown; teamId?: unknown } | undefined;
-    if (user?.id === parsed.data.userId && user.teamId === e.teamId) socket.disconnect(true);
+    if (user?.id !== userId || user.teamId !== e.teamId) continue;
+    if (sessionId === undefined || socket.data.sessionId === sessionId) socket.disconnect(true);
   }
   return true;
 }

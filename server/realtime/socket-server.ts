@@ -31,9 +31,11 @@ export async function attachRealtime(http: HttpServer, o: RealtimeOptions, canWa
     if (!originAllowed(socket.handshake.headers.origin, o)) return next(new Error('origin not allowed'));
     const id = o.auth.readSessionCookie(socket.handshake.headers.cookie ?? '');
     if (!id) return next(new Error('sign in first'));
-    o.auth.validateSession(id).then(({ user }) => {
-      if (!user) return next(new Error('sign in first'));
+    o.auth.validateSession(id).then(({ user, session }) => {
+      if (!user || !session) return next(new Error('sign in first'));
       socket.data.user = user;
+      // A sign-out closes only the sockets of the session it ends.
+      socket.data.sessionId = session.id;
       next();
     }, (err: Error) => next(err));
   });

@@ -2,7 +2,9 @@ import type { Request } from 'express';
 import type { DataSource } from 'typeorm';
 import { createFamilyRequestSchema, duplicateFamilyRequestSchema, updateFamilyRequestSchema } from '../../shared/api';
 import { fileOf, uploadThen } from '../http/upload';
-import { actorName, anyMember, designers, requireTeam } from '../http/access';
+import { actorName, designers, requireTeam } from '../http/access';
+import { auditWho } from '../http/audit-who';
+import { objectReaders } from '../http/object-access';
 import { route, type RouteSpec } from '../http/route-table';
 import { body, parseOrThrow } from '../http/validate';
 import { exportFamily } from '../services/family-export';
@@ -21,7 +23,7 @@ const versionQuery = z.object({ version: z.coerce.number({ error: 'version must 
 export function familyRoutes(ds: DataSource): RouteSpec[] {
   const team = (req: Request) => requireTeam(req);
   return [
-    route('get', '/families', anyMember, async (req, res) => {
+    route('get', '/families', objectReaders.family, async (req, res) => {
       res.json(await listFamilies(ds, team(req), req.query.archived === '1'));
     }),
     route('post', '/families', designers, body(createFamilyRequestSchema), async (req, res) => {
@@ -32,10 +34,10 @@ export function familyRoutes(ds: DataSource): RouteSpec[] {
       const meta = parseOrThrow(uploadMeta, req.body ?? {});
       return saveUpload(ds, team(req), fileOf(req), meta, actorName(req));
     }, 201)),
-    route('get', '/families/:id', anyMember, async (req, res) => {
+    route('get', '/families/:id', objectReaders.family, async (req, res) => {
       res.json(await getFamily(ds, team(req), req.params.id));
     }),
-    route('get', '/families/:id/versions/:version', anyMember, async (req, res) => {
+    route('get', '/families/:id/versions/:version', objectReaders.family, async (req, res) => {
       const { version } = parseOrThrow(versionQuery, { version: req.params.version });
       res.json(await getFamily(ds, team(req), req.params.id, version));
     }),
@@ -46,12 +48,12 @@ export function familyRoutes(ds: DataSource): RouteSpec[] {
       res.status(201).json({ family: await duplicateFamily(ds, team(req), req.params.id, res.locals.body, actorName(req)) });
     }),
     route('post', '/families/:id/archive', designers, async (req, res) => {
-      res.json({ family: await setArchived(ds, team(req), req.params.id, true) });
+      res.json({ family: await setArchived(ds, team(req), auditWho(req), req.params.id, true) });
     }),
     route('post', '/families/:id/unarchive', designers, async (req, res) => {
-      res.json({ family: await setArchived(ds, team(req), req.params.id, false) });
+      res.json({ family: await setArchived(ds, team(req), auditWho(req), req.params.id, false) });
     }),
-    ...(['csv', 'json'] as const).map((format) => route('get', `/families/:id/export.${format}`, anyMember, async (req, res) => {
+    ...(['csv', 'json'] as const).map((format) => route('get', `/families/:id/export.${format}`, objectReaders.family, async (req, res) => {
       const { version } = parseOrThrow(versionQuery, req.query);
       const out = await exportFamily(ds, team(req), req.params.id, format, version);
       res.type(format === 'csv' ? 'text/csv' : 'application/json').attachment(out.filename).send(out.body);

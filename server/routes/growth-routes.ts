@@ -1,7 +1,10 @@
 import { z } from 'zod';
 import type { Role } from '../../shared/api';
 import { closeOrderSchema, growthStateChangeSchema, releaseRequestSchema, sheetSettingsSchema } from '../../shared/api';
-import { anyMember, designers, requireTeam, requireUser } from '../http/access';
+import { designers, requireTeam, requireUser } from '../http/access';
+import { auditWho } from '../http/audit-who';
+import { objectReaders } from '../http/object-access';
+import { recordAudit } from '../audit/audit-log';
 import { route, type RouteSpec } from '../http/route-table';
 import { fileOf, uploadThen } from '../http/upload';
 import { body, parseOrThrow } from '../http/validate';
@@ -17,12 +20,12 @@ export function growthRoutes(d: GrowthDeps): RouteSpec[] {
   const { ds } = d;
   return [
     route('post', '/runs/:id/release', designers, body(releaseRequestSchema), async (req, res) => {
-      res.status(201).json({ order: await releaseRun(d, requireTeam(req), requireUser(req), req.params.id, res.locals.body) });
+      res.status(201).json({ order: await releaseRun(d, requireTeam(req), requireUser(req), auditWho(req), req.params.id, res.locals.body) });
     }),
-    route('get', '/growth-orders', anyMember, async (req, res) => {
+    route('get', '/growth-orders', objectReaders.growth, async (req, res) => {
       res.json({ orders: await listOrders(ds, requireTeam(req)) });
     }),
-    route('get', '/growth-orders/:id', anyMember, async (req, res) => {
+    route('get', '/growth-orders/:id', objectReaders.growth, async (req, res) => {
       res.json(await orderDetail(ds, requireTeam(req), req.params.id));
     }),
     route('put', '/growth-orders/:id/state', growers, body(growthStateChangeSchema), async (req, res) => {
@@ -41,8 +44,10 @@ export function growthRoutes(d: GrowthDeps): RouteSpec[] {
       const { temperature } = parseOrThrow(temperatureField, req.body ?? {});
       return { report: await uploadMeasurements(d, requireTeam(req), requireUser(req), req.params.id, () => fileOf(req), temperature) };
     }, 201)),
-    ...(['csv', 'json'] as const).map((format) => route('get', `/growth-orders/:id/sheet.${format}`, anyMember, async (req, res) => {
+    ...(['csv', 'json'] as const).map((format) => route('get', `/growth-orders/:id/sheet.${format}`, objectReaders.growth, async (req, res) => {
       const out = await exportSheet(ds, requireTeam(req), req.params.id, format);
+      // Recorded before the sheet leaves: no export goes unrecorded.
+      await recordAudit(ds, auditWho(req), { action: 'sheet-exported', summary: `exported the growth sheet ${out.filename}`, subjectId: String(req.params.id) });
       res.type(format === 'csv' ? 'text/csv' : 'application/json').attachment(out.filename).send(out.body);
     })),
   ];

@@ -3,6 +3,7 @@ import type { FamiliesResponse, FamilyDetailResponse, FamilySummary } from '../.
 import type { createFamilyRequestSchema, updateFamilyRequestSchema, duplicateFamilyRequestSchema } from '../../shared/api';
 import type { MaterialInput } from '../../shared/engine';
 import type { z } from 'zod';
+import { recordAudit, type AuditWho } from '../audit/audit-log';
 import { MaterialFamily, MaterialFamilyVersion, Team } from '../db/entities';
 import { HttpError, ValidationError } from '../http/errors';
 import { publishEvent } from '../db/events';
@@ -121,11 +122,13 @@ export async function duplicateFamily(ds: DataSource, team: Team, id: unknown, i
   }));
 }
 
-export async function setArchived(ds: DataSource, team: Team, id: unknown, archived: boolean): Promise<FamilySummary> {
+export async function setArchived(ds: DataSource, team: Team, who: AuditWho, id: unknown, archived: boolean): Promise<FamilySummary> {
   return announceFamily(ds, team, await ds.transaction(async (m) => {
     const f = await findFamily(m, team, id, true);
+    const changed = f.archived !== archived;
     f.archived = archived;
     const saved = await m.getRepository(MaterialFamily).save(f);
+    if (changed) await recordAudit(m, who, { action: archived ? 'family-archived' : 'family-unarchived', summary: `${archived ? 'archived' : 'restored'} the family ${f.name}`, subjectId: f.id });
     return summarise(saved, await findVersion(m, saved));
   }));
 }

@@ -7,6 +7,7 @@ import { growerStates } from '../../shared/api';
 import type { GrowthSheet } from '../../shared/growth/growth-sheet';
 import { inApiThread } from './api-threads';
 import type { ReportThreadAnswer, ReportThreadInput } from './report-thread';
+import { recordAudit, type AuditWho } from '../audit/audit-log';
 import { GrowthOrder, Run, Team } from '../db/entities';
 import { HttpError, NotFoundError, ValidationError } from '../http/errors';
 import { isUuid } from '../http/validate';
@@ -59,7 +60,7 @@ async function mailRoles(ds: DataSource, team: Team, roles: string[]): Promise<s
 }
 
 /** A converged run's profile becomes a growth order; its sheet is computed by a worker. */
-export async function releaseRun(d: GrowthDeps, team: Team, actor: Actor, runId: unknown, input: z.output<typeof releaseRequestSchema>): Promise<GrowthOrderDto> {
+export async function releaseRun(d: GrowthDeps, team: Team, actor: Actor, who: AuditWho, runId: unknown, input: z.output<typeof releaseRequestSchema>): Promise<GrowthOrderDto> {
   const order = await d.ds.transaction(async (m) => {
     const run = await findRun(m, team, runId);
     const result = run.result as { doping?: unknown } | null;
@@ -69,6 +70,7 @@ export async function releaseRun(d: GrowthDeps, team: Team, actor: Actor, runId:
     const o = await m.getRepository(GrowthOrder).save(m.getRepository(GrowthOrder).create({ ...input, dueDate: input.dueDate ?? null, teamId: team.id, runId: run.id, releasedBy: actor.id, state: 'requested', sheetStatus: 'computing' }));
     await event(m, o.id, actor.displayName, 'released', null, 'requested', input.notes);
     await sendSheetJob(d.boss, m, o.id);
+    await recordAudit(m, who, { action: 'order-released', summary: `released run ${run.id.slice(0, 8)} of ${String(run.designSnapshot.name)} to growth as batch ${o.batch}`, subjectId: o.id });
     return { o, designName: String(run.designSnapshot.name) };
   });
   const growers = await mailRoles(d.ds, team, ['grower']);

@@ -3,6 +3,7 @@ import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { z } from 'zod';
 import type { LegSource, ModuleCsvVersus, ModuleDesign as ModuleDto, ModuleSummary, moduleInputSchema } from '../../shared/api';
 import { legsFromRun, type LegDefinitionInput, type RunResultLegs } from '../../shared/engine';
+import { recordAudit, type AuditWho } from '../audit/audit-log';
 import { MaterialFamily, ModuleDesign, Run, Team } from '../db/entities';
 import { NotFoundError, ValidationError } from '../http/errors';
 import { isUuid } from '../http/validate';
@@ -117,9 +118,12 @@ export async function saveModule(ds: DataSource, team: Team, by: string, input: 
 }
 
 /** Delete a saved module (runs and families it was built from are untouched). */
-export async function deleteModule(ds: DataSource, team: Team, id: unknown): Promise<void> {
+export async function deleteModule(ds: DataSource, team: Team, who: AuditWho, id: unknown): Promise<void> {
   await ds.transaction(async (m) => {
-    await m.getRepository(ModuleDesign).remove(await findModule(m, team, id));
+    const module = await findModule(m, team, id);
+    const moduleId = module.id;
+    await m.getRepository(ModuleDesign).remove(module);
+    await recordAudit(m, who, { action: 'module-deleted', summary: `deleted the module ${module.name}`, subjectId: moduleId });
   });
 }
 

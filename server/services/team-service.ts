@@ -1,20 +1,24 @@
 import { randomBytes } from 'node:crypto';
+import type PgBoss from 'pg-boss';
 import { IsNull, type DataSource, type EntityManager } from 'typeorm';
 import type { InvitationPreview, Member, Role, TeamResponse } from '../../shared/api';
+import { recordAudit, type AuditWho } from '../audit/audit-log';
+import { anonymousLimits } from '../auth/limits';
 import type { Auth } from '../auth/lucia';
 import { hashPassword } from '../auth/passwords';
+import { consume } from '../auth/rate-limit';
 import { hashToken, newToken } from '../auth/tokens';
 import { AppUser, Invitation, Team } from '../db/entities';
 import { HttpError, NotFoundError, ValidationError } from '../http/errors';
 import { isUuid } from '../http/validate';
-import type { Mailer } from '../mail/mailer';
-import { invitationMail } from '../mail/templates';
+import { enqueueAccountMail } from '../queue/account-mail-queue';
 import { announceAccountEnded } from '../realtime/session-end';
 import { activeByEmail } from './active-accounts';
+import { checkInvitationLimits } from './invitation-limits';
 
 const INVITE_DAYS = 7;
 
-export type TeamDeps = { ds: DataSource; auth: Auth; mailer: Mailer; appOrigin: string };
+export type TeamDeps = { ds: DataSource; auth: Auth; boss: PgBoss; appOrigin: string };
 
 function stateOf(i: Invitation): 'pending' | 'accepted' | 'revoked' | 'expired' {
   if (i.acceptedAt) return 'accepted';
@@ -37,47 +41,70 @@ export async function teamOverview(ds: DataSource, team: Team): Promise<TeamResp
   };
 }
 
-export async function invite(d: TeamDeps, team: Team, inviter: { id: string; displayName: string }, email: string, role: Role): Promise<void> {
-  if (await activeByEmail(d.ds.manager, email).getExists()) {
-    throw new ValidationError([{ field: 'email', message: 'this address already has a Frostgrade account (one team per account)' }]);
-  }
-  const { token, hash } = newToken();
-  const expiresAt = new Date(Date.now() + INVITE_DAYS * 24 * 3600 * 1000);
-  await d.ds.getRepository(Invitation).insert({ teamId: team.id, email, role, tokenHash: hash, invitedBy: inviter.id, expiresAt, acceptedAt: null, revokedAt: null });
-  await d.mailer.send(invitationMail(email, { teamName: team.name, inviter: inviter.displayName, role, link: `${d.appOrigin}/join?token=${token}`, expiresAt }));
+/**
+ * The same for every address, so an admin cannot learn who has an account:
+ * the invitation is listed as pending and a worker mails either its link or,
+ * to an address that has an account, a note to its owner. The team's limits
+ * are checked under a per-team lock, so racing invitations cannot pass them.
+ */
+export async function invite(d: TeamDeps, team: Team, who: AuditWho & { actorId: string }, email: string, role: Role): Promise<void> {
+  await d.ds.transaction(async (m) => {
+    await m.query('SELECT pg_advisory_xact_lock(hashtext($1))', [`team-invitations:${team.id}`]);
+    await checkInvitationLimits(m, team.id);
+    // A hash of a token nobody holds: the worker stores the one it mails (server/mail/account-mail.ts).
+    const placeholder = newToken().hash;
+    const expiresAt = new Date(Date.now() + INVITE_DAYS * 24 * 3600 * 1000);
+    const [row]: Array<{ id: string }> = await m.query(
+      `INSERT INTO invitation (team_id, email, role, token_hash, invited_by, expires_at) VALUES ($1, $2, $3, $4, $5, $6) RETURNING id`,
+      [team.id, email, role, placeholder, who.actorId, expiresAt]);
+    await enqueueAccountMail(d.boss, { kind: 'invitation', invitationId: row!.id }, m);
+    await recordAudit(m, who, { action: 'invitation-sent', summary: `invited ${email} as ${role}`, email, subjectId: row!.id });
+  });
 }
 
-export async function revokeInvitation(ds: DataSource, team: Team, id: unknown): Promise<void> {
+export async function revokeInvitation(ds: DataSource, team: Team, who: AuditWho, id: unknown): Promise<void> {
   if (!isUuid(id)) throw new NotFoundError('invitation');
-  const r = await ds.getRepository(Invitation).createQueryBuilder().update().set({ revokedAt: () => 'now()' })
-    .where('id = :id AND team_id = :team AND accepted_at IS NULL AND revoked_at IS NULL', { id, team: team.id }).execute();
-  if (!r.affected) throw new NotFoundError('pending invitation');
+  await ds.transaction(async (m) => {
+    const [rows]: [Array<{ email: string }>, number] = await m.query(
+      `UPDATE invitation SET revoked_at = now() WHERE id = $1 AND team_id = $2 AND accepted_at IS NULL AND revoked_at IS NULL RETURNING email`, [id, team.id]);
+    const revoked = rows[0];
+    if (!revoked) throw new NotFoundError('pending invitation');
+    await recordAudit(m, who, { action: 'invitation-revoked', summary: `revoked the invitation of ${revoked.email}`, email: revoked.email, subjectId: id });
+  });
 }
 
-async function usableInvitation(ds: DataSource, token: string): Promise<Invitation> {
-  const inv = await ds.getRepository(Invitation).findOneBy({ tokenHash: hashToken(token) });
+async function usableInvitation(m: EntityManager, token: string, lock = false): Promise<Invitation> {
+  const qb = m.getRepository(Invitation).createQueryBuilder('i').where('i.tokenHash = :h', { h: hashToken(token) });
+  if (lock) qb.setLock('pessimistic_write');
+  const inv = await qb.getOne();
   if (!inv || stateOf(inv) !== 'pending') throw new ValidationError([{ field: 'token', message: 'this invitation link is invalid, used, revoked or expired: ask your admin for a new one' }]);
   return inv;
 }
 
-export async function previewInvitation(ds: DataSource, token: string): Promise<InvitationPreview> {
-  const inv = await usableInvitation(ds, token);
+export async function previewInvitation(ds: DataSource, token: string, ip: string): Promise<InvitationPreview> {
+  await consume(ds, anonymousLimits.linkPreview(ip));
+  const inv = await usableInvitation(ds.manager, token);
   const team = await ds.getRepository(Team).findOneByOrFail({ id: inv.teamId });
   return { email: inv.email, role: inv.role, teamName: team.name, expiresAt: inv.expiresAt.toISOString() };
 }
 
-/** Creates the account in the inviting team; the token works once. */
-export async function acceptInvitation(d: TeamDeps, input: { token: string; password: string; displayName: string }): Promise<{ sessionId: string }> {
+/**
+ * Creates the account in the inviting team; the link works once. It is
+ * checked before the password is hashed, so a bad link costs no hashing.
+ */
+export async function acceptInvitation(d: TeamDeps, input: { token: string; password: string; displayName: string }, ip: string): Promise<{ sessionId: string }> {
+  await consume(d.ds, anonymousLimits.invitationAccept(ip));
+  await usableInvitation(d.ds.manager, input.token);
   const passwordHash = await hashPassword(input.password);
   const userId = await d.ds.transaction(async (m) => {
-    const inv = await m.getRepository(Invitation).createQueryBuilder('i').setLock('pessimistic_write').where('i.tokenHash = :h', { h: hashToken(input.token) }).getOne();
-    if (!inv || stateOf(inv) !== 'pending') throw new ValidationError([{ field: 'token', message: 'this invitation link is invalid, used, revoked or expired: ask your admin for a new one' }]);
+    const inv = await usableInvitation(m, input.token, true);
     if (await activeByEmail(m, inv.email).getExists()) {
       throw new ValidationError([{ field: 'token', message: 'this address already has an account: sign in instead' }]);
     }
     const id = randomBytes(15).toString('base64url');
     await m.getRepository(AppUser).insert({ id, teamId: inv.teamId, email: inv.email, displayName: input.displayName, passwordHash, role: inv.role });
     await m.getRepository(Invitation).update({ id: inv.id }, { acceptedAt: new Date() });
+    await recordAudit(m, { teamId: inv.teamId, actorId: id, actorName: input.displayName, ip }, { action: 'invitation-accepted', summary: `joined the team as ${inv.role}`, email: inv.email, subjectId: inv.id });
     return id;
   });
   return { sessionId: (await d.auth.createSession(userId, {})).id };
@@ -98,7 +125,7 @@ async function memberOf(m: EntityManager, team: Team, id: string): Promise<AppUs
 }
 
 /** A new role applies to the next request at once; open sockets reconnect to carry it. */
-export async function changeRole(d: Pick<TeamDeps, 'ds'>, team: Team, id: string, role: Role): Promise<void> {
+export async function changeRole(d: Pick<TeamDeps, 'ds'>, team: Team, who: AuditWho, id: string, role: Role): Promise<void> {
   await d.ds.transaction(async (m) => {
     await m.query('SELECT pg_advisory_xact_lock(hashtext($1))', [`team-admins:${team.id}`]);
     const member = await memberOf(m, team, id);
@@ -106,6 +133,7 @@ export async function changeRole(d: Pick<TeamDeps, 'ds'>, team: Team, id: string
     if (member.role === role) return;
     await m.getRepository(AppUser).update({ id: member.id }, { role });
     await announceAccountEnded(m, team.id, { userId: member.id, reason: 'role' });
+    await recordAudit(m, who, { action: 'role-changed', summary: `changed the role of ${member.displayName} from ${member.role} to ${role}`, email: member.email, subjectId: member.id });
   });
 }
 
@@ -114,7 +142,7 @@ export async function changeRole(d: Pick<TeamDeps, 'ds'>, team: Team, id: string
  * events keep the person's name; it no longer signs in, owns its address,
  * follows designs or receives mail, and its sessions and sockets end now.
  */
-export async function removeMember(d: Pick<TeamDeps, 'ds'>, team: Team, id: string): Promise<void> {
+export async function removeMember(d: Pick<TeamDeps, 'ds'>, team: Team, who: AuditWho, id: string): Promise<void> {
   await d.ds.transaction(async (m) => {
     await m.query('SELECT pg_advisory_xact_lock(hashtext($1))', [`team-admins:${team.id}`]);
     const member = await memberOf(m, team, id);
@@ -124,5 +152,6 @@ export async function removeMember(d: Pick<TeamDeps, 'ds'>, team: Team, id: stri
     await m.query('UPDATE password_reset SET used_at = now() WHERE user_id = $1 AND used_at IS NULL', [member.id]);
     await m.query('DELETE FROM user_session WHERE user_id = $1', [member.id]);
     await announceAccountEnded(m, team.id, { userId: member.id, reason: 'removed' });
+    await recordAudit(m, who, { action: 'member-removed', summary: `removed ${member.displayName} (${member.role}) from the team`, email: member.email, subjectId: member.id });
   });
 }

@@ -11,16 +11,30 @@ const email = z.string({ error: 'email is required' }).trim().toLowerCase().max(
 const password = z.string({ error: 'password is required' }).min(10, { error: 'password must be at least 10 characters' }).max(200, { error: 'password must be at most 200 characters' });
 const displayName = z.string({ error: 'displayName is required' }).trim().min(1, { error: 'displayName is required' }).max(80, { error: 'displayName is at most 80 characters' });
 
-export const signUpRequestSchema = z.strictObject({
-  email,
-  password,
-  displayName,
-  teamName: z.string({ error: 'teamName is required' }).trim().min(2, { error: 'teamName needs at least 2 characters' }).max(120),
+const teamName = z.string({ error: 'teamName is required' }).trim().min(2, { error: 'teamName needs at least 2 characters' }).max(120, { error: 'teamName is at most 120 characters' });
+const token = z.string({ error: 'token is missing or malformed' }).min(20, { error: 'token is missing or malformed' }).max(200, { error: 'token is missing or malformed' });
+
+/**
+ * Sign-up, step one: answered 202 "check your inbox" whatever the address;
+ * the link mailed to it (or, for an address with an account, a note to its
+ * owner) leads to step two, where the password is chosen.
+ */
+export const signUpRequestSchema = z.strictObject({ email, displayName, teamName });
+/** Sign-up, step two: the mailed single-use link and the password; makes the team and the account and signs in. */
+export const signUpConfirmSchema = z.strictObject({ token, password });
+/** `GET /api/sign-up/:token` — what the confirm page shows before the account is made. */
+export const signUpPreviewSchema = z.object({ email: z.string(), displayName: z.string(), teamName: z.string(), expiresAt: isoDateTimeSchema });
+/** The one answer of every anonymous request that mails something: it never says whether the address has an account. */
+export const mailQueuedSchema = z.object({ message: z.string() });
+/** Signed in: a new password, proven by the current one; every other session ends. */
+export const changePasswordSchema = z.strictObject({
+  currentPassword: z.string({ error: 'currentPassword is required' }).min(1, { error: 'currentPassword is required' }).max(200, { error: 'currentPassword is at most 200 characters' }),
+  newPassword: password,
 });
 export const signInRequestSchema = z.strictObject({ email, password: z.string({ error: 'password is required' }).min(1, { error: 'password is required' }).max(200) });
 export const resetRequestSchema = z.strictObject({ email });
-export const resetConfirmSchema = z.strictObject({ token: z.string().min(20, { error: 'token is missing or malformed' }).max(200), password });
-export const acceptInvitationSchema = z.strictObject({ token: z.string().min(20, { error: 'token is missing or malformed' }).max(200), password, displayName });
+export const resetConfirmSchema = z.strictObject({ token, password });
+export const acceptInvitationSchema = z.strictObject({ token, password, displayName });
 export const inviteRequestSchema = z.strictObject({ email, role: roleSchema });
 export const changeRoleRequestSchema = z.strictObject({ role: roleSchema });
 
@@ -44,6 +58,9 @@ export const teamResponseSchema = z.object({ members: z.array(memberSchema), inv
 export const invitationPreviewSchema = z.object({ email: z.string(), role: roleSchema, teamName: z.string(), expiresAt: isoDateTimeSchema });
 
 export type SignUpRequest = z.input<typeof signUpRequestSchema>;
+export type SignUpConfirm = z.input<typeof signUpConfirmSchema>;
+export type SignUpPreview = z.infer<typeof signUpPreviewSchema>;
+export type ChangePasswordRequest = z.input<typeof changePasswordSchema>;
 export type SignInRequest = z.input<typeof signInRequestSchema>;
 export type MeResponse = z.infer<typeof meResponseSchema>;
 export type Member = z.infer<typeof memberSchema>;
@@ -53,8 +70,14 @@ export type InvitationPreview = z.infer<typeof invitationPreviewSchema>;
 
 /**
  * Between processes (PostgreSQL NOTIFY → socket server), never sent to a
- * browser: this member's sockets must close, because they were removed or
- * their role changed (a reconnect then carries the new role).
+ * browser: this member's sockets must close, because they were removed,
+ * their role changed (a reconnect then carries the new role), their password
+ * changed or was reset, or they signed out everywhere. With `sessionId`
+ * (a sign-out) only the sockets opened with that session close.
  */
-export const accountEndedSchema = z.object({ userId: z.string(), reason: z.enum(['removed', 'role']) });
+export const accountEndedSchema = z.object({
+  userId: z.string(),
+  reason: z.enum(['removed', 'role', 'signed-out', 'password', 'sessions-ended']),
+  sessionId: z.string().optional(),
+});
 export type AccountEnded = z.infer<typeof accountEndedSchema>;

@@ -10,3 +10,5 @@ export * from './runs';
 export * from './growth';
 export * from './modules';
 export * from './growth-documents';
+export * from './account-mail';
+export * from './audit';

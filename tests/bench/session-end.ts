@@ -1,6 +1,7 @@
 /**
  * Session-end figures for `npm run bench` (printed, never asserted): how long
- * after an admin sends a role change or a removal the member's browser socket
+ * after an admin sends a role change or a removal, or the member signs out,
+ * signs out everywhere or changes their password, the member's browser socket
  * is closed by the server (NOTIFY at commit → socket server → disconnect).
  * Its own database on the test cluster (PG_PORT / PG_DATA_ROOT respected);
  * the API and the socket server run in this process, as in the server tests.
@@ -11,6 +12,7 @@ import { createServer } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { io as connect, type Socket } from 'socket.io-client';
 import { createAuth } from '../../server/auth/auth-pool';
+import { hashPassword } from '../../server/auth/passwords';
 import { readEnv } from '../../server/config/env';
 import { createDataSource } from '../../server/db/data-source';
 import { createApp } from '../../server/http/app';
@@ -41,23 +43,26 @@ async function main(): Promise<void> {
   const cookieOf = async (userId: string) => auth.createSessionCookie((await auth.createSession(userId, {})).id).serialize();
   const [admin] = await ds.query(`SELECT id, team_id FROM app_user WHERE email = 'ada@northlight.example'`);
   const adminCookie = await cookieOf(admin.id);
-  const send = (method: string, path: string, body?: unknown) =>
-    fetch(`${url}/api${path}`, { method, headers: { cookie: adminCookie, origin: env.appOrigin, 'content-type': 'application/json' }, body: body ? JSON.stringify(body) : undefined });
+  const send = (method: string, path: string, body?: unknown, cookie = adminCookie) =>
+    fetch(`${url}/api${path}`, { method, headers: { cookie, origin: env.appOrigin, 'content-type': 'application/json' }, body: body ? JSON.stringify(body) : undefined });
+  const memberPassword = 'a bench member passphrase';
+  const memberHash = await hashPassword(memberPassword);
 
   /** A fresh member with an open socket, straight into the database (no invitation mail needed here). */
-  const member = async (): Promise<{ id: string; socket: Socket }> => {
+  const member = async (): Promise<{ id: string; cookie: string; socket: Socket }> => {
     const id = randomBytes(15).toString('base64url');
-    await ds.query(`INSERT INTO app_user (id, team_id, email, display_name, password_hash, role) VALUES ($1, $2, $3, 'Bench member', '!', 'viewer')`, [id, admin.team_id, `bench.${id}@example.test`]);
-    const socket = connect(url, { transports: ['websocket'], extraHeaders: { cookie: await cookieOf(id), origin: env.appOrigin }, reconnection: false, forceNew: true });
+    await ds.query(`INSERT INTO app_user (id, team_id, email, display_name, password_hash, role) VALUES ($1, $2, $3, 'Bench member', $4, 'viewer')`, [id, admin.team_id, `bench.${id}@example.test`, memberHash]);
+    const cookie = await cookieOf(id);
+    const socket = connect(url, { transports: ['websocket'], extraHeaders: { cookie, origin: env.appOrigin }, reconnection: false, forceNew: true });
     await new Promise<void>((resolve, reject) => { socket.once('connect', () => resolve()); socket.once('connect_error', reject); });
-    return { id, socket };
+    return { id, cookie, socket };
   };
   /** Milliseconds from sending the request to the server closing the socket. */
-  const lag = async (act: (id: string) => Promise<Response>): Promise<number> => {
-    const { id, socket } = await member();
+  const lag = async (act: (id: string, cookie: string) => Promise<Response>): Promise<number> => {
+    const { id, cookie, socket } = await member();
     const closed = new Promise<number>((resolve) => socket.once('disconnect', () => resolve(performance.now())));
     const t0 = performance.now();
-    const res = await act(id);
+    const res = await act(id, cookie);
     if (!res.ok) throw new Error(`answered ${res.status}: ${await res.text()}`);
     const lagMs = (await closed) - t0;
     socket.disconnect();
@@ -68,6 +73,10 @@ async function main(): Promise<void> {
   for (const [label, act] of [
     ['role change', (id: string) => send('PUT', `/team/members/${id}/role`, { role: 'physicist' })],
     ['removal', (id: string) => send('DELETE', `/team/members/${id}`)],
+    ['sign-out', (_id: string, cookie: string) => send('POST', '/auth/sign-out', undefined, cookie)],
+    ['sign out everywhere', (_id: string, cookie: string) => send('POST', '/auth/sign-out-everywhere', undefined, cookie)],
+    // Includes verifying the current password and hashing the new one (argon2, twice).
+    ['password change', (_id: string, cookie: string) => send('POST', '/auth/password', { currentPassword: memberPassword, newPassword: 'a new bench passphrase' }, cookie)],
   ] as const) {
     const lags: number[] = [];
     for (let i = 0; i < rounds; i += 1) lags.push(await lag(act));

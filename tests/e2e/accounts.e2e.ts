@@ -11,6 +11,7 @@ import {
   shellNav,
   signIn,
   signInAs,
+  waitForCapturedMail,
   waitForMail,
   waitForVisibleText,
   type BrowserSession,
@@ -29,7 +30,7 @@ const visible = (page: Page, testId: string) => page.getByTestId(testId).filter(
 /** An invited, accepted member with a known password, made through the API (no browser). */
 async function makeMember(adminSession: BrowserSession, email: string, password: string): Promise<void> {
   await postJsonAs(adminSession, '/api/team/invitations', { email, role: 'viewer' });
-  const token = new URL(linkIn((await waitForMail(adminSession, email, /invites you/)).text, '/join')).searchParams.get('token');
+  const token = new URL(linkIn((await waitForMail(adminSession, email, /invited to join a team/)).text, '/join')).searchParams.get('token');
   const api = await request.newContext();
   const answer = await api.post(`${baseUrl}/api/invitations/accept`, {
     data: { token, password, displayName: `Test ${email.split('@')[0]}` },
@@ -37,6 +38,13 @@ async function makeMember(adminSession: BrowserSession, email: string, password:
   });
   await api.dispose();
   if (answer.status() !== 201) throw new Error(`accepting the invitation answered ${answer.status()}`);
+}
+
+/** Signs in on a page and opens the growth list, which keeps a socket open (the server closes it when the session ends). */
+async function signInToLivePage(page: Page, email: string, password: string): Promise<void> {
+  await signIn(page, email, password);
+  await page.goto(`${baseUrl}/growth`);
+  await shellNav(page).waitFor({ state: 'visible', timeout: 30_000 });
 }
 
 describe('accounts in a real browser', () => {
@@ -63,7 +71,7 @@ describe('accounts in a real browser', () => {
     await expectText(visible(adminPage, `invitation-${grower}`), /GROWER[\s\S]*Pending/);
     await saveScreenshot(adminPage, 'team-admin-desktop');
 
-    const mail = await waitForMail(adminSession, grower, /invites you to/);
+    const mail = await waitForMail(adminSession, grower, /invited to join a team/);
     const link = linkIn(mail.text, '/join');
     expect(link.startsWith(`${baseUrl}/join?token=`)).toBe(true);
 
@@ -122,10 +130,8 @@ describe('accounts in a real browser', () => {
     const leaver = await openBrowser();
     try {
       const theirs = await leaver.newPage('phone');
-      await signIn(theirs, member, password);
-      // The growth page keeps a socket open: the server closes it on removal.
-      await theirs.goto(`${baseUrl}/growth`);
-      await shellNav(theirs).waitFor({ state: 'visible', timeout: 30_000 });
+      // The server closes its socket on removal.
+      await signInToLivePage(theirs, member, password);
 
       const page = await adminSession.newPage('desktop');
       await page.goto(`${baseUrl}/team`);
@@ -258,13 +264,31 @@ describe('accounts in a real browser', () => {
       await visible(page, 'link-sign-up').click();
       await page.waitForURL(`${baseUrl}/sign-up`);
       await visible(page, 'field-displayName').fill('Fern Founder');
-      await visible(page, 'field-email').fill(founder);
+      await visible(page, 'field-email').fill('not an address');
       await visible(page, 'field-teamName').fill(`Founders lab ${run}`);
+      await visible(page, 'submit-sign-up').click();
+      await expectText(visible(page, 'error-email'), /Not a valid address/);
+      await visible(page, 'field-email').fill(founder);
+      await visible(page, 'submit-sign-up').click();
+      // Step one ends here, the same for every address: check your inbox.
+      await expectText(visible(page, 'sign-up-requested'), new RegExp(`We sent an e-mail to ${founder}`));
+      await saveScreenshot(page, 'sign-up-check-inbox-desktop');
+
+      // The address belongs to no team yet, so no outbox shows it: read the catcher's table.
+      const link = linkIn((await waitForCapturedMail(founder, /Finish creating your Frostgrade account/)).text, '/confirm-sign-up');
+      expect(link.startsWith(`${baseUrl}/confirm-sign-up?token=`)).toBe(true);
+      const phone = await visitor.newPage('phone');
+      await phone.goto(link);
+      await expectText(visible(phone, 'sign-up-summary'), new RegExp(`Founders lab ${run}[\\s\\S]*Fern Founder, admin[\\s\\S]*${founder}`));
+      await saveScreenshot(phone, 'confirm-sign-up-phone');
+      await phone.close();
+      await page.goto(link);
       await visible(page, 'field-password').fill('short');
-      await visible(page, 'submit-sign-up').click();
+      await visible(page, 'submit-confirm-sign-up').click();
       await expectText(visible(page, 'error-password'), /at least 10 characters/);
+      await saveScreenshot(page, 'confirm-sign-up-desktop');
       await visible(page, 'field-password').fill('a long enough founding phrase');
-      await visible(page, 'submit-sign-up').click();
+      await visible(page, 'submit-confirm-sign-up').click();
 
       await shellNav(page).waitFor({ state: 'visible', timeout: 30_000 });
       await expectText(visible(page, 'account-panel'), new RegExp(`Fern Founder[\\s\\S]*ADMIN[\\s\\S]*Founders lab ${run}`));
@@ -284,6 +308,80 @@ describe('accounts in a real browser', () => {
     } finally {
       await visitor.close();
     }
+  });
+
+  it('changes the password on the account page and signs out everywhere; open pages elsewhere are signed out at once', async () => {
+    const member = fresh('changer');
+    const password = 'the changer first passphrase';
+    const newPassword = 'the changer second passphrase';
+    await makeMember(adminSession, member, password);
+    const phoneBrowser = await openBrowser();
+    const deskBrowser = await openBrowser();
+    try {
+      const phone = await phoneBrowser.newPage('phone');
+      // The server closes its socket when the password changes.
+      await signInToLivePage(phone, member, password);
+
+      const desk = await deskBrowser.newPage('desktop');
+      await signIn(desk, member, password);
+      await visible(desk, 'open-account').click();
+      await desk.waitForURL(`${baseUrl}/account`);
+      await expectText(visible(desk, 'account-who'), new RegExp(`${member}[\\s\\S]*VIEWER`));
+      await visible(desk, 'field-currentPassword').fill('not the password at all');
+      await visible(desk, 'field-newPassword').fill(newPassword);
+      await visible(desk, 'submit-password').click();
+      await expectText(visible(desk, 'error-currentPassword'), /This is not your current password/);
+      await visible(desk, 'field-currentPassword').fill(password);
+      await visible(desk, 'submit-password').click();
+      await expectText(visible(desk, 'password-changed'), /Every other session of your account was signed out; this one stays/);
+      await saveScreenshot(desk, 'account-password-changed-desktop');
+      await waitForMail(adminSession, member, /Your Frostgrade password was changed/);
+
+      // The phone's session ended; its open page goes to sign-in by itself.
+      await phone.waitForURL(/\/sign-in/, { timeout: 15_000 });
+      await signIn(phone, member, newPassword);
+      await desk.goto(`${baseUrl}/growth`);
+      await shellNav(desk).waitFor({ state: 'visible', timeout: 30_000 });
+      await visible(phone, 'account-menu-button').click();
+      await visible(phone, 'open-account').click();
+      await phone.waitForURL(`${baseUrl}/account`);
+      await visible(phone, 'ask-sign-out-everywhere').click();
+      await expectText(visible(phone, 'confirm-sign-out-everywhere'), /Every session of your account ends at once, this one too/);
+      await visible(phone, 'confirm-sign-out-everywhere').scrollIntoViewIfNeeded();
+      await saveScreenshot(phone, 'account-sign-out-everywhere-phone');
+      await visible(phone, 'confirm-sign-out-everywhere').getByTestId('confirm').click();
+      await phone.getByRole('heading', { name: 'Sign in' }).filter({ visible: true }).waitFor();
+      // …and the desktop, signed in elsewhere, is signed out by the server at once.
+      await desk.waitForURL(/\/sign-in/, { timeout: 15_000 });
+      expect(phoneBrowser.pageErrors).toEqual([]);
+      expect(deskBrowser.pageErrors).toEqual([]);
+    } finally {
+      await phoneBrowser.close();
+      await deskBrowser.close();
+    }
+  });
+
+  it('shows admins the audit trail, on a desktop and on a phone, and exports it as CSV', async () => {
+    const desk = await adminSession.newPage('desktop');
+    await desk.goto(`${baseUrl}/team`);
+    await visible(desk, 'open-audit').click();
+    await desk.waitForURL(`${baseUrl}/team/audit`);
+    // Earlier tests invited members and changed passwords in this team.
+    await expectText(visible(desk, 'audit-list'), /INVITED[\s\S]*Ada Lindqvist invited/);
+    await expectText(visible(desk, 'audit-list'), /PASSWORD CHANGED/);
+    await saveScreenshot(desk, 'audit-desktop');
+    const href = await visible(desk, 'audit-csv').getAttribute('href');
+    expect(href).toMatch(/\/api\/audit\/export\.csv$/);
+    const csv = await adminSession.context.request.get(`${baseUrl}/api/audit/export.csv`);
+    expect(csv.status()).toBe(200);
+    expect((await csv.text()).split('\r\n')[0]).toBe('at_utc,action,actor,actor_id,email,subject_id,summary,ip');
+    await desk.close();
+
+    const phone = await adminSession.newPage('phone');
+    await phone.goto(`${baseUrl}/team/audit`);
+    await expectText(visible(phone, 'audit-list'), /INVITED/);
+    await saveScreenshot(phone, 'audit-phone');
+    await phone.close();
   });
 
   it('raised no uncaught errors in the admin pages', () => {

@@ -1,7 +1,9 @@
 import { mkdtempSync, mkdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
+import { Client } from 'pg';
 import { chromium, type BrowserContext, type Locator, type Page } from 'playwright-core';
+import { readEnv } from '../../server/config/env';
 import { familiesResponseSchema } from '../../shared/api/families';
 import { runDetailSchema } from '../../shared/api/runs';
 
@@ -254,6 +256,29 @@ export async function waitForMail(adminSession: BrowserSession, address: string,
     if (mine.length > 0) return mine[0];
     if (Date.now() > deadline) throw new Error(`no e-mail to ${address} matching ${subject} within ${timeout} ms`);
     await new Promise((resolve) => setTimeout(resolve, 300));
+  }
+}
+
+/**
+ * The newest e-mail to `address` straight from the test stack's catcher
+ * table (`captured_mail`), for mail no team's outbox shows — a sign-up link
+ * goes to an address that belongs to no team yet. Waits for it to arrive.
+ */
+export async function waitForCapturedMail(address: string, subject: RegExp, timeout = 20_000): Promise<{ subject: string; text: string }> {
+  const db = new Client({ connectionString: readEnv({ ...process.env, FROSTGRADE_PROFILE: 'test', NODE_ENV: 'test' }).databaseUrl });
+  await db.connect();
+  try {
+    const deadline = Date.now() + timeout;
+    for (;;) {
+      const { rows } = await db.query<{ subject: string; text: string }>(
+        'SELECT subject, text FROM captured_mail WHERE $1 = ANY(mail_to) ORDER BY received_at DESC', [address.toLowerCase()]);
+      const found = rows.find((m) => subject.test(m.subject));
+      if (found) return found;
+      if (Date.now() > deadline) throw new Error(`no e-mail to ${address} matching ${subject} within ${timeout} ms`);
+      await new Promise((resolve) => setTimeout(resolve, 300));
+    }
+  } finally {
+    await db.end();
   }
 }
 

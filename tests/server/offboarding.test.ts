@@ -1,10 +1,8 @@
-import { createServer, type Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
-import { io as connect, type Socket } from 'socket.io-client';
+import { randomUUID } from 'node:crypto';
+import type { Socket } from 'socket.io-client';
 import { growthOrderDetailSchema, growthOrdersResponseSchema, meResponseSchema, runsResponseSchema, teamResponseSchema } from '../../shared/api';
-import { attachRealtime } from '../../server/realtime/socket-server';
-import { watchRules } from '../../server/realtime/watch-rules';
-import { agent, demo, eventually, openContext, signedIn, type TestContext } from './context';
+import { accountMailDone, agent, agentAt, databaseNow, demo, eventually, mailTo, newTeam, openContext, signedIn, tokenIn as linkToken, type TestContext } from './context';
+import { socketServer, type SocketServer } from './sockets';
 
 /**
  * Offboarding against the real stack: the test stack's worker takes the
@@ -12,22 +10,15 @@ import { agent, demo, eventually, openContext, signedIn, type TestContext } from
  * server on the test's own HTTP server relays NOTIFY like the API does.
  */
 let ctx: TestContext;
-let http: Server;
-let url: string;
-let closeRealtime: () => Promise<void>;
-const sockets: Socket[] = [];
+let realtime: SocketServer;
 jest.setTimeout(240_000);
 
 beforeAll(async () => {
   ctx = await openContext();
-  http = createServer(ctx.app);
-  closeRealtime = (await attachRealtime(http, { auth: ctx.auth, databaseUrl: ctx.env.databaseUrl, appOrigin: ctx.env.appOrigin, allowLoopback: false }, watchRules(ctx.ds))).close;
-  await new Promise<void>((r) => http.listen(0, '127.0.0.1', r));
-  url = `http://127.0.0.1:${(http.address() as AddressInfo).port}`;
+  realtime = await socketServer(ctx);
 });
 afterAll(async () => {
-  for (const s of sockets) s.disconnect();
-  await closeRealtime();
+  await realtime.close();
   await ctx.close();
 });
 
@@ -35,26 +26,21 @@ type Api = ReturnType<typeof agent>;
 const password = 'a long enough passphrase';
 const fresh = (stem: string): string => `${stem}.${Date.now()}.${Math.round(Math.random() * 1e9)}@example.test`;
 
-const tokenIn = (text: string): string => /\/join\?token=([A-Za-z0-9_-]+)/.exec(text)![1]!;
-
 /** Invites an address into the demo lab and accepts; answers the member's own client, cookie and id. */
 async function join(admin: Api, email: string, role: string, displayName: string): Promise<{ api: Api; cookie: string; id: string }> {
+  const before = await databaseNow(ctx);
   expect((await admin.post('/api/team/invitations').send({ email, role })).status).toBe(201);
-  const mail = await eventually(async () => (await ctx.ds.query('SELECT text FROM captured_mail WHERE $1 = ANY(mail_to) ORDER BY received_at DESC LIMIT 1', [email]))[0] as { text: string } | undefined);
+  // The link goes out from a worker: wait for this invitation's mail, not an older one to the same address.
+  const mail = await mailTo(ctx, email, /invited to join a team/, { after: before });
   const api = agent(ctx);
-  const res = await api.post('/api/invitations/accept').send({ token: tokenIn(mail.text), password, displayName });
+  const res = await api.post('/api/invitations/accept').send({ token: linkToken(mail.text, '/join'), password, displayName });
   expect(res.status).toBe(201);
   const cookie = String(res.headers['set-cookie']).split(';')[0]!;
   return { api, cookie, id: meResponseSchema.parse(res.body).user.id };
 }
 
 /** A socket as the member's browser opens it: same cookie, the app's Origin; reconnecting is left to the test. */
-async function socketWith(cookie: string): Promise<Socket> {
-  const s = connect(url, { transports: ['websocket'], extraHeaders: { Origin: ctx.env.appOrigin, Cookie: cookie }, reconnection: false, forceNew: true });
-  sockets.push(s);
-  await new Promise<void>((resolve, reject) => { s.once('connect', () => resolve()); s.once('connect_error', reject); });
-  return s;
-}
+const socketWith = (cookie: string): Promise<Socket> => realtime.open(cookie);
 
 /** The reason socket.io gives for the next disconnect (sanity bound only: the point is that it comes). */
 const nextDisconnect = (s: Socket): Promise<string> => new Promise((resolve, reject) => {
@@ -137,8 +123,8 @@ it('removing a member who launched runs and released an order keeps the history,
   expect(team.members.map((m) => m.email)).not.toContain(email);
   expect((await admin.delete(`/api/team/members/${leaver.id}`)).status).toBe(404);
   expect((await admin.put(`/api/team/members/${leaver.id}/role`).send({ role: 'admin' })).status).toBe(404);
-  // No reset mail went out to the removed account.
-  await new Promise((r) => setTimeout(r, 500));
+  // No reset mail went out to the removed account: the worker has done the job and sent nothing.
+  expect(await accountMailDone(ctx, { kind: 'reset', email })).toMatch(/nothing sent/);
   expect(await ctx.ds.query(`SELECT 1 FROM captured_mail WHERE $1 = ANY(mail_to) AND subject LIKE '%Reset%'`, [email])).toEqual([]);
 
   // The address can be invited again; the new account is a new member, the old history keeps the old name.
@@ -169,4 +155,65 @@ it('a role change closes that member\'s sockets only; the reconnect carries the 
   expect(await new Promise((r) => mine.emit('watch', `family:${familyId}`, r))).toEqual({ ok: true });
   expect(otherDropped).toBe(false);
   expect(theirs.connected).toBe(true);
+});
+
+describe('a member\'s own sign-out, password reset, password change and "sign out everywhere" close their sockets', () => {
+  /** The same account signed in on a second device: its client and session cookie. */
+  async function secondDevice(email: string, password: string): Promise<{ api: Api; cookie: string }> {
+    const api = agentAt(ctx);
+    const res = await api.post('/api/auth/sign-in').send({ email, password });
+    expect(res.status).toBe(200);
+    return { api, cookie: String(res.headers['set-cookie']).split(';')[0]! };
+  }
+
+  /** Answers once the socket has done a round trip with the server: proof it is still connected. */
+  const stillConnected = (s: Socket): Promise<unknown> => new Promise((r) => s.emit('watch', `family:${randomUUID()}`, r));
+
+  it('signing out closes the sockets of that session only', async () => {
+    const me = await newTeam(ctx, { displayName: 'Two Devices' });
+    const other = await secondDevice(me.email, me.password);
+    const mine = await socketWith(me.cookie);
+    const theirs = await socketWith(other.cookie);
+    const disconnected = nextDisconnect(mine);
+    expect((await me.api.post('/api/auth/sign-out')).status).toBe(204);
+    expect(await disconnected).toBe('io server disconnect');
+    expect(await reconnect(mine)).toMatch(/sign in/);
+    // The other device's session is untouched, and so is its socket.
+    expect(await stillConnected(theirs)).toEqual({ ok: false, error: 'no such object' });
+    expect(theirs.connected).toBe(true);
+    expect((await other.api.get('/api/auth/me')).status).toBe(200);
+  });
+
+  it('a password reset closes every socket of the account; old sessions cannot reconnect', async () => {
+    const me = await newTeam(ctx, { displayName: 'Reset Sockets' });
+    const other = await secondDevice(me.email, me.password);
+    const sockets = [await socketWith(me.cookie), await socketWith(other.cookie)];
+    const disconnected = sockets.map(nextDisconnect);
+    expect((await agentAt(ctx).post('/api/auth/reset-request').send({ email: me.email })).status).toBe(202);
+    const token = linkToken((await mailTo(ctx, me.email, /Reset your/)).text, '/reset-password');
+    expect((await agentAt(ctx).post('/api/auth/reset').send({ token, password: 'a reset passphrase' })).status).toBe(204);
+    expect(await Promise.all(disconnected)).toEqual(['io server disconnect', 'io server disconnect']);
+    for (const s of sockets) expect(await reconnect(s)).toMatch(/sign in/);
+  });
+
+  it('a password change closes every socket; this session reconnects, the other device\'s cannot', async () => {
+    const me = await newTeam(ctx, { displayName: 'Change Sockets' });
+    const other = await secondDevice(me.email, me.password);
+    const [mine, theirs] = [await socketWith(me.cookie), await socketWith(other.cookie)];
+    const disconnected = [mine, theirs].map(nextDisconnect);
+    expect((await me.api.post('/api/auth/password').send({ currentPassword: me.password, newPassword: 'a changed passphrase' })).status).toBe(204);
+    expect(await Promise.all(disconnected)).toEqual(['io server disconnect', 'io server disconnect']);
+    expect(await reconnect(mine)).toBe('connected');
+    expect(await reconnect(theirs)).toMatch(/sign in/);
+  });
+
+  it('signing out everywhere closes every socket, and none reconnects', async () => {
+    const me = await newTeam(ctx, { displayName: 'Everywhere Sockets' });
+    const other = await secondDevice(me.email, me.password);
+    const sockets = [await socketWith(me.cookie), await socketWith(other.cookie)];
+    const disconnected = sockets.map(nextDisconnect);
+    expect((await me.api.post('/api/auth/sign-out-everywhere')).status).toBe(204);
+    expect(await Promise.all(disconnected)).toEqual(['io server disconnect', 'io server disconnect']);
+    for (const s of sockets) expect(await reconnect(s)).toMatch(/sign in/);
+  });
 });

@@ -8,7 +8,7 @@ import { randomUUID } from 'node:crypto';
 import { runDetailSchema, runSummarySchema, tracePageSchema, type RunDetail, type RunSummary } from '../../shared/api';
 import { optimizeLeg, parseCase } from '../../shared/engine';
 import { sweepRuns } from '../../server/runs/run-sweeper';
-import { agent, demo, eventually, openContext, signedIn, type TestContext } from './context';
+import { agent, demo, eventually, newTeam, openContext, signedIn, type TestContext } from './context';
 import { spawnWorker, stopWorker, type SpawnedWorker } from './workers';
 
 type Api = ReturnType<typeof agent>;
@@ -129,8 +129,7 @@ it('a team over its running limit waits with the reason shown, while another tea
 it('launch limits answer 429 naming the limit, with Retry-After, and queue nothing', async () => {
   const { ctx } = await stackOn({ launchesPerMinute: 3, unfinishedLimit: 4 });
   // A new team of its own, so no other test's launches count against it.
-  const a = agent(ctx);
-  expect((await a.post('/api/auth/sign-up').send({ email: `limits-${randomUUID().slice(0, 8)}@example.test`, password: 'queue-limits-passphrase', displayName: 'Lim', teamName: 'Limits lab' })).status).toBe(201);
+  const { api: a } = await newTeam(ctx, { email: `limits-${randomUUID().slice(0, 8)}@example.test`, displayName: 'Lim', teamName: 'Limits lab' });
   const d = await design(a, `Rate ${Date.now()}`, 1);
   for (let i = 0; i < 3; i += 1) await launch(a, d);
   const refused = await a.post(`/api/designs/${d}/runs`);

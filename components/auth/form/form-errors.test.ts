@@ -1,4 +1,4 @@
-import { signInRequestSchema, signUpRequestSchema } from '@/shared/api/auth';
+import { changePasswordSchema, signInRequestSchema, signUpRequestSchema } from '@/shared/api/auth';
 import { ApiError } from '@/components/api/client';
 import { checkForm, errorsFrom, fieldMessage } from './form-errors';
 
@@ -13,22 +13,27 @@ describe('fieldMessage', () => {
 });
 
 describe('checkForm', () => {
-  const fields = ['email', 'password', 'displayName', 'teamName'] as const;
+  const fields = ['email', 'displayName', 'teamName'] as const;
 
   it('passes a valid form', () => {
-    const values = { email: 'a@b.example', password: 'long enough pass', displayName: 'A', teamName: 'Lab' };
+    const values = { email: 'a@b.example', displayName: 'A', teamName: 'Lab' };
     expect(checkForm(signUpRequestSchema, values, fields)).toBeNull();
   });
 
   it('reports each bad field once, beside the field', () => {
-    const values = { email: 'not-an-address', password: 'short', displayName: ' ', teamName: 'Lab' };
+    const values = { email: 'not-an-address', displayName: ' ', teamName: 'L' };
     const errors = checkForm(signUpRequestSchema, values, fields);
     expect(errors?.fields).toEqual({
       email: 'Not a valid address.',
-      password: 'Must be at least 10 characters.',
       displayName: 'Required.',
+      teamName: 'Needs at least 2 characters.',
     });
     expect(errors?.banner).toBeNull();
+  });
+
+  it('names a short new password beside its field', () => {
+    const errors = checkForm(changePasswordSchema, { currentPassword: 'old one', newPassword: 'short' }, ['currentPassword', 'newPassword'] as const);
+    expect(errors?.fields).toEqual({ newPassword: 'Password must be at least 10 characters.' });
   });
 
   it('puts problems of fields the form lacks into the banner', () => {

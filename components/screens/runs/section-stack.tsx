@@ -4,8 +4,9 @@ import { colors } from '@/components/theme';
 const screenOptions = { headerShown: false, contentStyle: { backgroundColor: colors.background } };
 
 /**
- * The Designs and Runs tabs are stacks (list, then a design, a run, a
- * sweep, a comparison). Each screen draws its own header with a back link.
+ * The Designs, Runs and Team tabs are stacks (list, then a design, a run,
+ * a sweep, a comparison; the team, its audit trail, your account). Each
+ * screen draws its own header with a back link.
  */
 export function SectionStack() {
   return <Stack screenOptions={screenOptions} />;

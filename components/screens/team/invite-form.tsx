@@ -36,7 +36,7 @@ export function InviteForm() {
     <View style={styles.form} testID="invite-form">
       {sentTo ? (
         <FormAlert tone="ok" title="Invitation sent" testID="invite-sent">
-          {`${sentTo} has an e-mail with a link to join. It works once, for 7 days; it is listed under Invitations.`}
+          {`An e-mail to ${sentTo} is on its way with a link to join. It works once, for 7 days; it is listed under Invitations.`}
         </FormAlert>
       ) : null}
       <FormProblem title="No invitation sent" problem={form.errors.banner} />

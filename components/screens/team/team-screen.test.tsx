@@ -53,6 +53,7 @@ describe('TeamScreen', () => {
     for (const name of adminActions) expect(screen.queryAllByRole('button', { name })).toHaveLength(0);
     expect(screen.queryByTestId('invite-form')).toBeNull();
     expect(screen.queryByTestId('open-invite')).toBeNull();
+    expect(screen.queryByTestId('open-audit')).toBeNull();
   });
 
   it('gives an admin invite, role, remove and revoke, but not removing themselves', async () => {
@@ -68,6 +69,7 @@ describe('TeamScreen', () => {
     // Only the pending invitation can be revoked.
     expect(screen.getAllByRole('button', { name: /^Revoke the invitation/ })).toHaveLength(1);
     expect(screen.queryByTestId('role-note')).toBeNull();
+    expect(screen.getByTestId('open-audit')).toHaveTextContent('Audit trail');
   });
 
   it('asks before removing, and shows the "last admin" conflict', async () => {

@@ -11,3 +11,4 @@ export { Run } from './run';
 export { Sweep } from './sweep';
 export { GrowthOrder } from './growth-order';
 export { ModuleDesign } from './module-design';
+export { SignUpRequest } from './sign-up-request';

@@ -1,0 +1,1 @@
+export { SectionStack as default } from '@/components/screens/runs/section-stack';

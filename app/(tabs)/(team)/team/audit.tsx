@@ -1,0 +1,1 @@
+export { AuditScreen as default } from '@/components/screens/team/audit-screen';

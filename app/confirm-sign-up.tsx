@@ -1,0 +1,1 @@
+export { ConfirmSignUpScreen as default } from '@/components/auth/confirm-sign-up-screen';
