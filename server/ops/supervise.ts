@@ -14,6 +14,8 @@ export type SuperviseOptions = {
   firstDelayMs?: number;
   /** Told of every unexpected exit (the test runner counts them as failures). */
   onExit?: (name: string, how: string) => void;
+  /** Told of every restart scheduled, with its delay. */
+  onRestart?: (name: string, delayMs: number) => void;
   /** Told once when a service keeps crashing; the caller decides what to stop. */
   onGiveUp?: (name: string, reason: string) => void;
 };
@@ -79,6 +81,7 @@ export function startServices(services: Service[], env: NodeJS.ProcessEnv, o: Su
       }
       const delay = Math.min(maxDelayMs, firstDelayMs * 2 ** (recent.length - 1));
       log('supervisor', `${s.name} ${how}; restarting it in ${delay < 1000 ? `${delay} ms` : `${(delay / 1000).toFixed(0)} s`} (${recent.length} of ${maxExits} restarts allowed within ${Math.round(windowMs / 1000)} s)`);
+      o.onRestart?.(s.name, delay);
       const timer = setTimeout(() => {
         pending.delete(timer);
         if (!stopping) run(s, recent, tail);

@@ -374,7 +374,7 @@ describe('accounts in a real browser', () => {
     expect(href).toMatch(/\/api\/audit\/export\.csv$/);
     const csv = await adminSession.context.request.get(`${baseUrl}/api/audit/export.csv`);
     expect(csv.status()).toBe(200);
-    expect((await csv.text()).split('\r\n')[0]).toBe('at_utc,action,actor,actor_id,email,subject_id,summary,ip');
+    expect((await csv.text()).split(/\r?\n/)[0]).toBe('at_utc,action,actor,actor_id,email,subject_id,summary,ip');
     await desk.close();
 
     const phone = await adminSession.newPage('phone');

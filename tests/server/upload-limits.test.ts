@@ -60,6 +60,9 @@ async function expectHealthy(): Promise<void> {
   expect(healthResponseSchema.parse(await res.json()).status).toBe('ok');
 }
 
+// A sanity bound, not a speed claim: the largest accepted table takes a few seconds on a loaded 2-core machine (figures: npm run bench).
+jest.setTimeout(60_000);
+
 describe('hostile measured tables over real HTTP', () => {
   it.each([2000, 6000])('refuses a %d-row file whose dopings and temperatures are all different, naming the cap; health stays answered', async (rows) => {
     const csv = sparseGridCsv(rows);
