@@ -19,13 +19,11 @@ import { startServices } from '../../server/ops/supervise';
 import { ensureWebBuild } from '../../server/ops/web-build';
 import { chromiumPath, demoPassword } from '../e2e/browser';
 
-const pgPort = process.env.PG_PORT ?? '54339';
-const settings = {
-  FROSTGRADE_PROFILE: 'test', NODE_ENV: 'test', PORT: process.env.PORT ?? '8394', SMTP_PORT: process.env.SMTP_PORT ?? '2594',
-  DATABASE_URL: `postgres://postgres@127.0.0.1:${pgPort}/frostgrade_bench_first_load`,
-};
-const childEnv = { ...process.env, ...settings } as NodeJS.ProcessEnv;
-const env = readEnv(childEnv);
+const settings = { FROSTGRADE_PROFILE: 'test', NODE_ENV: 'test', PORT: process.env.PORT ?? '8394', SMTP_PORT: process.env.SMTP_PORT ?? '2594' };
+// The bench's own database on the test profile's private cluster (started here if needed); the API child is pointed at it.
+const base = readEnv({ ...process.env, ...settings });
+const env = { ...base, databaseUrl: `postgres://postgres@127.0.0.1:${base.pgPort}/frostgrade_bench_first_load` };
+const childEnv = { ...process.env, ...settings, DATABASE_URL: env.databaseUrl } as NodeJS.ProcessEnv;
 const root = join(__dirname, '..', '..');
 
 /** The link: ≈ 10 Mbit/s down, 5 Mbit/s up, 40 ms latency (Chromium's throughput is in bytes per second). */
