@@ -28,6 +28,7 @@
  * cross-checked at writing time against an 8th-order Runge–Kutta integration.
  */
 import { positionLeg, seebeckLinearInPosition } from './test-support/closed-form-families';
+import { ioffeColdSide } from './test-support/reference-leg';
 import { solveLegProblem } from './solve-leg';
 
 const relative = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
@@ -112,15 +113,10 @@ describe('S = S₀ + a·x with constant σ and κ: the engine’s graded leg aga
   });
 
   test('the check sees the grading: a uniform leg at the mean S misses Tc by far more than the tolerance', () => {
-    // Ioffe's constant-property balance (A. F. Ioffe, Semiconductor
-    // Thermoelements and Thermoelectric Cooling, 1957):
-    // Tc = (Qc + ½I²R + K·Th)/(S·I + K).
+    // Ioffe's constant-property balance (A. F. Ioffe, 1957; see ioffeColdSide).
     for (const c of cases) {
       const exact = seebeckLinearInPositionLeg(c.g, c.current / c.g.area, c.hotSide, c.heatLoad / c.g.area);
-      const R = c.g.length / (c.g.sigma * c.g.area);
-      const K = (c.g.kappa * c.g.area) / c.g.length;
-      const S = c.g.s0 + 0.5 * c.g.a * c.g.length;
-      const ioffe = (c.heatLoad + 0.5 * c.current * c.current * R + K * c.hotSide) / (S * c.current + K);
+      const ioffe = ioffeColdSide({ ...c.g, seebeck: c.g.s0 + 0.5 * c.g.a * c.g.length }, c.current, c.hotSide, c.heatLoad);
       expect(Math.abs(ioffe - exact.coldSide)).toBeGreaterThan(0.1);
     }
   });

@@ -34,6 +34,7 @@
  */
 import { airy, AIRY_MAX_ARGUMENT } from './test-support/airy';
 import { seebeckLinearInTemperature } from './test-support/closed-form-families';
+import { ioffeColdSide } from './test-support/reference-leg';
 import { uniformLeg } from './leg-profile';
 import { solveLegProblem } from './solve-leg';
 
@@ -153,15 +154,11 @@ describe('S = b·T with constant σ and κ: the engine against the Airy closed f
   });
 
   test('the check sees the Thomson heat: a constant S at the mean temperature misses Tc by far more than the tolerance', () => {
-    // Ioffe's constant-property balance (A. F. Ioffe, Semiconductor
-    // Thermoelements and Thermoelectric Cooling, 1957):
-    // Qc = S·I·Tc − ½I²R − K(Th − Tc) ⇒ Tc = (Qc + ½I²R + K·Th)/(S·I + K).
+    // Ioffe's constant-property balance (A. F. Ioffe, 1957; see ioffeColdSide).
     for (const c of cases) {
       const exact = seebeckLinearInTemperatureLeg(c.m, c.current / c.area, c.length, c.coldSide, c.heatLoad / c.area);
-      const R = c.length / (c.m.sigma * c.area);
-      const K = (c.m.kappa * c.area) / c.length;
-      const S = c.m.b * 0.5 * (c.coldSide + exact.hotSide);
-      const ioffe = (c.heatLoad + 0.5 * c.current * c.current * R + K * exact.hotSide) / (S * c.current + K);
+      const seebeck = c.m.b * 0.5 * (c.coldSide + exact.hotSide);
+      const ioffe = ioffeColdSide({ ...c.m, seebeck, length: c.length, area: c.area }, c.current, exact.hotSide, c.heatLoad);
       expect(Math.abs(ioffe - c.coldSide)).toBeGreaterThan(0.1);
     }
   });
