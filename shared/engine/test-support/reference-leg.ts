@@ -76,3 +76,14 @@ export function exactSegmentsColdSide(segments: readonly ExactSegment[], current
   const coldSide = 100 + ((hotSide - a.T) * 100) / (b.T - a.T);
   return { coldSide, hotFlux: run(coldSide).q };
 }
+
+/**
+ * Tc of a uniform constant-property leg from Ioffe's balance (A. F. Ioffe,
+ * Semiconductor Thermoelements and Thermoelectric Cooling, 1957):
+ * Qc = S·I·Tc − ½I²R − K(Th − Tc) ⇒ Tc = (Qc + ½I²R + K·Th)/(S·I + K).
+ */
+export function ioffeColdSide(leg: ExactSegment & { area: number }, current: number, hotSide: number, heatLoad: number): number {
+  const R = leg.length / (leg.sigma * leg.area);
+  const K = (leg.kappa * leg.area) / leg.length;
+  return (heatLoad + 0.5 * current * current * R + K * hotSide) / (leg.seebeck * current + K);
+}
