@@ -11,7 +11,7 @@ import { startRunSweeper } from '../server/runs/run-sweeper';
 import { accountMailJob } from './account-mail-job';
 import { startHeartbeat } from './heartbeat';
 import { runJob } from './run-job';
-import { sheetJob } from './sheet-job';
+import { sheetJob, type SheetJobData } from './sheet-job';
 
 /**
  * A worker process: one run at a time (a run keeps one core busy). Start
@@ -41,9 +41,9 @@ async function main(): Promise<void> {
     console.log(`[worker] run ${job.data.runId}: ${outcome}`);
     return { workerId, outcome };
   });
-  await boss.work<{ orderId: string }>(queues.growthSheet, { pollingIntervalSeconds: 0.5, batchSize: 1 }, async ([job]) => {
+  await boss.work<SheetJobData>(queues.growthSheet, { pollingIntervalSeconds: 0.5, batchSize: 1 }, async ([job]) => {
     if (!job) return null;
-    const outcome = await sheetJob(ds, job.data.orderId);
+    const outcome = await sheetJob(ds, boss, job.data);
     console.log(`[worker] growth order ${job.data.orderId}: ${outcome}`);
     return { workerId, outcome };
   });

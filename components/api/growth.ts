@@ -37,7 +37,7 @@ export function useGrowthOrder(id: string) {
     queryKey: growthOrderKey(id),
     queryFn: ({ signal }) => apiGet(orderPath(id), growthOrderDetailSchema, { signal }),
     enabled: id.length > 0,
-    refetchInterval: (query) => (query.state.data?.order.sheetStatus === 'computing' ? computingPollMs : false),
+    refetchInterval: (query) => (query.state.data?.order.sheetStatus === 'computing' || query.state.data?.order.yieldStatus === 'computing' ? computingPollMs : false),
   });
 }
 
@@ -114,17 +114,27 @@ export function useUpdateSheetSettings(id: string) {
   });
 }
 
-export const uploadReportSchema = z.object({ report: measurementReportSchema });
-export type UploadMeasurementsVariables = { file: PickedFile; temperature?: number };
+/** `PUT /api/growth-orders/:id/yield`: the doping scatter (decades, 1σ per zone); a worker recomputes the yield. */
+export function useUpdateScatter(id: string) {
+  const handlers = useOrderWrite(id);
+  return useMutation({
+    mutationFn: (body: { dopingScatter: number }) => apiSend('PUT', `${orderPath(id)}/yield`, { json: body }, growthOrderDetailSchema),
+    ...handlers,
+  });
+}
 
-/** `POST /api/growth-orders/:id/measurements` (multipart `file`, optional `temperature` in K): all or nothing. */
+export const uploadReportSchema = z.object({ report: measurementReportSchema });
+export type UploadMeasurementsVariables = { file: PickedFile; temperature?: number; hallFactor?: number };
+
+/** `POST /api/growth-orders/:id/measurements` (multipart `file`, optional `temperature` in K and `hallFactor`): all or nothing. */
 export function useUploadMeasurements(id: string) {
   const queryClient = useQueryClient();
   const onError = useReloadWhenClosed();
   return useMutation({
-    mutationFn: ({ file, temperature }: UploadMeasurementsVariables) => {
+    mutationFn: ({ file, temperature, hallFactor }: UploadMeasurementsVariables) => {
       const form = new FormData();
       if (temperature !== undefined) form.append('temperature', String(temperature));
+      if (hallFactor !== undefined) form.append('hallFactor', String(hallFactor));
       appendFile(form, 'file', file);
       return apiSend('POST', `${orderPath(id)}/measurements`, { form }, uploadReportSchema);
     },

@@ -14,8 +14,8 @@ describe('roleCan', () => {
 
   it('follows the role table of the design for physicists and growers', () => {
     const allowed = (role: 'physicist' | 'grower') => actions.filter((action) => roleCan(role, action));
-    expect(allowed('physicist')).toEqual(['families.write', 'designs.write', 'runs.launch', 'profiles.release']);
-    expect(allowed('grower')).toEqual(['growth.update', 'measurements.upload']);
+    expect(allowed('physicist')).toEqual(['families.write', 'designs.write', 'runs.launch', 'profiles.release', 'growth.scatter']);
+    expect(allowed('grower')).toEqual(['growth.update', 'measurements.upload', 'growth.scatter']);
   });
 
   it('refuses everything when nobody is signed in', () => {

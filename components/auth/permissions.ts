@@ -25,6 +25,8 @@ export const actionRoles = {
   'growth.update': ['admin', 'grower'],
   /** Upload as-grown measurements of a leg. */
   'measurements.upload': ['admin', 'grower'],
+  /** Set the doping scatter behind a growth sheet's yield (the grower knows it; the physicist may set it). */
+  'growth.scatter': ['admin', 'physicist', 'grower'],
   /** Invite members, change roles, remove members, revoke invitations. */
   'team.manage': ['admin'],
   /** Delete records for good (only admins delete). */

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import type { Role } from '../../shared/api';
-import { closeOrderSchema, growthStateChangeSchema, releaseRequestSchema, sheetSettingsSchema } from '../../shared/api';
+import { closeOrderSchema, growthStateChangeSchema, hallFactorSchema, releaseRequestSchema, sheetSettingsSchema, yieldSettingsSchema } from '../../shared/api';
 import { designers, requireTeam, requireUser } from '../http/access';
 import { auditWho } from '../http/audit-who';
 import { objectReaders } from '../http/object-access';
@@ -9,12 +9,18 @@ import { route, type RouteSpec } from '../http/route-table';
 import { fileOf, uploadThen } from '../http/upload';
 import { body, parseOrThrow } from '../http/validate';
 import { exportSheet } from '../services/growth-export';
-import { changeState, closeOrder, listOrders, orderDetail, releaseRun, updateSheetSettings, uploadMeasurements, type GrowthDeps } from '../services/growth-service';
+import { changeState, closeOrder, listOrders, orderDetail, releaseRun, updateScatter, updateSheetSettings, uploadMeasurements, type GrowthDeps } from '../services/growth-service';
 
 /** Growers move orders and upload measurements; admins may stand in for them. */
 export const growers: readonly Role[] = ['admin', 'grower'];
+/** Who may set the doping scatter behind the yield. */
+const scatterSetters: readonly Role[] = ['admin', 'physicist', 'grower'];
 
-const temperatureField = z.object({ temperature: z.coerce.number({ error: 'temperature must be a number (K)' }).min(200, { error: 'temperature is in kelvin (200–400 K)' }).max(400, { error: 'temperature is in kelvin (200–400 K)' }).optional() });
+/** The upload's form fields beside the file; an empty hallFactor means "the band model's". */
+const uploadFields = z.object({
+  temperature: z.coerce.number({ error: 'temperature must be a number (K)' }).min(200, { error: 'temperature is in kelvin (200–400 K)' }).max(400, { error: 'temperature is in kelvin (200–400 K)' }).optional(),
+  hallFactor: z.preprocess((v) => (v === '' ? undefined : v), hallFactorSchema.optional()),
+});
 
 export function growthRoutes(d: GrowthDeps): RouteSpec[] {
   const { ds } = d;
@@ -40,9 +46,14 @@ export function growthRoutes(d: GrowthDeps): RouteSpec[] {
       await updateSheetSettings(d, requireTeam(req), requireUser(req), req.params.id, res.locals.body);
       res.json(await orderDetail(ds, requireTeam(req), req.params.id));
     }),
+    // The grower knows the scatter of their growth; the physicist may set it too.
+    route('put', '/growth-orders/:id/yield', scatterSetters, body(yieldSettingsSchema), async (req, res) => {
+      await updateScatter(d, requireTeam(req), requireUser(req), req.params.id, res.locals.body);
+      res.json(await orderDetail(ds, requireTeam(req), req.params.id));
+    }),
     route('post', '/growth-orders/:id/measurements', growers, uploadThen(async (req) => {
-      const { temperature } = parseOrThrow(temperatureField, req.body ?? {});
-      return { report: await uploadMeasurements(d, requireTeam(req), requireUser(req), req.params.id, () => fileOf(req), temperature) };
+      const { temperature, hallFactor } = parseOrThrow(uploadFields, req.body ?? {});
+      return { report: await uploadMeasurements(d, requireTeam(req), requireUser(req), req.params.id, () => fileOf(req), temperature, hallFactor) };
     }, 201)),
     ...(['csv', 'json'] as const).map((format) => route('get', `/growth-orders/:id/sheet.${format}`, objectReaders.growth, async (req, res) => {
       const out = await exportSheet(ds, requireTeam(req), req.params.id, format);

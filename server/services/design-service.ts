@@ -29,6 +29,8 @@ export function toDto(d: Design, family: MaterialFamily, following: boolean): De
     id: d.id, name: d.name, notes: d.notes, familyId: d.familyId, familyName: family.name, familyVersion: d.familyVersion, carrier: family.carrier,
     lengthMm: d.lengthMm, areaMm2: d.areaMm2, hotSide: d.hotSide, objective: d.objective, heatLoad: d.heatLoad, coldSide: d.coldSide,
     minPerCm3: d.minPerCm3, maxPerCm3: d.maxPerCm3, controlPoints: d.controlPoints, monotone: d.monotone, starts: d.starts, minZoneMm: d.minZoneMm,
+    coldContactMicroOhmCm2: d.coldContactMicroOhmCm2, hotContactMicroOhmCm2: d.hotContactMicroOhmCm2, parasitic: d.parasitic,
+    parasiticLoadW: d.parasiticLoadW, emissivity: d.emissivity, surroundingsK: d.surroundingsK,
     createdBy: d.createdBy, createdAt: d.createdAt.toISOString(), updatedAt: d.updatedAt.toISOString(), following,
   };
 }
@@ -85,7 +87,11 @@ export async function checkSweep(ds: DataSource, team: Team, designId: unknown, 
 
 /** Engine case fields back to the form's fields, so the error lands beside the right input. */
 function engineFieldToDesign(field: string): string {
-  const map: Record<string, string> = { length: 'lengthMm', area: 'areaMm2', 'bounds.minPerCm3': 'minPerCm3', 'bounds.maxPerCm3': 'maxPerCm3', bounds: 'maxPerCm3' };
+  const map: Record<string, string> = {
+    length: 'lengthMm', area: 'areaMm2', 'bounds.minPerCm3': 'minPerCm3', 'bounds.maxPerCm3': 'maxPerCm3', bounds: 'maxPerCm3',
+    'contactResistivity.cold': 'coldContactMicroOhmCm2', 'contactResistivity.hot': 'hotContactMicroOhmCm2',
+    'parasitic.heatLoad': 'parasiticLoadW', 'parasitic.radiation.emissivity': 'emissivity', 'parasitic.radiation.surroundings': 'surroundingsK',
+  };
   if (field.startsWith('material')) return 'familyId';
   return map[field] ?? field;
 }
@@ -99,8 +105,8 @@ export async function saveDesign(ds: DataSource, team: Team, user: { id: string;
     const repo = m.getRepository(Design);
     const { familyVersion: _v, ...fields } = input;
     const d = existing
-      ? Object.assign(existing, { ...fields, coldSide: input.coldSide ?? null, familyVersion: version })
-      : repo.create({ ...fields, coldSide: input.coldSide ?? null, familyVersion: version, teamId: team.id, createdBy: user.displayName });
+      ? Object.assign(existing, { ...fields, coldSide: input.coldSide ?? null, surroundingsK: input.surroundingsK ?? null, familyVersion: version })
+      : repo.create({ ...fields, coldSide: input.coldSide ?? null, surroundingsK: input.surroundingsK ?? null, familyVersion: version, teamId: team.id, createdBy: user.displayName });
     const saved = await repo.save(d);
     // Whoever creates a design follows it: they hear when its runs end.
     if (id === undefined) await m.query('INSERT INTO design_follower (design_id, user_id) VALUES ($1, $2) ON CONFLICT DO NOTHING', [saved.id, user.id]);

@@ -2,7 +2,7 @@ import { join } from 'node:path';
 import type PgBoss from 'pg-boss';
 import type { DataSource, EntityManager } from 'typeorm';
 import type { z } from 'zod';
-import type { GrowthOrderDetail, GrowthOrderDto, closeOrderSchema, growthStateChangeSchema, releaseRequestSchema, sheetSettingsSchema } from '../../shared/api';
+import type { GrowthOrderDetail, GrowthOrderDto, closeOrderSchema, growthStateChangeSchema, releaseRequestSchema, sheetSettingsSchema, yieldSettingsSchema } from '../../shared/api';
 import { growerStates } from '../../shared/api';
 import type { GrowthSheet } from '../../shared/growth/growth-sheet';
 import { inApiThread } from './api-threads';
@@ -39,8 +39,17 @@ function assertOpen(o: GrowthOrder): void {
   }
 }
 
+/** The yield is being recomputed while the stored sheet's scatter is not the order's; a failed yield job leaves its reason in sheetError. */
+function yieldStatus(o: GrowthOrder): GrowthOrderDto['yieldStatus'] {
+  if (o.sheetStatus !== 'ready') return o.sheetStatus;
+  if (o.sheetError) return 'failed';
+  const scatter = (o.sheet as { dopingScatter?: unknown } | null)?.dopingScatter;
+  return scatter === o.dopingScatter ? 'ready' : 'computing';
+}
+
 function dto(o: GrowthOrder, designName: string, releasedBy: string): GrowthOrderDto {
   return {
+    dopingScatter: o.dopingScatter, yieldStatus: yieldStatus(o), sheetProgress: o.sheetProgress,
     id: o.id, runId: o.runId, designName, batch: o.batch, dueDate: o.dueDate, notes: o.notes, state: o.state, closeReason: o.closeReason,
     zones: o.zones, lossBudget: o.lossBudget, measureTemperature: o.measureTemperature, sheetStatus: o.sheetStatus, sheetError: o.sheetError,
     releasedBy, createdAt: o.createdAt.toISOString(), updatedAt: o.updatedAt.toISOString(),
@@ -51,8 +60,8 @@ async function event(m: EntityManager, orderId: string, by: string, kind: string
   await m.query('INSERT INTO growth_event (order_id, by_user, kind, from_state, to_state, note) VALUES ($1, $2, $3, $4, $5, $6)', [orderId, by, kind, from, to, note]);
 }
 
-const sendSheetJob = (boss: PgBoss, m: EntityManager, orderId: string) =>
-  boss.send(queues.growthSheet, { orderId }, { db: { executeSql: async (text: string, values: unknown[]) => ({ rows: await m.query(text, values) }) } });
+const sendSheetJob = (boss: PgBoss, m: EntityManager, orderId: string, kind: 'sheet' | 'yield' = 'sheet') =>
+  boss.send(queues.growthSheet, { orderId, kind }, { db: { executeSql: async (text: string, values: unknown[]) => ({ rows: await m.query(text, values) }) } });
 
 async function mailRoles(ds: DataSource, team: Team, roles: string[]): Promise<string[]> {
   const rows: Array<{ email: string }> = await ds.query('SELECT email FROM app_user WHERE team_id = $1 AND role = ANY($2) AND removed_at IS NULL', [team.id, roles]);
@@ -153,16 +162,34 @@ export async function updateSheetSettings(d: GrowthDeps, team: Team, actor: Acto
   await publishEvent(d.ds, { teamId: team.id, event: 'growth:changed', payload: { orderId: String(id) } });
 }
 
+/**
+ * The grower's doping scatter: stored, and the yield recomputed by a worker
+ * (the zoning and the bands do not depend on it). While the sheet itself is
+ * still computing, its job reads the new scatter or queues the yield after.
+ */
+export async function updateScatter(d: GrowthDeps, team: Team, actor: Actor, id: unknown, input: z.output<typeof yieldSettingsSchema>): Promise<void> {
+  await d.ds.transaction(async (m) => {
+    const o = await findOrder(m, team, id, true);
+    assertOpen(o);
+    if (input.dopingScatter === o.dopingScatter) return;
+    const ready = o.sheetStatus === 'ready';
+    await m.query('UPDATE growth_order SET doping_scatter = $2, sheet_error = CASE WHEN $3 THEN NULL ELSE sheet_error END, sheet_progress = CASE WHEN $3 THEN 0 ELSE sheet_progress END, updated_at = now() WHERE id = $1', [o.id, input.dopingScatter, ready]);
+    await event(m, o.id, actor.displayName, 'sheet', null, null, `doping scatter ${input.dopingScatter} decades (1σ) per zone for the yield`);
+    if (ready) await sendSheetJob(d.boss, m, o.id, 'yield');
+  });
+  await publishEvent(d.ds, { teamId: team.id, event: 'growth:changed', payload: { orderId: String(id) } });
+}
+
 /** All or nothing: parse, infer, predict, store, then tell the physicist. */
 /** `file` is read only once the order is known to be the caller's: another team's order answers 404 first. */
-export async function uploadMeasurements(d: GrowthDeps, team: Team, actor: Actor, id: unknown, file: () => Buffer, temperature: number | undefined): Promise<Record<string, unknown>> {
+export async function uploadMeasurements(d: GrowthDeps, team: Team, actor: Actor, id: unknown, file: () => Buffer, temperature: number | undefined, hallFactor?: number): Promise<Record<string, unknown>> {
   const o = await findOrder(d.ds.manager, team, id);
   assertOpen(o);
   if (o.sheetStatus !== 'ready' || !o.sheet) throw new HttpError(409, 'The growth sheet is not ready yet.', [{ field: 'sheet', message: o.sheetStatus }], 'Conflict');
   const run = await d.ds.getRepository(Run).findOneByOrFail({ id: o.runId });
   const sheet = o.sheet as unknown as GrowthSheet;
   const t = temperature ?? o.measureTemperature;
-  const input: ReportThreadInput = { text: uploadText(file()), caseJson: run.caseJson, sheet, zones: o.zones, temperature: t };
+  const input: ReportThreadInput = { text: uploadText(file()), caseJson: run.caseJson, sheet, zones: o.zones, temperature: t, hallFactor };
   const parsed = await inApiThread<ReportThreadAnswer>(join(__dirname, 'report-thread.ts'), input, 'file');
   if ('errors' in parsed) throw new ValidationError(parsed.errors.map((e) => ({ field: ['file', e.line ? `line ${e.line}` : '', e.column ?? ''].filter(Boolean).join(':'), message: e.message })));
   const report = { ...parsed.report, uploadWarnings: parsed.warnings };
@@ -180,6 +207,7 @@ export async function uploadMeasurements(d: GrowthDeps, team: Team, actor: Actor
       subject: `Measurements back for batch ${o.batch}: predicted ΔT ${report.asGrown.atDesignCurrent.deltaT.toFixed(1)} K (target ${report.target.deltaT.toFixed(1)} K)`,
       text: [`${actor.displayName} uploaded ${parsed.points.length} measured positions for batch ${o.batch}.`, '',
         `Predicted ΔT of the as-grown leg: ${report.asGrown.atDesignCurrent.deltaT.toFixed(2)} K at the design current, ${report.asGrown.atBestCurrent.deltaT.toFixed(2)} K at its best current (target ${report.target.deltaT.toFixed(2)} K).`,
+        ...(report.hall ? [report.hall.note] : []),
         flagged.length ? `Zones out of tolerance: ${flagged.map((v) => `zone ${v.zone + 1} (${v.verdict})`).join(', ')}.` : 'Every measured zone is within tolerance.', '',
         `Open the order: ${d.appOrigin}/growth/${o.id}`, '', 'These are model predictions: confirm with a device measurement before building hardware.'].join('\n'),
     }).catch((err: Error) => console.error(`[api] measurement mail failed: ${err.message}`));

@@ -33,8 +33,16 @@ async function resolveLeg(m: EntityManager, team: Team, s: LegSource, field: str
 
 /** The engine case of a module (checked separately, so a saved module always computes). */
 async function resolveCase(m: EntityManager, team: Team, input: ModuleInput): Promise<Record<string, unknown>> {
-  const p = await resolveLeg(m, team, input.p, 'p');
-  const n = await resolveLeg(m, team, input.n, 'n');
+  // A run's leg carries its design's contacts and parasitic heat; a contact
+  // value set on the module replaces both legs' (the engine lets a leg's own
+  // value win, so the legs' are dropped here).
+  const own = (leg: LegDefinitionInput): LegDefinitionInput => {
+    if (input.contactResistivity === undefined) return leg;
+    const { contactResistivity: _c, ...rest } = leg;
+    return rest;
+  };
+  const p = own(await resolveLeg(m, team, input.p, 'p'));
+  const n = own(await resolveLeg(m, team, input.n, 'n'));
   const c = {
     hotSide: input.hotSide, deltaT: input.deltaT, p, n, couples: input.couples,
     ...(input.areaRatio !== undefined ? { areaRatio: input.areaRatio, n: { ...n, area: undefined } } : {}),

@@ -9,7 +9,7 @@ import type { GrowthSheet } from '../../shared/growth/growth-sheet';
 import { reportMeasurements, type MeasurementReport } from '../../shared/growth/measurement-report';
 import { parseMeasurementsCsv, type MeasuredPoint } from '../../shared/growth/parse-measurements';
 
-export type ReportThreadInput = { text: string; caseJson: unknown; sheet: GrowthSheet; zones: number; temperature: number };
+export type ReportThreadInput = { text: string; caseJson: unknown; sheet: GrowthSheet; zones: number; temperature: number; /** r_H entered on the upload. */ hallFactor?: number };
 
 /** The file's errors (nothing is predicted), or the points read, the warnings about them and the prediction. */
 export type ReportThreadAnswer = { errors: UploadIssue[] } | { points: MeasuredPoint[]; warnings: UploadIssue[]; report: MeasurementReport };
@@ -18,5 +18,5 @@ export type ReportThreadAnswer = { errors: UploadIssue[] } | { points: MeasuredP
 export default function readAndPredict(i: ReportThreadInput): ReportThreadAnswer {
   const parsed = parseMeasurementsCsv(i.text, i.sheet.lengthMm);
   if (!parsed.ok) return { errors: parsed.errors };
-  return { points: parsed.points, warnings: parsed.warnings, report: reportMeasurements(i.caseJson, i.sheet, i.zones, parsed.points, i.temperature) };
+  return { points: parsed.points, warnings: parsed.warnings, report: reportMeasurements(i.caseJson, i.sheet, i.zones, parsed.points, i.temperature, { hallFactor: i.hallFactor }) };
 }

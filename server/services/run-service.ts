@@ -1,7 +1,7 @@
 import type PgBoss from 'pg-boss';
 import type { DataSource, EntityManager } from 'typeorm';
 import { traceShownMax, type RunDetail, type RunProgress, type RunSummary, type RunWaiting, type Sweep as SweepDto, type SweepRequest, type TracePage } from '../../shared/api';
-import type { MaterialInput } from '../../shared/engine';
+import { bipolarOfProfile, type MaterialInput, type ProfileLike } from '../../shared/engine';
 import { designToCase, withSweepValue, type DesignParameters } from '../../shared/runs/design-case';
 import { Design, MaterialFamilyVersion, Run, Sweep, Team } from '../db/entities';
 import type { FairShare } from '../config/env';
@@ -27,13 +27,15 @@ export async function findRun(m: EntityManager, team: Team, id: unknown): Promis
 
 export function summarise(r: Run, designName: string, launchedBy: string, waiting: RunWaiting | null = null): RunSummary {
   const p = r.progress as Partial<RunProgress> | null;
-  const res = r.result as { objective?: { value: number }; deltaT?: number } | null;
+  const res = r.result as { objective?: { value: number }; deltaT?: number; profile?: ProfileLike } | null;
   return {
     id: r.id, designId: r.designId, designName, sweepId: r.sweepId, sweepValue: r.sweepValue, state: r.state, objective: r.objective,
     best: res?.objective?.value ?? p?.best ?? null, deltaT: res?.deltaT ?? null,
     fractionDone: r.state === 'succeeded' ? 1 : p?.fractionDone ?? 0,
     launchedBy, createdAt: r.createdAt.toISOString(), startedAt: r.startedAt?.toISOString() ?? null, finishedAt: r.finishedAt?.toISOString() ?? null,
     error: r.error, attempts: r.attempts, waiting: r.state === 'queued' ? waiting : null,
+    // One neutrality solve per profile point, and only for two-band families: cheap enough for every list.
+    bipolar: bipolarOfProfile(r.caseJson.material as MaterialInput | undefined, res?.profile),
   };
 }
 
@@ -173,11 +175,15 @@ export async function runDetail(d: Pick<RunDeps, 'ds' | 'fair' | 'heartbeatSecon
   });
 }
 
+const endsBefore = { coldContactMicroOhmCm2: 0, hotContactMicroOhmCm2: 0, parasitic: 'none', parasiticLoadW: 0, emissivity: 0, surroundingsK: null };
+
 function pick(snap: Record<string, unknown>, like: object): Record<string, unknown> {
   const out: Record<string, unknown> = {};
   for (const k of ['name', 'lengthMm', 'areaMm2', 'hotSide', 'objective', 'heatLoad', 'coldSide', 'minPerCm3', 'maxPerCm3', 'controlPoints', 'monotone', 'starts', 'minZoneMm']) {
     if (k in snap && k in like) out[k] = snap[k];
   }
+  // A run frozen before designs had contacts ran with ideal ones and no parasitic heat, whatever the design says now.
+  for (const [k, absent] of Object.entries(endsBefore)) out[k] = k in snap ? snap[k] : absent;
   return out;
 }
 

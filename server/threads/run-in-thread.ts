@@ -11,7 +11,12 @@ export type ThreadLimits = {
   heapMb?: number;
   /** Concurrency cap the thread waits at before it starts. */
   gate?: ThreadGate;
+  /** Called with each value the thread sends through `reportProgress` before its answer. */
+  onProgress?: (fraction: number) => void;
 };
+
+type Progress = { progress: number };
+const isProgress = (m: unknown): m is Progress => typeof (m as Progress | null)?.progress === 'number';
 
 /** The thread was stopped at its time or memory limit. */
 export class ThreadLimitError extends Error {
@@ -61,7 +66,12 @@ export async function runInThread<T>(file: string, data: unknown, limits: Thread
       settle(() => reject(new ThreadLimitError('time', `the computation took longer than ${limits.timeoutMs! / 1000} s and was stopped`)));
       void thread.terminate();
     }, limits.timeoutMs);
-    thread.once('message', (answer: Answer<T>) => settle(() => (answer.ok ? resolve(answer.value) : reject(new Error(answer.message)))));
+    const onMessage = (m: Answer<T> | Progress): void => {
+      if (isProgress(m)) { limits.onProgress?.(m.progress); return; }
+      thread.off('message', onMessage);
+      settle(() => (m.ok ? resolve(m.value) : reject(new Error(m.message))));
+    };
+    thread.on('message', onMessage);
     thread.once('error', (err) => settle(() => reject(outOfMemory(err) ? new ThreadLimitError('memory', `the computation needed more than ${limits.heapMb ?? 'the available'} MB of memory and was stopped`) : err)));
     thread.once('exit', (code) => settle(() => reject(new Error(`the thread stopped with exit code ${code}`))));
   });
@@ -76,4 +86,9 @@ export function answerInThread<D, T>(compute: (data: D) => T): void {
     answer = { ok: false, message: err instanceof Error ? err.message : String(err) };
   }
   parentPort?.postMessage(answer);
+}
+
+/** The thread's side of `onProgress`: how far the computation has got (0…1). */
+export function reportProgress(fraction: number): void {
+  parentPort?.postMessage({ progress: fraction } satisfies Progress);
 }

@@ -29,6 +29,21 @@ export const runWaitingSchema = z.object({
   reason: z.string(),
 });
 
+/**
+ * Where a finished run's profile stands against bipolar conduction (two-band
+ * families only): the largest share of the current minority carriers carry
+ * along the leg, and where. `bipolar` is share > 5 %.
+ */
+export const runBipolarSchema = z.object({
+  share: z.number().min(0).max(1),
+  x: z.number(),
+  temperature: z.number(),
+  perCm3: z.number(),
+  /** The point is the leg's cold or hot end (else somewhere between). */
+  end: z.enum(['cold', 'hot']).nullable(),
+  bipolar: z.boolean(),
+});
+
 export const runSummarySchema = z.object({
   id: idSchema,
   designId: idSchema,
@@ -49,6 +64,8 @@ export const runSummarySchema = z.object({
   attempts: z.number().int(),
   /** Set while the run is queued. */
   waiting: runWaitingSchema.nullable(),
+  /** Minority carriers along the result's profile; null without a result or for a family with no minority band. */
+  bipolar: runBipolarSchema.nullable(),
 });
 
 export const runsResponseSchema = z.object({ runs: z.array(runSummarySchema) });
@@ -100,6 +117,7 @@ export type RunState = z.infer<typeof runStateSchema>;
 export type RunProgress = z.infer<typeof runProgressSchema>;
 export type RunSummary = z.infer<typeof runSummarySchema>;
 export type RunWaiting = z.infer<typeof runWaitingSchema>;
+export type RunBipolar = z.infer<typeof runBipolarSchema>;
 export type TracePage = z.infer<typeof tracePageSchema>;
 export type RunDetail = z.infer<typeof runDetailSchema>;
 export type SweepRequest = z.infer<typeof sweepRequestSchema>;

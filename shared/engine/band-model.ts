@@ -11,8 +11,9 @@
  * table lookup per call.
  */
 import { bandFactorsInto, type FactorOut } from './band-tables';
-import { BOLTZMANN, ELECTRON_MASS, ELEMENTARY_CHARGE, K_OVER_E, PLANCK } from './constants';
+import { BAND_MAX_TEMPERATURE, BAND_MIN_TEMPERATURE, ELEMENTARY_CHARGE, K_OVER_E, LN_DOS_PREFACTOR } from './constants';
 import type { MaterialFamily, Properties } from './material-family';
+import { twoBandFamily } from './two-band-model';
 import { cm2PerVsToM2PerVs } from '../units';
 
 export type BandParameters = {
@@ -27,12 +28,26 @@ export type BandParameters = {
   latticeKappa300: number;
   /** Exponent b in κ_L ∝ (T/300 K)^b (−1 for umklapp scattering). */
   latticeKappaExponent: number;
+  /** The band across the gap (electrons of a p-type family, holes of an n-type one); absent: one band, no bipolar conduction. */
+  minority?: MinorityBand;
+};
+
+/** The minority band of a two-band family: parabolic, acoustic-phonon scattering, like the majority band. */
+export type MinorityBand = {
+  /** Density-of-states effective mass over the free-electron mass. */
+  effectiveMass: number;
+  /** Non-degenerate drift mobility at 300 K [cm²/(V·s)]. */
+  mobility300: number;
+  /** Exponent in μ₀ ∝ (T/300 K)^a. */
+  mobilityExponent: number;
+  /** Band gap at 0 K, Eg0 [eV]. */
+  bandGap: number;
+  /** β in Eg(T) = Eg0 − β·T [eV/K] (positive: the gap narrows as T rises). */
+  bandGapSlope: number;
 };
 
 const LN10 = Math.LN10;
 const LN300 = Math.log(300);
-/** ln of 4π(2·m_e·k/h²)^{3/2} [m⁻³ K^{-3/2}]: N(T) = e^this·(m*·T)^{3/2}. */
-const LN_DOS_PREFACTOR = Math.log(4 * Math.PI * Math.pow((2 * ELECTRON_MASS * BOLTZMANN) / (PLANCK * PLANCK), 1.5));
 const LN_CM3_TO_M3 = Math.log(1e6);
 // Module-local copies: under tsx an imported binding is read through a
 // getter on every access, which shows in the integrator's inner loop.
@@ -41,16 +56,16 @@ const KE = K_OVER_E;
 const K_OVER_E_SQ = K_OVER_E * K_OVER_E;
 const factorsInto = bandFactorsInto;
 
-/** Band-model temperatures the engine accepts [K]; beyond, one band at fixed doping is no model. */
-export const BAND_MIN_TEMPERATURE = 1;
-export const BAND_MAX_TEMPERATURE = 2000;
+export { BAND_MIN_TEMPERATURE, BAND_MAX_TEMPERATURE };
 
 /** ln(n/N(T)): the table variable, from log10(n/cm⁻³) and T. */
 export function reducedConcentrationLog(p: BandParameters, log10Doping: number, temperature: number): number {
   return LN10 * log10Doping + LN_CM3_TO_M3 - LN_DOS_PREFACTOR - 1.5 * Math.log(p.effectiveMass * temperature);
 }
 
+/** The band-model family: one band, or two (two-band-model.ts) when a minority band is given. */
 export function bandFamily(p: BandParameters): MaterialFamily {
+  if (p.minority) return twoBandFamily(p, p.minority);
   const sign = p.carrier === 'n' ? -1 : 1;
   const mu300 = cm2PerVsToM2PerVs(p.mobility300);
   const uOffset = -LN_DOS_PREFACTOR - 1.5 * Math.log(p.effectiveMass);

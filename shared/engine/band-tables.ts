@@ -49,7 +49,7 @@ export function factorsFromIntegrals(eta: number, f0: number, fHalf: number, f1:
  * For j = ½ the first three corrections are π²/12·η^{−½}, 7π⁴/960·η^{−5/2},
  * 31π⁶/4608·η^{−9/2}; the next is ~1e-13 relative at η = 50.
  */
-function sommerfeldHalf(eta: number): { value: number; slope: number } {
+export function sommerfeldHalf(eta: number): { value: number; slope: number } {
   const r = Math.sqrt(eta);
   const c1 = PI2 / 12;
   const c2 = (7 * PI2 * PI2) / 960;
@@ -177,6 +177,65 @@ export function bandFactorsInto(u: number, out: FactorOut): void {
   out.seebeck = c[o] + t * (c[o + 1] + t * (c[o + 2] + t * c[o + 3]));
   out.lorenz = c[o + 4] + t * (c[o + 5] + t * (c[o + 6] + t * c[o + 7]));
   out.mobility = c[o + 8] + t * (c[o + 9] + t * (c[o + 10] + t * c[o + 11]));
+}
+
+/** Scratch for the two-band solve: η(u) and its slope dη/du, with the transport factors. */
+export type FactorEtaOut = FactorOut & { eta: number; etaSlope: number };
+
+/**
+ * s, ℓ, g, η and dη/du at u into out (no allocation). The two-band model's
+ * charge-neutrality Newton needs η and its slope; outside the table the
+ * closed forms give them exactly.
+ */
+export function bandFactorsEtaInto(u: number, out: FactorEtaOut): void {
+  if (u < U_LOW) {
+    const f = nonDegenerateFactors(u);
+    const r = Math.exp(u) / SQRT_PI_2;
+    const z = r + (r * r) / (2 * Math.SQRT2);
+    out.seebeck = f.seebeck;
+    out.lorenz = f.lorenz;
+    out.mobility = f.mobility;
+    out.eta = f.eta;
+    // η = ln z, z = r + r²/2^{3/2}, dr/du = r.
+    out.etaSlope = (r + (r * r) / Math.SQRT2) / z;
+    return;
+  }
+  if (u > U_HIGH) {
+    const f = degenerateFactors(u);
+    const { value, slope } = sommerfeldHalf(f.eta);
+    out.seebeck = f.seebeck;
+    out.lorenz = f.lorenz;
+    out.mobility = f.mobility;
+    out.eta = f.eta;
+    // u = ln F½(η): dη/du = F½/F½′.
+    out.etaSlope = value / slope;
+    return;
+  }
+  const { coefficients: c, cells } = bandTable();
+  let i = Math.floor((u - U_LOW) / U_STEP);
+  if (i >= cells) i = cells - 1;
+  const t = u - (U_LOW + i * U_STEP);
+  const o = 16 * i;
+  out.seebeck = c[o] + t * (c[o + 1] + t * (c[o + 2] + t * c[o + 3]));
+  out.lorenz = c[o + 4] + t * (c[o + 5] + t * (c[o + 6] + t * c[o + 7]));
+  out.mobility = c[o + 8] + t * (c[o + 9] + t * (c[o + 10] + t * c[o + 11]));
+  out.eta = c[o + 12] + t * (c[o + 13] + t * (c[o + 14] + t * c[o + 15]));
+  out.etaSlope = c[o + 13] + t * (2 * c[o + 14] + 3 * t * c[o + 15]);
+}
+
+/** Only η(u) and dη/du into out: the two-band neutrality iteration's call. */
+export function bandEtaInto(u: number, out: FactorEtaOut): void {
+  if (u < U_LOW || u > U_HIGH) {
+    bandFactorsEtaInto(u, out);
+    return;
+  }
+  const { coefficients: c, cells } = bandTable();
+  let i = Math.floor((u - U_LOW) / U_STEP);
+  if (i >= cells) i = cells - 1;
+  const t = u - (U_LOW + i * U_STEP);
+  const o = 16 * i + 12;
+  out.eta = c[o] + t * (c[o + 1] + t * (c[o + 2] + t * c[o + 3]));
+  out.etaSlope = c[o + 1] + t * (2 * c[o + 2] + 3 * t * c[o + 3]);
 }
 
 /** All factors including η at u (for plots and reports; not the hot path). */

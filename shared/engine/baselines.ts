@@ -12,7 +12,7 @@ import { CaseError } from './case-error';
 import { newWarmStart, referenceCurrent, scoreDesign, type DesignScore, type WarmStart } from './evaluate-design';
 import { currentIsFree, legFor, type Counter, type DopingProblem } from './doping-problem';
 import { ztOptimalLog10 } from './family-helpers';
-import { equallySpacedNodes, uniformLeg, withContacts, type Leg } from './leg-profile';
+import { equallySpacedNodes, uniformLeg, withEnds, type Leg } from './leg-profile';
 import { brentMinimize } from './minimize-scalar';
 import { optimizeCurrent } from './optimize-current';
 import { solveLegProblem } from './solve-leg';
@@ -60,7 +60,7 @@ const SCOUT_TOLERANCE = 1e-7;
 
 export function bestUniform(problem: DopingProblem, counter: Counter): UniformBaseline {
   const { lower, upper } = problem;
-  const leg = (y: number) => withContacts(uniformLeg(problem.length, problem.area, problem.family, y), problem.contactResistivity);
+  const leg = (y: number) => withEnds(uniformLeg(problem.length, problem.area, problem.family, y), problem.ends);
   const warm = newWarmStart(leg(lower));
   let best: UniformBaseline | undefined;
   const points = upper > lower ? UNIFORM_SCAN : 1;

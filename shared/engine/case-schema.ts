@@ -8,7 +8,10 @@
  * objective needs) are in check-case.ts.
  */
 import { z } from 'zod';
+import { contactResistivitySchema, parasiticSchema } from './leg-ends';
 import { tableBreach } from './table-limits';
+
+export { contactResistivitySchema, parasiticSchema };
 
 /** Doping range accepted anywhere [cm⁻³]; a value 10⁶ off (m⁻³ typed as cm⁻³) lands outside. */
 export const MIN_PER_CM3 = 1e14;
@@ -51,6 +54,32 @@ export const tableRowSchema = z.strictObject({
   kappa: kappa('kappa'),
 });
 
+/** Temperature [K] up to which a minority band's gap Eg0 − β·T must stay open: coolers reject heat near room temperature. */
+export const GAP_OPEN_TO = 300;
+
+/**
+ * The minority band of a two-band (bipolar) band model. The gap is in eV
+ * and its slope in eV/K, the units of the handbooks; a gap typed in meV
+ * (150 for 0.15 eV) lands above the plausibility limit.
+ */
+export const minorityBandSchema = z
+  .strictObject(
+    {
+      effectiveMass: positive('effectiveMass', 100, 'the effective mass is in units of the free-electron mass'),
+      mobility300: positive('mobility300', 1e6, 'the mobility is in cm²/(V·s)'),
+      mobilityExponent: number('mobilityExponent').min(-10).max(10),
+      bandGap: positive('bandGap', 10, 'the band gap is in eV at 0 K (bismuth telluride ≈ 0.2 eV); a value in meV is 1000 too large'),
+      bandGapSlope: number('bandGapSlope')
+        .min(-0.002, { error: 'bandGapSlope below −0.002 eV/K is implausible: it is β in Eg(T) = Eg0 − β·T, in eV/K (typically 1e-4 to 5e-4)' })
+        .max(0.002, { error: 'bandGapSlope above 0.002 eV/K is implausible: it is β in Eg(T) = Eg0 − β·T, in eV/K (typically 1e-4 to 5e-4)' }),
+    },
+    { error: 'minority must be {effectiveMass, mobility300, mobilityExponent, bandGap, bandGapSlope}' },
+  )
+  .refine((m) => m.bandGap - m.bandGapSlope * GAP_OPEN_TO > 0, {
+    path: ['bandGapSlope'],
+    error: `the gap Eg0 − β·T closes below ${GAP_OPEN_TO} K with this bandGap; it must stay open at least up to ${GAP_OPEN_TO} K (is β in eV/K?)`,
+  });
+
 export const materialSchema = z.discriminatedUnion(
   'kind',
   [
@@ -74,6 +103,8 @@ export const materialSchema = z.discriminatedUnion(
       mobilityExponent: number('mobilityExponent').min(-10).max(10),
       latticeKappa300: kappa('latticeKappa300'),
       latticeKappaExponent: number('latticeKappaExponent').min(-10).max(10),
+      /** Optional minority band (two-band, bipolar model); without it, one band as before. */
+      minority: minorityBandSchema.optional(),
     }),
   ],
   { error: 'material.kind must be "constant", "table" or "band"' },
@@ -83,14 +114,6 @@ export const dopingSchema = z.union([doping('doping'), z.strictObject({ x: z.arr
   error: 'doping must be a number (cm⁻³) or {x: [fractions from the cold end], perCm3: [...]}',
 });
 
-/**
- * Specific electrical contact resistivity of each metal–semiconductor
- * junction [Ω·m²]. Good contacts are 1e-10 to 1e-9 Ω·m² (1e-6 to 1e-5 Ω·cm²);
- * anything above 1e-6 Ω·m² is a unit slip (Ω·cm² is 1e-4 Ω·m²).
- */
-export const contactResistivitySchema = number('contactResistivity')
-  .min(0, { error: 'contactResistivity must not be negative' })
-  .max(1e-6, { error: 'contactResistivity above 1e-6 Ω·m² is implausible: it is in Ω·m² (good contacts are 1e-10 to 1e-9 Ω·m²; 1 Ω·cm² = 1e-4 Ω·m²)' });
 
 export const caseSchema = z.strictObject({
   /** Free text for people; the engine ignores it. */
@@ -114,9 +137,12 @@ export const caseSchema = z.strictObject({
     .max(41, { error: 'controlPoints must be at most 41' })
     .optional(),
   monotone: z.boolean({ error: 'monotone must be true or false' }).optional(),
-  /** Ω·m² per junction (both ends of the leg); default 0, ideal contacts. */
+  /** Ω·m²: one number for both junctions, or {cold, hot}; default 0, ideal contacts. */
   contactResistivity: contactResistivitySchema.optional(),
+  /** Heat onto the leg besides the load: {heatLoad (W)} and/or {radiation: {emissivity, surroundings (K)}}; default none. */
+  parasitic: parasiticSchema.optional(),
 });
 
 export type CaseInput = z.infer<typeof caseSchema>;
 export type MaterialInput = z.infer<typeof materialSchema>;
+export type MinorityBandInput = z.infer<typeof minorityBandSchema>;

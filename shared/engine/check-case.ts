@@ -8,6 +8,7 @@ import { bandFamily } from './band-model';
 import { CaseError } from './case-error';
 import { caseSchema, MAX_PER_CM3, MIN_PER_CM3, type CaseInput, type MaterialInput } from './case-schema';
 import type { Objective } from './evaluate-design';
+import { legEndsOf, type LegEnds } from './leg-ends';
 import type { Segment } from './leg-profile';
 import { constantFamily, type MaterialFamily } from './material-family';
 import { tableFamily } from './table-family';
@@ -42,8 +43,8 @@ export type CheckedCase = {
   /** @default 'maxDeltaT' */
   objective: Objective;
   leg: CheckedLeg;
-  /** Specific contact resistivity of each junction [Ω·m²]; present only when given and > 0. */
-  contactResistivity?: number;
+  /** Contacts of each junction and parasitic heat; present only when some are not ideal. */
+  ends?: LegEnds;
 };
 
 /** Default number of doping nodes for optimize. */
@@ -118,7 +119,12 @@ function checkDopingProfile(input: CaseInput, family: MaterialFamily): { x: numb
 }
 
 function checkTemperatureRange(family: MaterialFamily, value: number | undefined, field: string) {
-  if (value === undefined || family.kind !== 'table') return;
+  if (value === undefined) return;
+  // A band model's range is 1–2000 K, narrowed by a minority band whose gap Eg0 − β·T closes earlier.
+  if (family.kind === 'band' && value > family.maxTemperature) {
+    throw new CaseError(field, `${value} K is above ${Number(family.maxTemperature.toPrecision(4))} K, where the band gap Eg0 − β·T of material.minority closes`);
+  }
+  if (family.kind !== 'table') return;
   if (value < family.minTemperature || value > family.maxTemperature) {
     throw new CaseError(field, `${value} K is outside the table's temperature range ${family.minTemperature}–${family.maxTemperature} K`);
   }
@@ -164,8 +170,8 @@ export function parseCase(json: unknown, mode: Mode = 'optimize'): CheckedCase {
   if (input.segments && input.material) throw new CaseError('segments', 'give either segments or a material, not both');
   if (!input.segments && !input.material) throw new CaseError('material', 'give either segments or a material');
   checkConditions(input, mode, objective);
-  const contact = input.contactResistivity ? { contactResistivity: input.contactResistivity } : {};
-  const base = { mode, hotSide: input.hotSide, length: input.length, area: input.area, current: input.current, coldSide: input.coldSide, objective, ...contact };
+  const ends = legEndsOf(input.contactResistivity, input.parasitic);
+  const base = { mode, hotSide: input.hotSide, length: input.length, area: input.area, current: input.current, coldSide: input.coldSide, objective, ...(ends ? { ends } : {}) };
   const heatLoad = mode === 'solve' ? (input.coldSide === undefined ? (input.heatLoad ?? 0) : undefined) : objective === 'maxHeatLoad' ? undefined : (input.heatLoad ?? 0);
 
   if (input.segments) {

@@ -30,13 +30,13 @@ describe('curves and module cases', () => {
     const c = parseCurvesCase(example('detector-leg-curves.json'));
     expect(c.conditions).toEqual({ hotSide: 300, deltaT: 40 });
     expect(c.options).toEqual({ points: 40, currentLimit: 5 });
-    expect(c.leg.contactResistivity).toBe(5e-10);
+    expect(c.leg.ends).toEqual({ contacts: { cold: 5e-10, hot: 5e-10 } });
     const m = parseModuleCase(example('detector-module.json'));
     expect(m.module.couples).toBe(31);
     expect(m.module.n.area).toBeCloseTo(1.2e-6, 18);
     expect(m.areaRatio).toBeCloseTo(1.2, 12);
-    expect(m.module.p.contactResistivity).toBe(5e-10);
-    expect(m.module.n.contactResistivity).toBe(5e-10);
+    expect(m.module.p.ends).toEqual({ contacts: { cold: 5e-10, hot: 5e-10 } });
+    expect(m.module.n.ends).toEqual({ contacts: { cold: 5e-10, hot: 5e-10 } });
     expect(m.module.coldPlateResistance).toBe(0.08);
   });
 
@@ -87,8 +87,8 @@ describe('curves and module cases', () => {
 
   test('a per-leg contactResistivity overrides the module’s', () => {
     const m = parseModuleCase({ ...moduleJson, contactResistivity: 1e-9, p: { ...leg, contactResistivity: 2e-10 } });
-    expect(m.module.p.contactResistivity).toBe(2e-10);
-    expect(m.module.n.contactResistivity).toBe(1e-9);
+    expect(m.module.p.ends?.contacts).toEqual({ cold: 2e-10, hot: 2e-10 });
+    expect(m.module.n.ends?.contacts).toEqual({ cold: 1e-9, hot: 1e-9 });
   });
 
   test('parseLegDefinition names fields under its prefix', () => {

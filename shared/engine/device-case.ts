@@ -8,7 +8,7 @@
  */
 import { z } from 'zod';
 import { CaseError } from './case-error';
-import { caseSchema, contactResistivitySchema } from './case-schema';
+import { caseSchema, contactResistivitySchema, parasiticSchema } from './case-schema';
 import { fieldPath, parseCase } from './check-case';
 import type { DeltaTOptions } from './delta-t-curve';
 import type { LegDefinition, ModuleDefinition, TradeOptions } from './module';
@@ -50,8 +50,10 @@ const legFields = {
   material: shape.material,
   doping: shape.doping,
   segments: shape.segments,
-  /** Ω·m² per junction (both ends); default 0. */
+  /** Ω·m²: both junctions, or {cold, hot}; default 0. */
   contactResistivity: contactResistivitySchema.optional(),
+  /** Heat onto the leg besides the load (W, or radiation onto its sides); default none. */
+  parasitic: parasiticSchema.optional(),
 };
 
 /** One leg: `{length, area, material, doping}` or `{length, area, segments}`, optional contactResistivity. */
@@ -135,10 +137,10 @@ function checkLeg(input: LegJson, area: number, hotSide: number, coldSide: numbe
   if (input.material && input.material.kind !== 'constant' && input.doping === undefined) {
     throw new CaseError(at('doping'), 'is required for a table or band material: a number (cm⁻³) or {x, perCm3}');
   }
-  const { description: _description, contactResistivity, ...leg } = input;
+  const { description: _description, ...leg } = input;
   try {
     const c = parseCase({ ...leg, area, hotSide, ...(coldSide !== undefined ? { coldSide } : {}), current: 0 }, 'solve');
-    return { length: c.length, area: c.area, leg: c.leg, ...(contactResistivity ? { contactResistivity } : {}) };
+    return { length: c.length, area: c.area, leg: c.leg, ...(c.ends ? { ends: c.ends } : {}) };
   } catch (e) {
     if (!(e instanceof CaseError)) throw e;
     if (e.field === 'hotSide') throw e;

@@ -19,6 +19,7 @@
  */
 import type { Leg } from './leg-profile';
 import { legPointAt, newLegPointWarm, type LegPointWarm } from './leg-point';
+import { contactSum } from './leg-ends';
 import { legAverages } from './shoot';
 
 export type DeviceLeg = { leg: Leg; count: number };
@@ -86,7 +87,7 @@ export function deviceSolver(device: Device, tolerance: number): DeviceSolver {
     for (const { leg, count } of device.legs) {
       const a = legAverages(leg, temperature);
       seebeck += count * Math.abs(a.seebeck);
-      resistance += (count * (a.resistivity * leg.length + 2 * (leg.contactResistivity ?? 0))) / leg.area;
+      resistance += (count * (a.resistivity * leg.length + contactSum(leg.ends))) / leg.area;
       conductance += (count * a.kappa * leg.area) / leg.length;
     }
     return { seebeck, resistance, conductance };

@@ -4,7 +4,8 @@
  * layout, and whether the current is fixed.
  */
 import type { Conditions } from './evaluate-design';
-import { equallySpacedNodes, gradedLeg, withContacts, type Leg } from './leg-profile';
+import type { LegEnds } from './leg-ends';
+import { equallySpacedNodes, gradedLeg, withEnds, type Leg } from './leg-profile';
 import type { MaterialFamily } from './material-family';
 
 export type DopingProblem = {
@@ -22,8 +23,8 @@ export type DopingProblem = {
   current?: number;
   /** Relative accuracy of each solve. */
   tolerance: number;
-  /** Specific contact resistivity of each junction [Ω·m²]; absent = ideal contacts. */
-  contactResistivity?: number;
+  /** Contacts of each junction and parasitic heat; absent = ideal. */
+  ends?: LegEnds;
 };
 
 /** Counts leg solves across every phase of a run. */
@@ -34,7 +35,7 @@ export function nodeFractions(problem: DopingProblem): number[] {
 }
 
 export function legFor(problem: DopingProblem, x: readonly number[], log10: readonly number[]): Leg {
-  return withContacts(gradedLeg(problem.length, problem.area, problem.family, x, log10), problem.contactResistivity);
+  return withEnds(gradedLeg(problem.length, problem.area, problem.family, x, log10), problem.ends);
 }
 
 /** Whether the current is an optimisation variable (free, and not fixed by maxCop's conditions). */

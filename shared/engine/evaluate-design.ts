@@ -8,6 +8,7 @@
 import { brentMinimize } from './minimize-scalar';
 import { secantThenBrent } from './find-root';
 import { integrateLeg } from './integrate';
+import { contactSum } from './leg-ends';
 import type { Leg } from './leg-profile';
 import { legAverages, legFluxScale, shootColdSide, shootHeatLoad } from './shoot';
 import { odeToleranceFor } from './solve-leg';
@@ -41,10 +42,10 @@ export function newWarmStart(leg: Leg): WarmStart {
   return { stepHint: { step: leg.length / 16 } };
 }
 
-/** Reference current S̄·Th/R̄ of the leg's averaged properties (the uniform leg's optimum is near it). */
+/** Reference current S̄·Th/R̄ of the leg's averaged properties, contacts included (the uniform leg's optimum is near it). */
 export function referenceCurrent(leg: Leg, hotSide: number): number {
   const avg = legAverages(leg, hotSide);
-  const resistance = (avg.resistivity * leg.length) / leg.area;
+  const resistance = (avg.resistivity * leg.length + contactSum(leg.ends)) / leg.area;
   return Math.abs(avg.seebeck * hotSide) / resistance;
 }
 
@@ -62,14 +63,14 @@ export function scoreDesign(leg: Leg, current: number, conditions: Conditions, w
     warm.guess = out.shot.coldFlux;
     warm.slope = out.shot.slope;
     const heatLoad = out.shot.coldFlux * leg.area;
-    const power = (out.shot.hotFlux - out.shot.coldFlux) * leg.area;
+    const power = (out.shot.hotFlux - out.shot.coldFlux - out.shot.parasitic) * leg.area;
     return { feasible: true, value: heatLoad, current, coldSide, heatLoad, deltaT: hotSide - coldSide, cop: power > 0 ? heatLoad / power : null };
   }
   const out = shootColdSide(leg, J, hotSide, conditions.heatLoad / leg.area, settings);
   if (!out.ok || !out.shot.converged) return { ...INFEASIBLE, current };
   warm.guess = out.shot.coldSide;
   warm.slope = out.shot.slope;
-  const power = (out.shot.hotFlux - out.shot.coldFlux) * leg.area;
+  const power = (out.shot.hotFlux - out.shot.coldFlux - out.shot.parasitic) * leg.area;
   const deltaT = hotSide - out.shot.coldSide;
   return { feasible: true, value: deltaT, current, coldSide: out.shot.coldSide, heatLoad: conditions.heatLoad, deltaT, cop: power > 0 ? conditions.heatLoad / power : null };
 }
@@ -116,7 +117,7 @@ function scoreCop(leg: Leg, conditions: Conditions, warm: WarmStart, tolerance: 
   warm.current = current;
   const end = hotEnd(current, fine);
   if (end.status !== 'ok') return { ...INFEASIBLE, current };
-  const power = (end.flux - q0) * leg.area;
+  const power = (end.flux - q0 - end.parasitic) * leg.area;
   const cop = power > 0 ? heatLoad / power : null;
   return { feasible: true, value: cop ?? 0, current, coldSide, heatLoad, deltaT: hotSide - coldSide, cop };
 }

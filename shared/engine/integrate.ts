@@ -16,14 +16,23 @@
  * Constant-property sections have a polynomial solution (the system matrix
  * is nilpotent), which a fifth-order step reproduces exactly.
  *
- * Contacts (leg.contactResistivity = ρc > 0): each end is a junction of zero
- * thickness with resistance ρc/A and no temperature drop. Its Joule heat
- * J²ρc per unit area is released at the junction, so q jumps by J²ρc at
+ * Contacts (leg.ends.contacts = {cold, hot} ρc): each end is a junction of
+ * zero thickness with resistance ρc/A and no temperature drop. Its Joule heat
+ * J²ρc per unit area is released at the junction, so q jumps by J²ρc_cold at
  * x = 0 (the heat entering the leg is the heat drawn from the load plus the
- * cold contact's Joule heat) and again at x = L, and V by J·ρc at each end.
- * The coldFlux argument and the returned flux and voltage are then the
+ * cold contact's Joule heat) and by J²ρc_hot at x = L, and V by J·ρc at each
+ * end. The coldFlux argument and the returned flux and voltage are then the
  * junction-side values: Qc/A, Qh/A and the voltage across leg and contacts.
+ *
+ * Parasitic heat (leg.ends.parasitic): a fixed load Qp onto the cold junction
+ * adds Qp/A to the jump at x = 0; radiation from surroundings at Ts onto the
+ * sides is a distributed source in the heat balance,
+ *   dq/dx = J²/σ + J·S·dT/dx + ε·σ_SB·(P/A)·(Ts⁴ − T⁴),
+ * positive (q grows towards the hot end) where the leg is colder than its
+ * surroundings. `parasitic` returns the total per unit area (Qp/A + ∫ source
+ * dx) so that Qh − Qc − parasitic·A = V·I still checks the energy balance.
  */
+import { coldJump, radiationTerm } from './leg-ends';
 import type { Leg, LegSection } from './leg-profile';
 import type { Properties } from './material-family';
 
@@ -67,6 +76,8 @@ export type IntegrationResult = {
   temperature: number;
   flux: number;
   voltage: number;
+  /** Parasitic heat taken up by the leg per unit cross-section [W/m²]: fixed load / A + radiation absorbed by the sides. */
+  parasitic: number;
   steps: number;
   rejected: number;
   evaluations: number;
@@ -91,6 +102,7 @@ const MIN_SHRINK = 0.2;
 const kT = new Float64Array(7);
 const kq = new Float64Array(7);
 const kV = new Float64Array(7);
+const kW = new Float64Array(7);
 const props: Properties = { seebeck: 0, sigma: 0, kappa: 0 };
 
 export function integrateLeg(leg: Leg, currentDensity: number, coldTemperature: number, coldFlux: number, options: IntegrationOptions): IntegrationResult {
@@ -107,11 +119,13 @@ export function integrateLeg(leg: Leg, currentDensity: number, coldTemperature: 
   let T = coldTemperature;
   let q = coldFlux;
   let V = 0;
-  const contact = leg.contactResistivity ?? 0;
-  if (contact > 0) {
-    q += J * J * contact;
-    V += J * contact;
-  }
+  const coldContact = leg.ends?.contacts?.cold ?? 0;
+  const hotContact = leg.ends?.contacts?.hot ?? 0;
+  const fixedLoad = (leg.ends?.parasitic?.heatLoad ?? 0) / leg.area;
+  q += coldJump(leg.ends, leg.area, J);
+  V += J * coldContact;
+  let W = 0; // radiation absorbed so far, per unit area
+  const { coefficient: radiation, ts4 } = radiationTerm(leg.ends, leg.area);
   let steps = 0;
   let rejected = 0;
   let evaluations = 0;
@@ -128,15 +142,18 @@ export function integrateLeg(leg: Leg, currentDensity: number, coldTemperature: 
     const S = props.seebeck;
     const dT = (S * t * J - flux) / props.kappa;
     const joule = J / props.sigma;
+    const t2 = t * t;
+    const source = radiation === 0 ? 0 : radiation * (ts4 - t2 * t2);
     kT[k] = dT;
-    kq[k] = J * joule + J * S * dT;
+    kq[k] = J * joule + J * S * dT + source;
     kV[k] = joule + S * dT;
+    kW[k] = source;
     evaluations++;
   };
 
   const finish = (status: IntegrationStatus, x: number): IntegrationResult => {
     if (options.stepHint) options.stepHint.step = h;
-    return { status, x, temperature: T, flux: q, voltage: V, steps, rejected, evaluations };
+    return { status, x, temperature: T, flux: q, voltage: V, parasitic: fixedLoad + W, steps, rejected, evaluations };
   };
 
   for (const s of leg.sections) {
@@ -188,6 +205,7 @@ export function integrateLeg(leg: Leg, currentDensity: number, coldTemperature: 
       if (replay && !(Tn > 0)) return finish('low', x);
       if (err <= 1 || replay) {
         const Vn = V + step * (B1 * kV[0] + B3 * kV[2] + B4 * kV[3] + B5 * kV[4] + B6 * kV[5]);
+        if (radiation !== 0) W += step * (B1 * kW[0] + B3 * kW[2] + B4 * kW[3] + B5 * kW[4] + B6 * kW[5]);
         x = landing ? target : x + step;
         T = Tn;
         q = qn;
@@ -197,6 +215,7 @@ export function integrateLeg(leg: Leg, currentDensity: number, coldTemperature: 
         kT[0] = kT[6];
         kq[0] = kq[6];
         kV[0] = kV[6];
+        kW[0] = kW[6];
         const growth = err === 0 ? MAX_GROWTH : Math.min(MAX_GROWTH, Math.max(MIN_SHRINK, SAFETY * Math.pow(err, -0.2)));
         // After a step shortened to land on a point, resume with the step we
         // wanted: growing it by the short step's (small) error overshoots.
@@ -215,9 +234,7 @@ export function integrateLeg(leg: Leg, currentDensity: number, coldTemperature: 
     }
     onPoint?.(x, T, q, V, s);
   }
-  if (contact > 0) {
-    q += J * J * contact;
-    V += J * contact;
-  }
+  q += J * J * hotContact;
+  V += J * hotContact;
   return finish('ok', leg.length);
 }

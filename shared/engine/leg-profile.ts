@@ -7,6 +7,7 @@
  * restarts exactly at every section boundary (T and q are continuous there;
  * S, σ, κ or their slopes may jump).
  */
+import type { LegEnds } from './leg-ends';
 import { constantFamily, type MaterialFamily } from './material-family';
 
 export type LegSection = {
@@ -30,12 +31,13 @@ export type Leg = {
   /** Whether a doping-controlled family is used (the profile then reports n). */
   graded: boolean;
   /**
-   * Specific electrical contact resistivity of each end's metal–semiconductor
-   * junction [Ω·m²]; absent or 0 = ideal contacts. Each end adds ρc/A to the
-   * leg's resistance, and its Joule heat I²ρc/A is released at that
-   * junction (see integrate.ts and PHYSICS.md, "Contacts").
+   * Contacts (specific electrical contact resistivity of the cold and the
+   * hot junction [Ω·m²]) and parasitic heat (a fixed load onto the cold
+   * junction, radiation onto the sides); absent = ideal. Each junction adds
+   * ρc/A to the leg's resistance and releases its Joule heat I²ρc/A where it
+   * is (see integrate.ts and PHYSICS.md, "Contacts", "Parasitic heat").
    */
-  contactResistivity?: number;
+  ends?: LegEnds;
 };
 
 export type Segment = { fraction: number; seebeck: number; sigma: number; kappa: number };
@@ -99,8 +101,8 @@ export function profileAt(x: readonly number[], log10Doping: readonly number[], 
   return log10Doping[log10Doping.length - 1];
 }
 
-/** The same leg with contacts of specific resistivity ρc [Ω·m²] at both ends (0 = ideal contacts, the leg itself). */
-export function withContacts(leg: Leg, contactResistivity: number | undefined): Leg {
-  if (!contactResistivity) return leg;
-  return { ...leg, contactResistivity };
+/** The same leg with its contacts and parasitic heat (undefined = ideal, the leg itself). */
+export function withEnds(leg: Leg, ends: LegEnds | undefined): Leg {
+  if (!ends) return leg;
+  return { ...leg, ends };
 }

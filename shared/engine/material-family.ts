@@ -22,6 +22,12 @@ export type MaterialFamily = {
    * integrator's inner loop: must not allocate.
    */
   properties(log10Doping: number, temperature: number, out: Properties): void;
+  /**
+   * Two-band families only: the share of the electrical conductivity (so of
+   * the current) that minority carriers carry, σ_minority/σ, at
+   * log10(n / cm⁻³) and T — where bipolar conduction sets in.
+   */
+  minorityShare?(log10Doping: number, temperature: number): number;
 };
 
 /** Dimensionless figure of merit zT = S²σT/κ. */

@@ -16,7 +16,7 @@ const constant = (props: typeof P, area: number, contactResistivity = 0): LegDef
   length: L,
   area,
   leg: { kind: 'segments', segments: [{ fraction: 1, ...props }] },
-  ...(contactResistivity ? { contactResistivity } : {}),
+  ...(contactResistivity ? { ends: { contacts: { cold: contactResistivity, hot: contactResistivity } } } : {}),
 });
 
 /**
@@ -98,13 +98,13 @@ const bandP = (area: number, contactResistivity = 5e-10): LegDefinition => ({
   length: 1.2e-3,
   area,
   leg: { kind: 'family', family: pFamily, doping: { x: nodes, log10: nodes.map((f) => 19.6 - 1.5 * f * f) } },
-  contactResistivity,
+  ends: { contacts: { cold: contactResistivity, hot: contactResistivity } },
 });
 const bandN = (area: number, contactResistivity = 5e-10): LegDefinition => ({
   length: 1.2e-3,
   area,
   leg: { kind: 'family', family: nFamily, doping: { x: [0, 1], log10: [19.08, 19.08] } },
-  contactResistivity,
+  ends: { contacts: { cold: contactResistivity, hot: contactResistivity } },
 });
 
 describe('modules of N couples (temperature-dependent band-model legs, contacts)', () => {

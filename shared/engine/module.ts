@@ -15,7 +15,8 @@
 import { CaseError } from './case-error';
 import { deltaTCurveOf, type DeltaTCurve, type DeltaTOptions } from './delta-t-curve';
 import { deviceSolver, type Device } from './device';
-import { gradedLeg, segmentedLeg, withContacts, type Leg, type Segment } from './leg-profile';
+import type { LegEnds } from './leg-ends';
+import { gradedLeg, segmentedLeg, withEnds, type Leg, type Segment } from './leg-profile';
 import type { MaterialFamily } from './material-family';
 import { checkConditions, checkCurveOptions, curveOf, flagged, operatingSummary, type CurveConditions, type CurveOptions, type OperatingCurve, type OperatingPoint } from './operating-curve';
 
@@ -29,8 +30,8 @@ export type LegDefinition = {
   area: number;
   /** Constant-property segments from the cold end, or a family with its doping profile (log10 of cm⁻³; none for a constant material). */
   leg: { kind: 'segments'; segments: Segment[] } | { kind: 'family'; family: MaterialFamily; doping?: { x: number[]; log10: number[] } };
-  /** Specific electrical contact resistivity of each end's junction [Ω·m²]; @default 0 */
-  contactResistivity?: number;
+  /** Contacts of each junction and parasitic heat onto the leg; @default ideal */
+  ends?: LegEnds;
 };
 
 export type CoupleDefinition = { p: LegDefinition; n: LegDefinition };
@@ -80,13 +81,16 @@ export function legFromDefinition(d: LegDefinition, field = ''): Leg {
   const at = (name: string) => (field ? `${field}.${name}` : name);
   if (!(d.length > 0 && Number.isFinite(d.length))) throw new CaseError(at('length'), 'must be a length in metres, greater than 0');
   if (!(d.area > 0 && Number.isFinite(d.area))) throw new CaseError(at('area'), 'must be an area in m², greater than 0');
-  const contact = d.contactResistivity ?? 0;
-  if (!(contact >= 0 && Number.isFinite(contact))) throw new CaseError(at('contactResistivity'), 'must be 0 or more (Ω·m²)');
-  if (d.leg.kind === 'segments') return withContacts(segmentedLeg(d.length, d.area, d.leg.segments), contact);
+  const contacts = d.ends?.contacts;
+  for (const end of ['cold', 'hot'] as const) {
+    const v = contacts?.[end] ?? 0;
+    if (!(v >= 0 && Number.isFinite(v))) throw new CaseError(at(`contactResistivity.${end}`), 'must be 0 or more (Ω·m²)');
+  }
+  if (d.leg.kind === 'segments') return withEnds(segmentedLeg(d.length, d.area, d.leg.segments), d.ends);
   const family = d.leg.family;
   if (!d.leg.doping && family.kind !== 'constant') throw new CaseError(at('doping'), 'is required for a table or band material: a number (cm⁻³) or {x, perCm3}');
   const doping = d.leg.doping ?? { x: [0, 1], log10: [0, 0] };
-  return withContacts(gradedLeg(d.length, d.area, family, doping.x, doping.log10), contact);
+  return withEnds(gradedLeg(d.length, d.area, family, doping.x, doping.log10), d.ends);
 }
 
 const materialField = (d: LegDefinition, side: 'p' | 'n') => `${side}.${d.leg.kind === 'segments' ? 'segments' : 'material'}`;

@@ -17,7 +17,7 @@ const constantLeg = (contactResistivity?: number): LegDefinition => ({
   length: L,
   area: A,
   leg: { kind: 'segments', segments: [{ fraction: 1, seebeck: S, sigma: SIGMA, kappa: KAPPA }] },
-  ...(contactResistivity !== undefined ? { contactResistivity } : {}),
+  ...(contactResistivity !== undefined ? { ends: { contacts: { cold: contactResistivity, hot: contactResistivity } } } : {}),
 });
 const relative = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 
@@ -151,8 +151,8 @@ describe('operating curve of a graded band-model leg against an independent inte
   const family = bandFamily({ carrier: 'p', effectiveMass: 1, mobility300: 350, mobilityExponent: -1.5, latticeKappa300: 1, latticeKappaExponent: -1 });
   const nodes = [0, 0.25, 0.5, 0.75, 1];
   const rc = 5e-10;
-  const definition: LegDefinition = { length: L, area: A, leg: { kind: 'family', family, doping: { x: nodes, log10: nodes.map((f) => 19.6 - 1.3 * f * f) } }, contactResistivity: rc };
-  const bare = legFromDefinition({ ...definition, contactResistivity: 0 });
+  const definition: LegDefinition = { length: L, area: A, leg: { kind: 'family', family, doping: { x: nodes, log10: nodes.map((f) => 19.6 - 1.3 * f * f) } }, ends: { contacts: { cold: rc, hot: rc } } };
+  const bare = legFromDefinition({ ...definition, ends: undefined });
   const tc = 255;
 
   /** Qc, Qh, V by odex, with the contacts added by hand: ρc·J² of heat and ρc·J of voltage at each end. */

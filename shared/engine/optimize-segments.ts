@@ -7,7 +7,8 @@
  */
 import { minimizeBox } from './box-bfgs';
 import { newWarmStart, referenceCurrent, scoreDesign, type Conditions, type DesignScore } from './evaluate-design';
-import { segmentedLeg, withContacts, type Segment } from './leg-profile';
+import type { LegEnds } from './leg-ends';
+import { segmentedLeg, withEnds, type Segment } from './leg-profile';
 import { optimizeCurrent } from './optimize-current';
 
 export type SegmentProblem = {
@@ -18,8 +19,8 @@ export type SegmentProblem = {
   freeFractions: boolean;
   current?: number;
   tolerance: number;
-  /** Specific contact resistivity of each junction [Ω·m²]; absent = ideal contacts. */
-  contactResistivity?: number;
+  /** Contacts of each junction and parasitic heat; absent = ideal. */
+  ends?: LegEnds;
 };
 
 export type SegmentOptimum = { fractions: number[]; score: DesignScore; iterations: number; evaluations: number; stopped: boolean };
@@ -56,7 +57,7 @@ const withFractions = (segments: readonly Segment[], fractions: readonly number[
 
 export function optimizeSegments(problem: SegmentProblem, options: SegmentRunOptions = {}): SegmentOptimum {
   const { segments, length, area, conditions, tolerance } = problem;
-  const leg = (fractions: readonly number[]) => withContacts(segmentedLeg(length, area, withFractions(segments, fractions)), problem.contactResistivity);
+  const leg = (fractions: readonly number[]) => withEnds(segmentedLeg(length, area, withFractions(segments, fractions)), problem.ends);
   const startFractions = options.start?.fractions ?? segments.map((s) => s.fraction);
   const freeCurrent = problem.current === undefined && conditions.objective !== 'maxCop';
   let evaluations = 0;
@@ -110,7 +111,7 @@ export function bestSingleSegment(problem: SegmentProblem): { segment: number; s
   let best: { segment: number; score: DesignScore; evaluations: number } | undefined;
   let evaluations = 0;
   problem.segments.forEach((s, k) => {
-    const leg = withContacts(segmentedLeg(problem.length, problem.area, [{ ...s, fraction: 1 }]), problem.contactResistivity);
+    const leg = withEnds(segmentedLeg(problem.length, problem.area, [{ ...s, fraction: 1 }]), problem.ends);
     const r =
       problem.current === undefined && problem.conditions.objective !== 'maxCop'
         ? optimizeCurrent(leg, problem.conditions, problem.tolerance)

@@ -8,7 +8,7 @@ import { CaseError } from './case-error';
 import type { CheckedCase } from './check-case';
 import type { Conditions, DesignScore, Objective } from './evaluate-design';
 import { nodeFractions, type Counter, type DopingProblem } from './doping-problem';
-import { gradedLeg, profileAt, segmentedLeg, withContacts, type Leg, type Segment } from './leg-profile';
+import { gradedLeg, profileAt, segmentedLeg, withEnds, type Leg, type Segment } from './leg-profile';
 import { optimizeDoping } from './optimize-doping';
 import { bestSingleSegment, optimizeSegments } from './optimize-segments';
 import { nodeSensitivities, type NodeSensitivity } from './sensitivity';
@@ -90,9 +90,9 @@ export type OptimizeResult = CaseSolution & {
 const defaultClock = (): number => (typeof performance !== 'undefined' ? performance.now() : Date.now());
 
 function buildLeg(c: CheckedCase): Leg {
-  if (c.leg.kind === 'segments') return withContacts(segmentedLeg(c.length, c.area, c.leg.segments), c.contactResistivity);
+  if (c.leg.kind === 'segments') return withEnds(segmentedLeg(c.length, c.area, c.leg.segments), c.ends);
   const doping = c.leg.doping ?? { x: [0, 1], log10: [0, 0] };
-  return withContacts(gradedLeg(c.length, c.area, c.leg.family, doping.x, doping.log10), c.contactResistivity);
+  return withEnds(gradedLeg(c.length, c.area, c.leg.family, doping.x, doping.log10), c.ends);
 }
 
 function strip(s: LegSolution): CaseSolution {
@@ -180,7 +180,7 @@ function optimizeSegmented(c: CheckedCase, options: OptimizeOptions, tolerance: 
     freeFractions: c.leg.kind === 'segments' && c.leg.freeFractions,
     current: c.current,
     tolerance,
-    contactResistivity: c.contactResistivity,
+    ends: c.ends,
   };
   if (options.start && options.start.kind !== 'segments') throw new CaseError('start', 'a doping checkpoint cannot resume a segmented leg');
   if (options.start && options.start.fractions.length !== segments.length) throw new CaseError('start.fractions', `needs one fraction per segment (${segments.length})`);
@@ -193,7 +193,7 @@ function optimizeSegmented(c: CheckedCase, options: OptimizeOptions, tolerance: 
   if (!opt.score.feasible) throw new CaseError(c.objective === 'maxCop' ? 'heatLoad' : 'hotSide', 'no current gives a steady state for these conditions');
   const single = segments.length > 1 && c.leg.kind === 'segments' ? bestSingleSegment(problem) : undefined;
   const fitted = segments.map((s, k) => ({ ...s, fraction: opt.fractions[k] }));
-  const solution = finalSolution(c, withContacts(segmentedLeg(c.length, c.area, fitted), c.contactResistivity), opt.score, tolerance);
+  const solution = finalSolution(c, withEnds(segmentedLeg(c.length, c.area, fitted), c.ends), opt.score, tolerance);
   return {
     ...solution,
     objective: { name: c.objective, value: opt.score.value },
@@ -222,7 +222,7 @@ function dopingProblem(c: CheckedCase, tolerance: number): DopingProblem {
     monotone: leg.monotone,
     current: c.current,
     tolerance,
-    contactResistivity: c.contactResistivity,
+    ends: c.ends,
   };
 }
 
@@ -274,7 +274,7 @@ function optimizeDoped(c: CheckedCase, options: OptimizeOptions, tolerance: numb
     shouldStop: options.shouldStop,
     onProgress: (p) => options.onProgress?.({ phase: 'profile', iteration: p.iteration, objective: p.objective, best: p.best, state: checkpoint(p.state.log10, p.state.current) }),
   });
-  const build = (log10: readonly number[]) => withContacts(gradedLeg(c.length, c.area, leg.family, x, log10), c.contactResistivity);
+  const build = (log10: readonly number[]) => withEnds(gradedLeg(c.length, c.area, leg.family, x, log10), c.ends);
   const solution = finalSolution(c, build(opt.log10), opt.score, tolerance);
   const sensitivity = nodeSensitivities({
     x,

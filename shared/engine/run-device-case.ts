@@ -5,6 +5,7 @@
 import { moduleDeltaTCurve, moduleCurve, moduleTrade, operatingCurve, type ModuleTrade } from './module';
 import type { CurvesCase, ModuleCase } from './device-case';
 import type { DeltaTCurve } from './delta-t-curve';
+import type { Contacts } from './leg-ends';
 import type { OperatingCurve } from './operating-curve';
 
 export type CurvesResult = OperatingCurve & { seconds: number };
@@ -17,8 +18,8 @@ export type ModuleResult = {
     areaRatio: number;
     /** N·(A_p + A_n) [m²]. */
     totalLegArea: number;
-    /** Per junction [Ω·m²], each leg. */
-    contactResistivity: { p: number; n: number };
+    /** Each leg's cold and hot junction [Ω·m²]. */
+    contactResistivity: { p: Contacts; n: Contacts };
     coldPlateResistance: number;
     hotPlateResistance: number;
   };
@@ -52,7 +53,7 @@ export function runModule(c: ModuleCase, now: () => number = clock): ModuleResul
       legArea: { p: m.p.area, n: m.n.area },
       areaRatio: c.areaRatio,
       totalLegArea: couples * (m.p.area + m.n.area),
-      contactResistivity: { p: m.p.contactResistivity ?? 0, n: m.n.contactResistivity ?? 0 },
+      contactResistivity: { p: m.p.ends?.contacts ?? { cold: 0, hot: 0 }, n: m.n.ends?.contacts ?? { cold: 0, hot: 0 } },
       coldPlateResistance: m.coldPlateResistance ?? 0,
       hotPlateResistance: m.hotPlateResistance ?? 0,
     },

@@ -1,7 +1,7 @@
 /**
  * The legs of a stored run, as leg definitions for curves and modules: the
  * optimum and its two baselines (best uniform doping, local-best-zT
- * profile), each with the run's geometry, material and contacts.
+ * profile), each with the run's geometry, material, contacts and parasitic heat.
  */
 import { CaseError } from './case-error';
 import { caseSchema } from './case-schema';
@@ -29,7 +29,7 @@ export function legsFromRun(runCase: unknown, result: RunResultLegs): RunLegs {
     throw new CaseError(`case.${fieldPath(issue.path)}`, issue.message);
   }
   const c = parsed.data;
-  const base = { length: c.length, area: c.area, ...(c.contactResistivity ? { contactResistivity: c.contactResistivity } : {}) };
+  const base = { length: c.length, area: c.area, ...(c.contactResistivity !== undefined ? { contactResistivity: c.contactResistivity } : {}), ...(c.parasitic ? { parasitic: c.parasitic } : {}) };
   const b = result.baselines;
   if (c.segments) {
     const segments = c.segments;

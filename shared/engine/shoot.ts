@@ -8,6 +8,7 @@
  */
 import { secantThenBrent } from './find-root';
 import { integrateLeg, type IntegrationResult } from './integrate';
+import { coldJump, radiationTerm } from './leg-ends';
 import type { Leg } from './leg-profile';
 import type { Properties } from './material-family';
 
@@ -48,6 +49,8 @@ export type Shot = {
   hotFlux: number;
   /** Voltage along +x for the signed current density, at the last trial. */
   voltage: number;
+  /** Parasitic heat taken up per unit area at the last trial [W/m²] (see integrate.ts): power = (hotFlux − coldFlux − parasitic)·A. */
+  parasitic: number;
   currentDensity: number;
   /** d T(L) / d(unknown) at the root, for warm starts and error estimates. */
   slope: number;
@@ -165,6 +168,7 @@ function outcome(r: ReturnType<typeof solveUnknown>, hotSide: number, build: (ro
       ...build(r.root),
       hotFlux: r.last.flux,
       voltage: r.last.voltage,
+      parasitic: r.last.parasitic,
       currentDensity: J,
       slope: r.slope,
       residual: r.last.temperature - hotSide,
@@ -174,6 +178,12 @@ function outcome(r: ReturnType<typeof solveUnknown>, hotSide: number, build: (ro
       evaluations: r.evaluations,
     },
   };
+}
+
+/** Radiation onto the sides per unit volume [W/m³] at one temperature (0 without radiation): for the closed-form guesses. */
+function radiationSource(leg: Leg, temperature: number): number {
+  const { coefficient, ts4 } = radiationTerm(leg.ends, leg.area);
+  return coefficient === 0 ? 0 : coefficient * (ts4 - temperature ** 4);
 }
 
 /** Flux scale [W/m²] for q's error weight: conduction across the leg plus Peltier flux. */
@@ -188,16 +198,19 @@ export function shootColdSide(leg: Leg, currentDensity: number, hotSide: number,
   const J = currentDensity;
   // Constant properties: T(L) = Tc·(1 + a) − b exactly (see PHYSICS.md).
   // Properties averaged at Th first, then again at the mean temperature.
-  // Contacts: the flux entering the leg includes the cold contact's Joule heat.
-  const legFlux = coldFlux + J * J * (leg.contactResistivity ?? 0);
-  const estimate = (avg: LegAverages) => {
+  // Contacts and a fixed parasitic load: the flux entering the leg includes
+  // the cold contact's Joule heat and that load; radiation onto the sides
+  // enters like extra Joule heat, taken at the temperature of the averages.
+  const legFlux = coldFlux + coldJump(leg.ends, leg.area, J);
+  const estimate = (avg: LegAverages, temperature: number) => {
     const a = (avg.seebeck * J * L) / avg.kappa;
-    const b = (legFlux * L) / avg.kappa + (J * J * avg.resistivity * L * L) / (2 * avg.kappa);
+    const b = (legFlux * L) / avg.kappa + ((J * J * avg.resistivity + radiationSource(leg, temperature)) * L * L) / (2 * avg.kappa);
     return { a, tc: (hotSide + b) / (1 + a) };
   };
   const atHot = legAverages(leg, hotSide);
-  const first = estimate(atHot);
-  const { a, tc } = settings.guess === undefined && Number.isFinite(first.tc) && first.tc > 0 ? estimate(legAverages(leg, 0.5 * (first.tc + hotSide))) : first;
+  const first = estimate(atHot, hotSide);
+  const mean = 0.5 * (first.tc + hotSide);
+  const { a, tc } = settings.guess === undefined && Number.isFinite(first.tc) && first.tc > 0 ? estimate(legAverages(leg, mean), mean) : first;
   const family = leg.sections[0].family;
   const fluxScale = legFluxScale(leg, hotSide, J, atHot);
   const r = solveUnknown(
@@ -222,7 +235,8 @@ export function shootHeatLoad(leg: Leg, currentDensity: number, hotSide: number,
   const J = currentDensity;
   const a = (avg.seebeck * J * L) / avg.kappa;
   const fluxScale = legFluxScale(leg, hotSide, J);
-  const guess = (avg.kappa * (coldSide * (1 + a) - hotSide) - 0.5 * J * J * avg.resistivity * L * L) / L - J * J * (leg.contactResistivity ?? 0);
+  const source = radiationSource(leg, 0.5 * (hotSide + coldSide));
+  const guess = (avg.kappa * (coldSide * (1 + a) - hotSide) - 0.5 * (J * J * avg.resistivity + source) * L * L) / L - coldJump(leg.ends, leg.area, J);
   // The flux scale bounds any physical heat flux by orders of magnitude.
   const bound = 1e3 * fluxScale + Math.abs(guess);
   const r = solveUnknown(

@@ -191,7 +191,8 @@ export function solveLegProblem(problem: LegProblem, options: SolveOptions & Ran
 
   const heatLoad = shot.coldFlux * leg.area;
   const heatRejected = record.flux * leg.area;
-  const power = heatRejected - heatLoad;
+  // Qh − Qc also carries the parasitic heat the leg took up; the rest is V·I.
+  const power = heatRejected - heatLoad - record.parasitic * leg.area;
   const voltage = leg.sign * record.voltage;
   const electrical = voltage * current;
   const energyBalance = Math.abs(power - electrical) / Math.max(Math.abs(power), Math.abs(electrical), 1e-300);

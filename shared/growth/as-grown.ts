@@ -1,5 +1,5 @@
 import type { DopingProblem } from '../engine/doping-problem';
-import { gradedLeg } from '../engine/leg-profile';
+import { gradedLeg, withEnds } from '../engine/leg-profile';
 import { newWarmStart, scoreDesign, type DesignScore } from '../engine/evaluate-design';
 import { optimizeCurrent } from '../engine/optimize-current';
 import type { ZoneTolerance } from './zone-tolerance';
@@ -12,7 +12,8 @@ export type ZoneVerdict = { zone: number; measured: number | null; verdict: 'wit
 /**
  * The as-grown leg: doping piecewise linear in log10 n between measured
  * positions, constant beyond the first and last. Its performance is
- * predicted at the design's current and at the best current for it.
+ * predicted at the design's current and at the best current for it, with
+ * the design's contacts and parasitic heat.
  */
 export function predictAsGrown(p: DopingProblem, points: GrownPoint[], designCurrent: number): { atDesignCurrent: DesignScore; atBestCurrent: DesignScore } {
   const sorted = [...points].sort((a, b) => a.positionFraction - b.positionFraction);
@@ -21,7 +22,7 @@ export function predictAsGrown(p: DopingProblem, points: GrownPoint[], designCur
   const y = [sorted[0]!.log10, ...sorted.map((q) => q.log10), sorted[sorted.length - 1]!.log10];
   // Points at the very ends duplicate the end nodes; drop zero-length steps.
   const keep = x.map((_, i) => i === 0 || x[i]! > x[i - 1]! + 1e-12);
-  const leg = gradedLeg(p.length, p.area, p.family, x.filter((_, i) => keep[i]), y.filter((_, i) => keep[i]));
+  const leg = withEnds(gradedLeg(p.length, p.area, p.family, x.filter((_, i) => keep[i]), y.filter((_, i) => keep[i])), p.ends);
   return {
     atDesignCurrent: scoreDesign(leg, designCurrent, p.conditions, newWarmStart(leg), p.tolerance),
     atBestCurrent: optimizeCurrent(leg, p.conditions, p.tolerance).score,

@@ -1,4 +1,5 @@
 import { familyFromMaterial, optimizeLeg, parseCase, propertiesAt } from '../engine';
+import { hallCorrection } from '../engine/hall-factor';
 import { buildGrowthSheet } from './growth-sheet';
 import { reportMeasurements } from './measurement-report';
 import { parseMeasurementsCsv } from './parse-measurements';
@@ -34,6 +35,16 @@ describe('growth sheet', () => {
   });
 });
 
+/** The demo band family sampled on a grid, as a measured-style table (only its lack of a band model matters here). */
+function tableMaterial() {
+  const family = familyFromMaterial(material);
+  const rows = [17.5, 18, 18.5, 19, 19.5, 20, 20.5].flatMap((y) => [150, 200, 250, 300, 350].map((t) => {
+    const at = propertiesAt(family, 10 ** y, t);
+    return { perCm3: 10 ** y, temperature: t, seebeck: at.seebeck, sigma: at.sigma, kappa: at.kappa };
+  }));
+  return { kind: 'table' as const, rows };
+}
+
 describe('as-grown measurements against the sheet', () => {
   const family = familyFromMaterial(material);
   const step = sheet.steps[2]!;
@@ -63,6 +74,41 @@ describe('as-grown measurements against the sheet', () => {
     const report = reportMeasurements(caseJson, sheet, 3, parseMeasurementsCsv(csvFor(off), 1.5).points, 300);
     expect(report.verdicts[0]!.verdict).toBe('high');
     expect(report.asGrown.atDesignCurrent.deltaT).toBeLessThan(step.deltaT - 0.5);
+  });
+
+  it('turns Hall concentrations into carrier concentrations with the band model\'s Hall factor, or one entered by hand', () => {
+    // What a Hall measurement of a piece grown to target reads: p_H = p / r_H, r_H from one parabolic band with
+    // acoustic-phonon scattering (3π/8 non-degenerate … 1 degenerate: Putley 1960, from memory; see hall-factor.test.ts).
+    const hallOf = (n: number): number => {
+      let pH = n;
+      for (let i = 0; i < 60; i += 1) pH = n / hallCorrection(material, pH, 300).factor;
+      return pH;
+    };
+    const lines = ['position_mm,n_per_cm3'];
+    for (let mm = 0.025; mm < 1.5; mm += 0.05) lines.push(`${mm.toFixed(3)},${hallOf(step.rows.find((r) => mm >= r.startMm && mm < r.endMm)!.perCm3).toPrecision(12)}`);
+    const parsed = parseMeasurementsCsv(lines.join('\n'), 1.5);
+    const report = reportMeasurements(caseJson, sheet, 3, parsed.points, 300);
+    expect(report.hall).toMatchObject({ source: 'band-model' });
+    expect(report.hall!.min).toBeGreaterThan(1);
+    expect(report.hall!.max).toBeLessThan((3 * Math.PI) / 8);
+    expect(report.hall!.note).toMatch(/band model/);
+    report.points.forEach((q) => {
+      const zone = step.rows.find((r) => q.positionMm >= r.startMm && q.positionMm < r.endMm)!;
+      expect(Math.abs(Math.log10(q.perCm3 / zone.perCm3))).toBeLessThan(1e-6);
+      expect(q.fromHall).toBeCloseTo(q.hallFactor! * q.hallPerCm3!, -10);
+    });
+    expect(report.verdicts.map((v) => v.verdict)).toEqual(['within', 'within', 'within']);
+    // Taken as the carrier concentration (r_H = 1 entered by hand), the same file reads low by log10 r_H.
+    const asIs = reportMeasurements(caseJson, sheet, 3, parsed.points, 300, { hallFactor: 1 });
+    expect(asIs.hall).toMatchObject({ source: 'entered', min: 1, max: 1 });
+    const bias = Math.log10(report.points[0]!.perCm3 / asIs.points[0]!.perCm3);
+    expect(bias).toBeCloseTo(Math.log10(report.points[0]!.hallFactor!), 9);
+    expect(bias).toBeGreaterThan(0.02);
+    // A measured-table family has no band model: factor 1, said so.
+    const table = { ...caseJson, material: tableMaterial() };
+    const fromTable = reportMeasurements(table, sheet, 3, parsed.points, 300);
+    expect(fromTable.hall).toMatchObject({ source: 'none', min: 1, max: 1 });
+    expect(fromTable.hall!.note).toMatch(/measured-table family has no band model/);
   });
 
   it('names bad measurement files by line and column', () => {

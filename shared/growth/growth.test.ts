@@ -50,8 +50,9 @@ describe('tolerance bands', () => {
         const loss = step.score.value - scoreLayout(p, z, step.score.current).value;
         expect(loss).toBeLessThanOrEqual(1 + 1e-6);
       }
-      // Not absurdly tight either: an edge that is not at a bound loses close to the budget.
-      if (!b.highAtBound) expect(b.lossAtHigh).toBeGreaterThan(0.9);
+      // The bands hold jointly (joint-bands.test.ts), so one zone alone at its edge loses less than the budget.
+      expect(b.lossAtHigh).toBeLessThan(1);
+      expect(b.lossAtLow).toBeLessThan(1);
     }
   });
 });

@@ -1,4 +1,5 @@
 import type { MaterialFamily, Properties } from '../engine/material-family';
+import { brentMinimize } from '../engine/minimize-scalar';
 
 export type DopingEstimate = {
   /** Best estimate, cm⁻³ (geometric mean when both S and σ were measured). */
@@ -30,6 +31,24 @@ function solveMonotone(f: (y: number) => number, target: number, lo: number, hi:
 }
 
 /**
+ * Where the extrinsic branch of f begins in [lo, hi]: the doping of the
+ * largest f (|S|) or smallest f (ln σ, with `sign` −1). In a two-band family
+ * both turn over at low doping — minority carriers cut |S| and, when they are
+ * the faster carriers, add to σ — so one reading matches two dopings; the
+ * grower's zones lie on the extrinsic (higher-doping) side, which is the one
+ * searched. For a single band the turn is at lo and nothing changes.
+ */
+function extrinsicStart(f: (y: number) => number, sign: 1 | -1, lo: number, hi: number): number {
+  const points = 41;
+  const h = (hi - lo) / (points - 1);
+  let best = 0;
+  for (let k = 1; k < points; k += 1) if (sign * f(lo + k * h) > sign * f(lo + best * h)) best = k;
+  if (best === 0) return lo;
+  if (best === points - 1) return hi;
+  return brentMinimize((y) => -sign * f(y), lo + (best - 1) * h, lo + (best + 1) * h, 1e-6).x;
+}
+
+/**
  * The doping that reproduces a room-temperature measurement of S [V/K]
  * and/or σ [S/m] at temperature T, within [lower, upper] (log10 cm⁻³).
  */
@@ -38,8 +57,10 @@ export function invertDoping(family: MaterialFamily, temperature: number, m: { s
   const at = (y: number): Properties => { family.properties(y, temperature, out); return out; };
   const lo = Math.max(lower, family.minLog10Doping);
   const hi = Math.min(upper, family.maxLog10Doping);
-  const s = m.seebeck !== undefined ? solveMonotone((y) => Math.abs(at(y).seebeck), Math.abs(m.seebeck), lo, hi) : null;
-  const g = m.sigma !== undefined ? solveMonotone((y) => Math.log(at(y).sigma), Math.log(m.sigma), lo, hi) : null;
+  const absS = (y: number) => Math.abs(at(y).seebeck);
+  const lnSigma = (y: number) => Math.log(at(y).sigma);
+  const s = m.seebeck !== undefined ? solveMonotone(absS, Math.abs(m.seebeck), extrinsicStart(absS, 1, lo, hi), hi) : null;
+  const g = m.sigma !== undefined ? solveMonotone(lnSigma, Math.log(m.sigma), extrinsicStart(lnSigma, -1, lo, hi), hi) : null;
   if (!s && !g) throw new Error('a measurement needs a Seebeck coefficient or a conductivity');
   const ys = [s, g].filter((v): v is { y: number; clamped: boolean } => v !== null);
   const y = ys.reduce((acc, v) => acc + v.y, 0) / ys.length;

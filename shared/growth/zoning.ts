@@ -4,6 +4,7 @@ import type { DopingProblem } from '../engine/doping-problem';
 import { newWarmStart, referenceCurrent, scoreDesign, type DesignScore } from '../engine/evaluate-design';
 import { minimizeBox } from '../engine/box-bfgs';
 import { optimizeCurrent } from '../engine/optimize-current';
+import { withEnds } from '../engine/leg-profile';
 import { fractionsFrom, variablesFrom, zonedLeg, type ZoneLayout } from './zoned-leg';
 
 export type ZoningStep = { zones: number; layout: ZoneLayout; score: DesignScore; evaluations: number };
@@ -26,12 +27,14 @@ export function problemOf(c: CheckedCase, tolerance: number): DopingProblem {
     family: c.leg.family, length: c.length, area: c.area,
     conditions: { objective: c.objective, hotSide: c.hotSide, heatLoad: c.heatLoad ?? 0, coldSide: c.coldSide },
     lower: c.leg.bounds.lower, upper: c.leg.bounds.upper, controlPoints: 2, monotone: false, current: c.current, tolerance,
+    // The case's contacts and parasitic heat: every zoned, tolerance and as-grown leg carries them.
+    ...(c.ends ? { ends: c.ends } : {}),
   };
 }
 
 /** Scores a zone layout at a current (or at its best current when `current` is undefined). */
 export function scoreLayout(p: DopingProblem, z: ZoneLayout, current: number | undefined): DesignScore {
-  const leg = zonedLeg(p.length, p.area, p.family, z);
+  const leg = withEnds(zonedLeg(p.length, p.area, p.family, z), p.ends);
   if (current === undefined || p.conditions.objective === 'maxCop') return optimizeCurrent(leg, p.conditions, p.tolerance).score;
   return scoreDesign(leg, current, p.conditions, newWarmStart(leg), p.tolerance);
 }
@@ -74,7 +77,7 @@ function split(z: ZoneLayout, minFraction: number): ZoneLayout | null {
 function optimiseZones(p: DopingProblem, start: ZoneLayout, startScore: DesignScore, minFraction: number, shouldStop?: () => boolean): { layout: ZoneLayout; score: DesignScore; evaluations: number } {
   const k = start.fractions.length;
   const freeCurrent = p.current === undefined && p.conditions.objective !== 'maxCop';
-  const reference = referenceCurrent(zonedLeg(p.length, p.area, p.family, start), p.conditions.hotSide);
+  const reference = referenceCurrent(withEnds(zonedLeg(p.length, p.area, p.family, start), p.ends), p.conditions.hotSide);
   const layoutOf = (v: readonly number[]): ZoneLayout => ({ log10: v.slice(0, k), fractions: fractionsFrom(v.slice(k, 2 * k - 1), minFraction) });
   const scale = Math.max(Math.abs(startScore.value), 1e-30);
   let best = { layout: start, score: startScore };

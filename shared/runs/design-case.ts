@@ -12,7 +12,30 @@ export type DesignParameters = {
   maxPerCm3: number;
   controlPoints: number;
   monotone: boolean;
+  /** Contacts of the cold and hot junction, µΩ·cm²; absent (designs saved before) = 0. */
+  coldContactMicroOhmCm2?: number;
+  hotContactMicroOhmCm2?: number;
+  /** Parasitic heat onto the cold side, per leg; absent = none. */
+  parasitic?: 'none' | 'fixed' | 'radiation';
+  parasiticLoadW?: number;
+  emissivity?: number;
+  surroundingsK?: number | null;
 };
+
+/** 1 µΩ·cm² in Ω·m². */
+export const MICRO_OHM_CM2 = 1e-10;
+
+/** The engine's contact and parasitic fields of a design (SI); {} for ideal contacts and none. */
+export function designEnds(d: DesignParameters): Pick<CaseInput, 'contactResistivity' | 'parasitic'> {
+  const cold = d.coldContactMicroOhmCm2 ?? 0;
+  const hot = d.hotContactMicroOhmCm2 ?? 0;
+  const contacts = cold > 0 || hot > 0 ? { contactResistivity: { cold: cold * MICRO_OHM_CM2, hot: hot * MICRO_OHM_CM2 } } : {};
+  if (d.parasitic === 'fixed' && (d.parasiticLoadW ?? 0) > 0) return { ...contacts, parasitic: { heatLoad: d.parasiticLoadW } };
+  if (d.parasitic === 'radiation' && (d.emissivity ?? 0) > 0 && d.surroundingsK) {
+    return { ...contacts, parasitic: { radiation: { emissivity: d.emissivity as number, surroundings: d.surroundingsK } } };
+  }
+  return contacts;
+}
 
 export type SweepParameter = 'hotSide' | 'lengthMm' | 'heatLoad' | 'maxPerCm3' | 'minPerCm3';
 
@@ -34,5 +57,6 @@ export function designToCase(d: DesignParameters, material: MaterialInput): Case
     bounds: { minPerCm3: d.minPerCm3, maxPerCm3: d.maxPerCm3 },
     controlPoints: d.controlPoints,
     monotone: d.monotone,
+    ...designEnds(d),
   };
 }

@@ -10,6 +10,9 @@
  *    Th = 300 K, bounds 1e18–1e20 cm⁻³): time, evaluations, ΔT against the
  *    baselines, and the time at which the best design came within 0.05 K of
  *    the optimum, against a reference run at 100× tighter tolerance.
+ * 3b. The same optimisation on the demo p family with and without its
+ *    minority band (two-band, bipolar model), interleaved: CPU times and
+ *    their ratio, ΔT against the best uniform leg.
  * 4. Operating curves and modules on the bundled detector examples: one
  *    leg's curve (40 points), a couple's, the 31-couple module with plates
  *    versus current and versus ΔT, the N-couple trade, and the whole
@@ -20,7 +23,10 @@ import { cpus, loadavg } from 'node:os';
 import { bandFamily } from '../../shared/engine/band-model';
 import { parseCase } from '../../shared/engine/check-case';
 import { gradedLeg, uniformLeg, type Leg } from '../../shared/engine/leg-profile';
-import { optimizeLeg, type BaselineReport } from '../../shared/engine/run-case';
+import { optimizeLeg, type BaselineReport, type OptimizeResult } from '../../shared/engine/run-case';
+import { bipolarOfProfile } from '../../shared/engine/bipolar';
+import type { MaterialInput } from '../../shared/engine/case-schema';
+import { demoFamilies } from '../../server/db/seed/demo-data';
 import { solveLegProblem } from '../../shared/engine/solve-leg';
 import { integrateLeg } from '../../shared/engine/integrate';
 import { readFileSync } from 'node:fs';
@@ -159,7 +165,45 @@ function main(): void {
   say(`  optimum: current ${last?.current.toFixed(4)} A, doping ${(last?.doping?.perCm3 ?? []).map((v) => v.toExponential(2)).join(' ')} cm⁻³`);
 
   multiStart(say, caseJson);
+  singleVersusTwoBand(say);
   curvesAndModules(say);
+}
+
+/**
+ * The demo p family with and without its minority band, the same 11-node
+ * optimisation, interleaved so both see the same machine load: CPU time,
+ * ratio (the two-band family must stay within 3× of the single band), ΔT
+ * against the best uniform leg, and the minority share at the optimum.
+ */
+function singleVersusTwoBand(say: (s: string) => void): void {
+  const twoBand = demoFamilies()[0]!.definition;
+  if (twoBand.kind !== 'band' || !twoBand.minority) throw new Error('the demo p family has no minority band');
+  const { minority, ...singleBand } = twoBand;
+  const families: [string, MaterialInput][] = [['single band', singleBand], ['two-band', twoBand]];
+  say('');
+  say(`single band vs two-band (demo p family; minority m* ${minority.effectiveMass}, μ300 ${minority.mobility300} cm²/(V·s), Eg ${minority.bandGap} eV − ${minority.bandGapSlope} eV/K·T), 11-node optimisation, runs interleaved`);
+  const cpu: number[][] = [[], []];
+  const results: OptimizeResult[] = [];
+  for (let r = 0; r < 9; r++) {
+    families.forEach(([, material], k) => {
+      const c0 = process.cpuUsage();
+      results[k] = optimizeLeg(parseCase({ hotSide: TH, length: L, area: A, material, bounds: { minPerCm3: 1e18, maxPerCm3: 1e20 }, controlPoints: 11 }, 'optimize'));
+      const c = process.cpuUsage(c0);
+      if (r > 0) cpu[k].push((c.user + c.system) / 1000);
+    });
+  }
+  families.forEach(([name, material], k) => {
+    const res = results[k];
+    const b = res.baselines as BaselineReport;
+    const share = bipolarOfProfile(material, res.profile);
+    say(
+      `  ${name.padEnd(12)} CPU median ${median(cpu[k]).toFixed(0)} ms, fastest ${Math.min(...cpu[k]).toFixed(0)} ms, ${res.evaluations} leg solves; ` +
+        `ΔT ${res.deltaT.toFixed(2)} K vs best uniform ${b.uniform.deltaT.toFixed(2)} K at ${b.uniform.perCm3.toExponential(2)} cm⁻³ (gain ${(res.deltaT - b.uniform.deltaT).toFixed(2)} K); ` +
+        `doping ${(res.doping?.perCm3 ?? []).map((v) => v.toExponential(1)).join(' ')} cm⁻³` +
+        (share ? `; minority share of the current at most ${(100 * share.share).toFixed(1)} % (at ${share.temperature.toFixed(0)} K, ${share.perCm3.toExponential(1)} cm⁻³)` : ''),
+    );
+  });
+  say(`  two-band / single-band CPU time: median ${(median(cpu[1]) / median(cpu[0])).toFixed(2)}×, fastest ${(Math.min(...cpu[1]) / Math.min(...cpu[0])).toFixed(2)}× (limit 3×)`);
 }
 
 /** A run's multi-start search: the baselines once, then each start from its own random profile. */

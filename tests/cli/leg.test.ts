@@ -75,6 +75,23 @@ describe('leg CLI', () => {
     expect(out.profile.perCm3).toBeDefined();
   });
 
+  test('a band material with a minority band: bipolar conduction lowers S at a lightly doped, hot leg; the same case without it is unchanged', () => {
+    const minority = { effectiveMass: 1, mobility300: 600, mobilityExponent: -1.5, bandGap: 0.2, bandGapSlope: 1e-4 };
+    const leg1 = { hotSide: 300, length: 1e-3, area: 1e-6, current: 2, doping: 2e18 };
+    const one = leg(['solve', caseFile('one-band', { ...leg1, material: band })]);
+    const two = leg(['solve', caseFile('two-band', { ...leg1, material: { ...band, minority } })]);
+    expect(two.stderr).toBe('');
+    expect(two.status).toBe(0);
+    const a = JSON.parse(one.stdout);
+    const b = JSON.parse(two.stdout);
+    const hot = (o: { profile: { seebeck: number[] } }) => o.profile.seebeck[o.profile.seebeck.length - 1];
+    // Goldsmid, Introduction to Thermoelectricity (2010), bipolar chapter: minority carriers subtract from S.
+    expect(hot(b)).toBeLessThan(hot(a));
+    expect(b.deltaT).toBeLessThan(a.deltaT);
+    const wide = leg(['solve', caseFile('wide-gap', { ...leg1, material: { ...band, minority: { ...minority, bandGap: 8, bandGapSlope: 0 } } })]);
+    expect(JSON.parse(wide.stdout).coldSide).toBe(a.coldSide);
+  });
+
   test('curves prints the curves, the pumping range and the marked currents for the bundled example', () => {
     const r = leg(['curves', join(root, 'shared', 'engine', 'examples', 'detector-leg-curves.json')]);
     expect(r.stderr).toBe('');
@@ -120,6 +137,8 @@ describe('leg CLI', () => {
     ['doping node out of range', () => ['solve', caseFile('node', { ...uniform, segments: undefined, material: band, doping: { x: [0, 1], perCm3: [1e19, 1e10] }, current: 3 })], /^doping\.perCm3\[1\]: /],
     ['segment fraction', () => ['solve', caseFile('frac', { ...uniform, current: 3, segments: [{ ...uniform.segments[0], fraction: 0.5 }, { ...uniform.segments[0], fraction: -0.5 }] })], /^segments\[1\]\.fraction: /],
     ['band effective mass', () => ['solve', caseFile('mass', { ...uniform, segments: undefined, material: { ...band, effectiveMass: -1 }, doping: 1e19, current: 3 })], /^material\.effectiveMass: /],
+    ['minority band gap in meV', () => ['solve', caseFile('gap', { ...uniform, segments: undefined, material: { ...band, minority: { effectiveMass: 1, mobility300: 600, mobilityExponent: -1.5, bandGap: 170, bandGapSlope: 1e-4 } }, doping: 1e19, current: 3 })], /^material\.minority\.bandGap: .*meV/],
+    ['minority band without its slope', () => ['solve', caseFile('slope', { ...uniform, segments: undefined, material: { ...band, minority: { effectiveMass: 1, mobility300: 600, mobilityExponent: -1.5, bandGap: 0.2 } }, doping: 1e19, current: 3 })], /^material\.minority\.bandGapSlope: bandGapSlope is required/],
     ['NaN written as a string', () => ['solve', caseFile('nan', { ...uniform, current: 'NaN' })], /^current: /],
     ['current missing for solve', () => ['solve', caseFile('nocurrent', uniform)], /^current: is required/],
     ['bounds missing for a band optimisation', () => ['optimize', caseFile('nobounds', { ...uniform, segments: undefined, material: band })], /^bounds: /],

@@ -145,6 +145,8 @@ describe('growth hand-off in a real browser: release, print, grow, measure, judg
     }
     await sheetView.scrollIntoViewIfNeeded();
     await saveScreenshot(page, 'growth-sheet-desktop');
+    // The sheet says what its zones and bands were computed with (this demo design: ideal contacts, none).
+    expect(await visible(page.getByTestId('sheet-fact-ends')).innerText()).toMatch(/Computed with\s+ideal contacts \(0\sµΩ·cm²\), no parasitic heat/);
 
     for (const format of ['A4', 'Letter'] as const) {
       const pdf = await page.pdf({ format });
@@ -153,12 +155,40 @@ describe('growth hand-off in a real browser: release, print, grow, measure, judg
       expect(text).toContain(batch);
       expect(text).toMatch(/Model predictions — verify by measurement/);
       expect(text).toMatch(/cm⁻³[\s\S]*µV\/K[\s\S]*S\/cm/);
+      // How the bands hold, and the yield, travel with the sheet.
+      expect(text).toMatch(/computed\s+jointly/);
+      expect(text).toMatch(/\d+(\.\d)? % of 600 simulated as-grown/);
       // Navigation and buttons stay off paper.
       expect(text).not.toMatch(/Print sheet|Sign out|Accept the order/);
       // The document's title names the batch too (what a print queue shows).
       expect(pdfTitle(pdf)).toContain(`Growth sheet ${batch}`);
       if (format === 'A4') pdfToPng(pdf, 'growth-sheet-print');
     }
+    await page.close();
+  });
+
+  it('the grower reads the yield (histogram, percentage, scatter) and recomputes it at another scatter, phone and desktop', async () => {
+    for (const size of ['phone', 'desktop'] as const) {
+      const page = await grower.newPage(size);
+      await page.goto(`${baseUrl}/growth/${orderId}`);
+      const block = visible(page.getByTestId('yield-block'));
+      await block.waitFor({ timeout: 60_000 });
+      expect(await visible(page.getByTestId('band-note')).innerText()).toMatch(/computed jointly: every combination inside the bands keeps the loss ≤ 1 K \(corners re-solved: 8, all of them/);
+      expect(await block.innerText()).toMatch(/\d+(\.\d)? %[\s\S]*of 600 simulated as-grown legs lose ≤ 1 K at a doping scatter of 0.05 decades/);
+      expect(await waitForDrawnChart(page, block, 40, 60_000, 'glacier')).toBeGreaterThanOrEqual(40);
+      await saveScreenshot(page, `growth-yield-${size}`);
+      await page.close();
+    }
+    const page = await grower.newPage('desktop');
+    await page.goto(`${baseUrl}/growth/${orderId}`);
+    const before = await visible(page.getByTestId('yield-percent')).innerText();
+    await visible(page.getByTestId('field-doping-scatter')).fill('0.15');
+    await visible(page.getByRole('button', { name: 'Recompute yield' })).click();
+    await visible(page.getByTestId('yield-note')).filter({ hasText: 'scatter of 0.15 decades' }).waitFor({ timeout: 90_000 });
+    const after = await visible(page.getByTestId('yield-percent')).innerText();
+    expect(parseFloat(after)).toBeLessThan(parseFloat(before));
+    await visible(page.getByTestId('yield-block')).scrollIntoViewIfNeeded();
+    await saveScreenshot(page, 'growth-yield-recomputed-desktop');
     await page.close();
   });
 
@@ -238,7 +268,7 @@ describe('growth hand-off in a real browser: release, print, grow, measure, judg
     expect(await visible(page.getByTestId('close-reason')).innerText()).toMatch(/over-doped; regrow/);
     expect(await page.getByRole('button', { name: /Mark as|Accept the order|Start growing/ }).count()).toBe(0);
     const detail = await orderDetail(physicist, orderId);
-    expect(detail.timeline.map((e) => e.toState ?? e.kind)).toEqual(['requested', 'accepted', 'growing', 'grown', 'measured', 'measured', 'rejected']);
+    expect(detail.timeline.map((e) => e.toState ?? e.kind)).toEqual(['requested', 'sheet', 'accepted', 'growing', 'grown', 'measured', 'measured', 'rejected']);
     await visible(page.getByTestId('order-timeline')).scrollIntoViewIfNeeded();
     await saveScreenshot(page, 'growth-closed-desktop');
     await page.close();

@@ -64,6 +64,13 @@ describe('a physicist optimises a leg in a real browser', () => {
   it('creates a design with a quick estimate, launches it and watches the progress bar move', async () => {
     const page = await physicist.newPage('desktop');
     await fillDesign(page, designName);
+    // Real contacts (5 µΩ·cm² at each end) and a 2 mW parasitic load: the run page must say it computed with them.
+    await visible(page.getByTestId('field-coldContactMicroOhmCm2')).fill('5');
+    await visible(page.getByTestId('field-hotContactMicroOhmCm2')).fill('5');
+    await visible(page.getByTestId('parasitic-fixed')).click();
+    await visible(page.getByTestId('field-parasiticLoadW')).fill('0.002');
+    await page.getByTestId('field-parasiticLoadW').scrollIntoViewIfNeeded();
+    await saveScreenshot(page, 'design-form-contacts-desktop');
     const estimate = visible(page.getByTestId('quick-estimate'));
     await estimate.getByRole('button', { name: 'Quick estimate' }).click();
     const uniform = visible(page.getByTestId('estimate-uniform'));
@@ -133,6 +140,7 @@ describe('a physicist optimises a leg in a real browser', () => {
     const stored = detail.result as { deltaT: number; baselines: { uniform: { deltaT: number } } };
     expect(stored.deltaT).toBeGreaterThan(stored.baselines.uniform.deltaT);
     expect(await visible(page.getByTestId('run-fact-search')).innerText()).toContain(`${starts} of ${starts} starts`);
+    expect(await visible(page.getByTestId('run-fact-ends')).innerText()).toMatch(/contacts 5\s(µΩ·cm²) \(cold\), 5\s\1 \(hot\); parasitic load 2\smW onto the cold end/);
     await saveScreenshot(page, 'run-result-desktop');
     for (const q of ['doping', 'temperature', 'zT']) {
       expect(await waitForDrawnLine(page, visible(page.getByTestId(`leg-plot-${q}`)))).toBeGreaterThanOrEqual(60);
@@ -161,6 +169,9 @@ describe('a physicist optimises a leg in a real browser', () => {
       await page.goto(`${baseUrl}/designs/new`);
       await visible(page.getByTestId('field-name')).waitFor();
       await saveScreenshot(page, 'design-form-phone');
+      await visible(page.getByTestId('parasitic-radiation')).click();
+      await page.getByTestId('field-surroundingsK').scrollIntoViewIfNeeded();
+      await saveScreenshot(page, 'design-form-contacts-phone');
     }
     await page.close();
   });

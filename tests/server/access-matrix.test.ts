@@ -79,6 +79,7 @@ const policy: Record<string, 'public' | Role[]> = {
   'PUT /growth-orders/:id/state': ['admin', 'grower'],
   'POST /growth-orders/:id/close': designers,
   'PUT /growth-orders/:id/sheet': designers,
+  'PUT /growth-orders/:id/yield': ['admin', 'physicist', 'grower'],
   'POST /growth-orders/:id/measurements': ['admin', 'grower'],
   'GET /growth-orders/:id/sheet.csv': all.slice(),
   'GET /growth-orders/:id/sheet.json': all.slice(),
@@ -108,6 +109,7 @@ const validBody: Record<string, object> = {
   'PUT /growth-orders/:id/state': { state: 'accepted' },
   'POST /growth-orders/:id/close': { verdict: 'rejected', reason: 'outsider' },
   'PUT /growth-orders/:id/sheet': { zones: 2 },
+  'PUT /growth-orders/:id/yield': { dopingScatter: 0.07 },
   'PUT /modules/:id': { name: 'outsider', p: { kind: 'family', familyId: '00000000-0000-4000-8000-000000000000', perCm3: 1e19, lengthMm: 1, areaMm2: 1 }, n: { kind: 'family', familyId: '00000000-0000-4000-8000-000000000000', perCm3: 1e19, lengthMm: 1, areaMm2: 1 }, hotSide: 300, deltaT: 30 },
 };
 

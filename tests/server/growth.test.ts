@@ -111,3 +111,79 @@ it('only a converged run can be released', async () => {
   expect(res.status).toBe(409);
   await physicist.post(`/api/runs/${runId}/cancel`);
 });
+
+it('the sheet\'s bands hold jointly and carry a yield; the grower changes the scatter and a worker recomputes it; Hall uploads state their factor', async () => {
+  const physicist = await signedIn(ctx, demo.physicist);
+  const grower = await signedIn(ctx, demo.grower);
+  const { runId, material } = await convergedRun(physicist);
+  const released = await physicist.post(`/api/runs/${runId}/release`).send({ batch: `Y-${Date.now()}`, zones: 3 });
+  expect(released.status).toBe(201);
+  const orderId = released.body.order.id as string;
+  expect(released.body.order.dopingScatter).toBe(0.05);
+  const ready = await eventually(async () => {
+    const d = growthOrderDetailSchema.parse((await grower.get(`/api/growth-orders/${orderId}`)).body);
+    return d.order.sheetStatus === 'ready' ? d : undefined;
+  }, 90);
+  expect([ready.order.yieldStatus, ready.order.sheetProgress]).toEqual(['ready', null]);
+  const sheet = ready.sheet as unknown as GrowthSheet;
+  expect(sheet.dopingScatter).toBe(0.05);
+  for (const s of sheet.steps) {
+    // Every corner re-solved (K ≤ 6 here: zones ≥ 0.2 mm on 1.5 mm) and within the budget.
+    expect(s.joint).toMatchObject({ method: 'all-corners', cornersSolved: 2 ** s.zones });
+    expect(s.joint.worstCornerLoss).toBeLessThanOrEqual(sheet.lossBudget + 1e-6);
+    expect(s.yield.scatterDecades).toBe(0.05);
+    expect(s.yield.samples).toBeGreaterThanOrEqual(400);
+    expect(s.yield.histogram.counts.reduce((a, n) => a + n, 0) + s.yield.histogram.below).toBe(s.yield.samples - s.yield.infeasible);
+  }
+  const three = sheet.steps.find((s) => s.zones === 3)!;
+  // The one-zone-at-a-time bands of this sheet broke the budget at their corners; the sheet's do not.
+  expect(three.joint.perZoneWorstCornerLoss).toBeGreaterThan(2 * sheet.lossBudget);
+  expect(three.joint.scale).toBeLessThan(1);
+  const csv = (await grower.get(`/api/growth-orders/${orderId}/sheet.csv`)).text;
+  expect(csv).toMatch(/^# tolerance bands,"computed jointly: every combination inside the bands keeps the loss ≤ 1 K \(corners re-solved: 8, all of them/m);
+  expect(csv).toMatch(/^# yield,"?\d+(\.\d)? % of 600 simulated as-grown legs lose ≤ 1 K at a doping scatter of 0\.05 decades/m);
+
+  // The scatter: validated, refused for a viewer, and recomputed by a worker when the grower changes it.
+  const badScatter = await grower.put(`/api/growth-orders/${orderId}/yield`).send({ dopingScatter: 3 });
+  expect([badScatter.status, badScatter.body.errors?.[0]?.field]).toEqual([400, 'dopingScatter']);
+  expect((await (await signedIn(ctx, demo.viewer)).put(`/api/growth-orders/${orderId}/yield`).send({ dopingScatter: 0.1 })).status).toBe(403);
+  const changed = growthOrderDetailSchema.parse((await grower.put(`/api/growth-orders/${orderId}/yield`).send({ dopingScatter: 0.15 })).body);
+  expect([changed.order.dopingScatter, changed.order.yieldStatus]).toEqual([0.15, 'computing']);
+  const recomputed = await eventually(async () => {
+    const d = growthOrderDetailSchema.parse((await grower.get(`/api/growth-orders/${orderId}`)).body);
+    return d.order.yieldStatus === 'ready' ? d : undefined;
+  }, 90);
+  const after = recomputed.sheet as unknown as GrowthSheet;
+  const threeAfter = after.steps.find((s) => s.zones === 3)!;
+  expect(after.dopingScatter).toBe(0.15);
+  expect(threeAfter.yield.scatterDecades).toBe(0.15);
+  // Three times the scatter: fewer legs meet the budget; zones and bands are untouched.
+  expect(threeAfter.yield.meetsBudget).toBeLessThan(three.yield.meetsBudget);
+  expect(threeAfter.rows).toEqual(three.rows);
+  expect(recomputed.order.sheetProgress).toBeNull();
+
+  // Hall concentrations of the 3-zone targets: the report states the band model's factor; a hand-entered one overrides it.
+  for (const state of ['accepted', 'growing', 'grown']) expect((await grower.put(`/api/growth-orders/${orderId}/state`).send({ state })).status).toBe(200);
+  const lines = ['position_mm,n_per_cm3'];
+  for (let mm = 0.05; mm < 1.5; mm += 0.1) lines.push(`${mm.toFixed(2)},${three.rows.find((r) => mm >= r.startMm && mm < r.endMm)!.perCm3.toPrecision(6)}`);
+  const file = Buffer.from(lines.join('\n'));
+  const fromModel = await grower.post(`/api/growth-orders/${orderId}/measurements`).attach('file', file, 'hall.csv');
+  expect(fromModel.status).toBe(201);
+  const modelReport = fromModel.body.report as MeasurementReport;
+  expect(modelReport.hall).toMatchObject({ source: 'band-model' });
+  expect(modelReport.hall!.note).toMatch(/^Hall factor from the band model .* r_H = 1\.\d{3}/);
+  const hallPoint = modelReport.points[0]!;
+  expect(hallPoint.perCm3 / hallPoint.hallPerCm3!).toBeCloseTo(hallPoint.hallFactor!, 9);
+  expect(hallPoint.hallFactor!).toBeGreaterThan(1);
+  const entered = await grower.post(`/api/growth-orders/${orderId}/measurements`).field('hallFactor', '1').attach('file', file, 'hall.csv');
+  expect(entered.status).toBe(201);
+  expect((entered.body.report as MeasurementReport).hall).toMatchObject({ source: 'entered', min: 1, max: 1 });
+  for (const bad of ['abc', '5']) {
+    const res = await grower.post(`/api/growth-orders/${orderId}/measurements`).field('hallFactor', bad).attach('file', file, 'hall.csv');
+    expect([res.status, res.body.errors?.[0]?.field]).toEqual([400, 'hallFactor']);
+  }
+  const stored = growthOrderDetailSchema.parse((await physicist.get(`/api/growth-orders/${orderId}`)).body);
+  expect(stored.measurements).toHaveLength(2);
+  expect(stored.measurements.map((m) => measurementReportSchema.parse(m.report).hall?.source).sort()).toEqual(['band-model', 'entered']);
+  expect(material.kind).toBe('band');
+});

@@ -1,5 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 import type { Design } from '@/shared/api/designs';
+import { designEndsWords } from '@/components/format/leg-ends-words';
 import { withUnit } from '@/components/format/number';
 import { colors, spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';
@@ -26,6 +27,7 @@ function facts(d: Design): Fact[] {
     { key: 'controlPoints', label: f.controlPoints.label, value: `${d.controlPoints}${d.monotone ? ', monotone' : ', free shape'}` },
     { key: 'starts', label: f.starts.label, value: withUnit(String(d.starts), 'starts') },
     { key: 'minZoneMm', label: f.minZoneMm.label, value: quantity(d.minZoneMm, 'mm') },
+    { key: 'ends', label: 'Contacts and parasitic heat', value: designEndsWords(d) },
   );
   return rows;
 }

@@ -13,11 +13,16 @@ export type DesignNumberKey =
   | 'maxPerCm3'
   | 'controlPoints'
   | 'starts'
-  | 'minZoneMm';
+  | 'minZoneMm'
+  | 'coldContactMicroOhmCm2'
+  | 'hotContactMicroOhmCm2'
+  | 'parasiticLoadW'
+  | 'emissivity'
+  | 'surroundingsK';
 
 export type FieldInfo = { label: string; unit: string; help: string; placeholder?: string };
 
-export const designFieldInfo: Record<DesignNumberKey | 'name' | 'notes' | 'familyId' | 'objective' | 'monotone' | 'familyVersion', FieldInfo> = {
+export const designFieldInfo: Record<DesignNumberKey | 'name' | 'notes' | 'familyId' | 'objective' | 'monotone' | 'familyVersion' | 'parasitic', FieldInfo> = {
   name: { label: 'Name', unit: '', help: 'How the team will recognise this design in lists and e-mails.' },
   notes: { label: 'Notes', unit: '', help: 'Anything the next reader should know: purpose, assumptions, links.' },
   familyId: { label: 'Material family', unit: '', help: 'Whose S, σ and κ the leg is made of; the version is frozen into every run.' },
@@ -39,4 +44,15 @@ export const designFieldInfo: Record<DesignNumberKey | 'name' | 'notes' | 'famil
     placeholder: '16',
   },
   minZoneMm: { label: 'Shortest zone', unit: 'mm', help: 'The shortest constant-doping zone the grower can make.', placeholder: '0' },
+  coldContactMicroOhmCm2: {
+    label: 'Cold contact ρc',
+    unit: 'µΩ·cm²',
+    help: 'Of the cold junction; good contacts are 1–10 (1 µΩ·cm² = 10⁻¹⁰ Ω·m²). Its heat costs ΔT.',
+    placeholder: '0',
+  },
+  hotContactMicroOhmCm2: { label: 'Hot contact ρc', unit: 'µΩ·cm²', help: 'Of the hot junction; its heat goes to the sink, costing power but no ΔT.', placeholder: '0' },
+  parasitic: { label: 'Parasitic heat', unit: '', help: 'Heat reaching the cold side that is not the load, per leg.' },
+  parasiticLoadW: { label: 'Parasitic load', unit: 'W', help: 'Per leg, onto the cold end: gas conduction, wires, radiation onto the cold stage.', placeholder: '0.002' },
+  emissivity: { label: 'Emissivity ε', unit: '', help: 'Of the leg’s sides, 0–1 (bare tellurides ~0.1–0.3, blackened ~0.9).', placeholder: '0.3' },
+  surroundingsK: { label: 'Surroundings Ts', unit: 'K', help: 'Temperature of what the leg’s sides see (often the sink’s).', placeholder: '300' },
 };

@@ -1,5 +1,5 @@
 import type { z } from 'zod';
-import { designInputSchema, type Design, type Objective } from '@/shared/api/designs';
+import { designInputSchema, type Design, type Objective, type ParasiticKind } from '@/shared/api/designs';
 import type { FieldError } from '@/shared/api/errors';
 import { splitFieldErrors, type FieldErrors, type SplitErrors } from '@/components/ui/save-errors';
 import { designFieldInfo, type DesignNumberKey } from './design-fields';
@@ -13,6 +13,7 @@ export type DesignFormValues = {
   familyVersion?: number;
   objective: Objective;
   monotone: boolean;
+  parasitic: ParasiticKind;
   numbers: Record<DesignNumberKey, string>;
 };
 
@@ -28,6 +29,7 @@ export function emptyDesignValues(familyId = ''): DesignFormValues {
     familyId,
     objective: 'maxDeltaT',
     monotone: false,
+    parasitic: 'none',
     numbers: {
       lengthMm: '1.5',
       areaMm2: '1',
@@ -39,6 +41,11 @@ export function emptyDesignValues(familyId = ''): DesignFormValues {
       controlPoints: '11',
       starts: '16',
       minZoneMm: '0',
+      coldContactMicroOhmCm2: '0',
+      hotContactMicroOhmCm2: '0',
+      parasiticLoadW: '',
+      emissivity: '',
+      surroundingsK: '',
     },
   };
 }
@@ -54,6 +61,7 @@ export function valuesFromDesign(d: Design): DesignFormValues {
     familyVersion: d.familyVersion,
     objective: d.objective,
     monotone: d.monotone,
+    parasitic: d.parasitic,
     numbers: {
       lengthMm: text(d.lengthMm),
       areaMm2: text(d.areaMm2),
@@ -65,6 +73,12 @@ export function valuesFromDesign(d: Design): DesignFormValues {
       controlPoints: text(d.controlPoints),
       starts: text(d.starts),
       minZoneMm: text(d.minZoneMm),
+      coldContactMicroOhmCm2: text(d.coldContactMicroOhmCm2),
+      hotContactMicroOhmCm2: text(d.hotContactMicroOhmCm2),
+      // Only the chosen kind's numbers are stored meaningfully; the others start empty.
+      parasiticLoadW: d.parasitic === 'fixed' ? text(d.parasiticLoadW) : '',
+      emissivity: d.parasitic === 'radiation' ? text(d.emissivity) : '',
+      surroundingsK: d.parasitic === 'radiation' ? text(d.surroundingsK) : '',
     },
   };
 }
@@ -101,6 +115,11 @@ export function requestBody(values: DesignFormValues): Record<string, unknown> {
     monotone: values.monotone,
     starts: n('starts'),
     minZoneMm: n('minZoneMm'),
+    coldContactMicroOhmCm2: n('coldContactMicroOhmCm2'),
+    hotContactMicroOhmCm2: n('hotContactMicroOhmCm2'),
+    parasitic: values.parasitic,
+    ...(values.parasitic === 'fixed' ? { parasiticLoadW: n('parasiticLoadW') } : {}),
+    ...(values.parasitic === 'radiation' ? { emissivity: n('emissivity'), surroundingsK: n('surroundingsK') } : {}),
   };
 }
 

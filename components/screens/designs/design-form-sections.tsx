@@ -27,7 +27,7 @@ const objectiveHelp: Record<Objective, string> = {
 };
 
 /** Two fields side by side when there is room, stacked on a phone. */
-function Pair({ children }: { children: [ReactNode, ReactNode] }) {
+export function Pair({ children }: { children: [ReactNode, ReactNode] }) {
   return (
     <View style={styles.pair}>
       <View style={styles.pairItem}>{children[0]}</View>

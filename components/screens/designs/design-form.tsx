@@ -7,6 +7,7 @@ import { saveErrors } from '@/components/ui/save-errors';
 import { AppText } from '@/components/ui/text';
 import type { DesignNumberKey } from './design-fields';
 import { splitApiErrors, validateDesign, type DesignFormValues, type FieldErrors, type ValidDesign } from './design-form-model';
+import { EndsSection } from './design-ends-section';
 import { GrowerSection, LegSection, OperatingSection, SearchSection } from './design-form-sections';
 import { QuickEstimate } from './quick-estimate';
 
@@ -44,6 +45,7 @@ export function DesignForm({ initial, submitLabel, pending, error, onSubmit, onC
     <View style={styles.form}>
       <LegSection {...section} />
       <OperatingSection {...section} />
+      <EndsSection {...section} />
       <GrowerSection {...section} />
       <SearchSection {...section} />
       <QuickEstimate values={values} onInvalid={() => setTried(true)} />

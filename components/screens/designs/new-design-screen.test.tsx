@@ -102,7 +102,28 @@ describe('NewDesignScreen', () => {
     expect(posts(requests)[0]?.body).toEqual({
       name: 'Stage leg', notes: '', familyId: ids.family, objective: 'maxDeltaT', lengthMm: 1.2, areaMm2: 1, hotSide: 300, heatLoad: 0,
       minPerCm3: 1e18, maxPerCm3: 2e20, controlPoints: 11, monotone: true, starts: 120, minZoneMm: 0,
+      // Ideal contacts and no parasitic heat unless the physicist says otherwise.
+      coldContactMicroOhmCm2: 0, hotContactMicroOhmCm2: 0, parasitic: 'none', parasiticLoadW: 0, emissivity: 0,
     });
+  });
+
+  it('sends each junction’s contact in µΩ·cm² and the parasitic heat the physicist chose', async () => {
+    const { requests, result } = open(() => ({ status: 201, body: { design: design({ name: 'Real leg' }) } }));
+    await chooseFamily();
+    fireEvent.changeText(field('name'), 'Real leg');
+    fireEvent.changeText(field('coldContactMicroOhmCm2'), '5');
+    fireEvent.changeText(field('hotContactMicroOhmCm2'), '2,5');
+    fireEvent.press(screen.getByTestId('parasitic-radiation'));
+    fireEvent.press(screen.getByRole('button', { name: 'Save design' }));
+    // Radiation needs both of its numbers: said beside each field, nothing sent.
+    expect(await screen.findByTestId('error-emissivity')).toHaveTextContent('Emissivity ε must be greater than 0 for radiation');
+    expect(errorOf('surroundingsK')).toHaveTextContent(/^Surroundings Ts is required/);
+    expect(posts(requests)).toEqual([]);
+    fireEvent.press(screen.getByTestId('parasitic-fixed'));
+    fireEvent.changeText(field('parasiticLoadW'), '0.002');
+    fireEvent.press(screen.getByRole('button', { name: 'Save design' }));
+    await waitFor(() => expect(result.getPathname()).toBe(`/designs/${ids.design}`));
+    expect(posts(requests)[0]?.body).toMatchObject({ coldContactMicroOhmCm2: 5, hotContactMicroOhmCm2: 2.5, parasitic: 'fixed', parasiticLoadW: 0.002, emissivity: 0 });
   });
 
   it('estimates the best uniform leg in the browser, and says when the values have changed', async () => {

@@ -101,6 +101,22 @@ describe('GrowthOrderScreen: the report', () => {
   });
 });
 
+describe('GrowthOrderScreen: the Hall factor on a report', () => {
+  it('states the factor the report used; a report without Hall values says nothing of it', async () => {
+    const note = 'Hall factor from the band model (one parabolic band, acoustic-phonon scattering, at each point’s Fermi level): r_H = 1.046–1.118; carrier concentration = r_H × Hall concentration.';
+    const withHall = withReport('measured');
+    withHall.measurements[0]!.report = { ...report(), hall: { source: 'band-model', min: 1.046, max: 1.118, note } } as unknown as Record<string, unknown>;
+    show(withHall, 'physicist');
+    expect(await screen.findByTestId('report-hall')).toHaveTextContent(/Hall factor used.*r_H = 1\.046–1\.118/);
+  });
+
+  it('has no Hall notice without Hall values', async () => {
+    show(withReport('measured'), 'physicist');
+    expect(await screen.findByTestId('measurement-report')).toBeOnTheScreen();
+    expect(screen.queryByTestId('report-hall')).toBeNull();
+  });
+});
+
 describe('GrowthOrderScreen: actions', () => {
   it('the grower moves the order one step with a note', async () => {
     let current = detail('requested');
@@ -150,5 +166,32 @@ describe('GrowthOrderScreen: actions', () => {
     current = detail('growing');
     act(() => lastSocket().serverEmit('growth:changed', { orderId: ids.order }));
     await waitFor(() => expect(screen.getByTestId('order-state')).toHaveTextContent(/Growing/));
+  });
+});
+
+describe('GrowthOrderScreen: joint bands and the yield', () => {
+  it('says how the bands were computed, shows the yield with its scatter, and lets the grower recompute it at another scatter', async () => {
+    const fetched = show(detail('growing'), 'grower', {
+      [`PUT ${orderUrl}/yield`]: (req) => ok({ ...detail('growing'), order: { ...detail('growing').order, dopingScatter: (req.body as { dopingScatter: number }).dopingScatter, yieldStatus: 'computing', sheetProgress: 0.4 } }),
+    });
+    const note = await screen.findByTestId('band-note');
+    expect(within(note).getByText(/computed jointly: every combination inside the bands keeps the loss ≤ 1 K \(corners re-solved: 8, all of them/)).toBeOnTheScreen();
+    expect(screen.getByTestId('yield-percent')).toHaveTextContent('97.7 %');
+    expect(screen.getByTestId('yield-note')).toHaveTextContent(/of 600 simulated as-grown legs lose ≤ 1 K at a doping scatter of 0.05 decades \(1σ\) per zone/);
+    fireEvent.changeText(screen.getByLabelText(/Doping scatter per zone/), '2');
+    fireEvent.press(screen.getByRole('button', { name: 'Recompute yield' }));
+    expect(await screen.findByText('dopingScatter must be 0–1 decade (1σ)')).toBeOnTheScreen();
+    expect(fetched.requests.some((r) => r.method === 'PUT')).toBe(false);
+    fireEvent.changeText(screen.getByLabelText(/Doping scatter per zone/), '0.12');
+    fireEvent.press(screen.getByRole('button', { name: 'Recompute yield' }));
+    expect(await screen.findByText(/Yield at 0.12 decades of doping scatter — recomputing \(40 %\)/)).toBeOnTheScreen();
+    expect(fetched.requests.find((r) => r.method === 'PUT')!.body).toEqual({ dopingScatter: 0.12 });
+    expect(screen.getByTestId('yield-stale')).toHaveTextContent('Shown for 0.05 decades until the yield at 0.12 decades is ready.');
+  });
+
+  it('a viewer sees the yield but no scatter form', async () => {
+    show(detail('growing'), 'viewer');
+    expect(await screen.findByTestId('yield-block')).toBeOnTheScreen();
+    expect(screen.queryByTestId('scatter-settings')).toBeNull();
   });
 });

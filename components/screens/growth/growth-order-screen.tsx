@@ -27,7 +27,10 @@ const back = { label: 'Growth', href: '/growth' } as const;
 function SheetBlock({ detail }: { detail: GrowthOrderDetail }) {
   const { order } = detail;
   const sheet = readSheet(detail.sheet);
-  if (order.sheetStatus === 'computing') return <LoadingState label="Computing the growth sheet: zones, tolerance bands re-solved at each edge, room-temperature checks…" />;
+  if (order.sheetStatus === 'computing') {
+    const done = order.sheetProgress === null ? '' : ` ${Math.round(100 * order.sheetProgress)} %`;
+    return <LoadingState label={`Computing the growth sheet${done}: zones, tolerance bands re-solved at their corners, room-temperature checks, the yield…`} />;
+  }
   if (order.sheetStatus === 'failed' || !sheet) {
     return (
       <Notice tone="danger" title="The growth sheet could not be computed" testID="sheet-failed">

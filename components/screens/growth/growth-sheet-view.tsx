@@ -1,7 +1,8 @@
 import { StyleSheet, View } from 'react-native';
 import type { GrowthOrderDto } from '@/shared/api/growth';
 import { growthSheetExportUrl } from '@/components/api/growth';
-import type { SheetStep, SheetView } from '@/shared/api/growth-documents';
+import { jointBandNote, type SheetStep, type SheetView } from '@/shared/api/growth-documents';
+import { useRole } from '@/components/auth/session';
 import { formatDateTime, formatDay } from '@/components/format/date';
 import { colors, radii, spacing } from '@/components/theme';
 import { DownloadLink } from '@/components/ui/download-link';
@@ -16,6 +17,9 @@ import { SheetFacts } from './sheet-facts';
 import { ZoneCountChart } from './zone-count-chart';
 import { ZoneDiagram } from './zone-diagram';
 import { ZoneTable } from './zone-table';
+import { isClosed } from './growth-state';
+import { ScatterSettings } from './scatter-settings';
+import { YieldBlock } from './yield-view';
 
 /** The sheet's step for the order's K; the largest K that fits when the order asks for more. */
 export function chosenStep(sheet: SheetView, zones: number): SheetStep {
@@ -32,6 +36,8 @@ export type GrowthSheetViewProps = { order: GrowthOrderDto; sheet: SheetView };
  */
 export function GrowthSheetView({ order, sheet }: GrowthSheetViewProps) {
   const step = chosenStep(sheet, order.zones);
+  const { can } = useRole();
+  const progress = order.yieldStatus === 'computing' && order.sheetProgress !== null ? ` (${Math.round(100 * order.sheetProgress)} %)` : '';
   return (
     <View style={styles.sheet} {...printSheetMark} testID="growth-sheet">
       <PrintStyles />
@@ -57,9 +63,17 @@ export function GrowthSheetView({ order, sheet }: GrowthSheetViewProps) {
       <TitledBlock title="Zones along the leg" hint="Zone 1 sits at the cold end, against the load.">
         <ZoneDiagram rows={step.rows} lengthMm={sheet.lengthMm} />
       </TitledBlock>
-      <TitledBlock title="Targets, tolerance bands and room-temperature checks" hint="Band: the doping range within which the predicted ΔT loss stays under the budget, confirmed by re-solving the leg at each edge.">
+      <TitledBlock title="Targets, tolerance bands and room-temperature checks" hint={`Bands ${jointBandNote(step.joint, sheet.lossBudget, sheet.unit)}.`} testID="band-note">
         <ZoneTable rows={step.rows} measureTemperature={sheet.measureTemperature} lossBudget={sheet.lossBudget} />
       </TitledBlock>
+      {/* On paper the yield is one line among the facts above: the sheet stays one page. */}
+      <View {...screenOnlyMark}>
+        <TitledBlock title={`Yield at ${order.dopingScatter} decades of doping scatter${order.yieldStatus === 'computing' ? ` — recomputing${progress}` : ''}`} hint="A Monte Carlo of as-grown legs: how often a piece grown with this scatter keeps ΔT within the budget." testID="yield">
+          <YieldBlock order={order} sheet={sheet} yieldEstimate={step.yield} />
+          {order.yieldStatus === 'failed' && order.sheetError ? <Notice tone="danger" title="The yield could not be computed"><AppText>{order.sheetError}</AppText></Notice> : null}
+          {can('growth.scatter') && !isClosed(order.state) ? <ScatterSettings key={order.dopingScatter} order={order} /> : null}
+        </TitledBlock>
+      </View>
       <TitledBlock title="Predicted ΔT by number of zones" hint="More zones follow the continuous optimum more closely; K = 1 is the best uniform leg.">
         <ZoneCountChart sheet={sheet} chosen={step.zones} />
       </TitledBlock>

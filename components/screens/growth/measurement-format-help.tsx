@@ -6,7 +6,7 @@ const headers: Array<{ quantity: string; headers: string }> = [
   { quantity: 'Position from the cold end (required)', headers: 'position_mm · position_um' },
   { quantity: 'Seebeck coefficient', headers: 'seebeck_uV_per_K · seebeck_mV_per_K' },
   { quantity: 'Conductivity or resistivity', headers: 'sigma_S_per_cm · sigma_S_per_m · resistivity_uOhm_m · resistivity_mOhm_cm' },
-  { quantity: 'Carrier concentration (Hall)', headers: 'n_per_cm3' },
+  { quantity: 'Hall concentration (times the Hall factor: the carrier concentration)', headers: 'n_per_cm3' },
   { quantity: 'Temperature of the measurement (optional)', headers: 'temperature_K' },
 ];
 

@@ -30,6 +30,11 @@ export function MeasurementReportView({ report, rows, lengthMm }: MeasurementRep
         <AppText>{verdictSummary(report)}</AppText>
       </Notice>
       <ReportNumbers report={report} />
+      {report.hall ? (
+        <Notice tone={report.hall.source === 'none' ? 'warning' : 'info'} title="Hall factor used" testID="report-hall">
+          <AppText>{report.hall.note}</AppText>
+        </Notice>
+      ) : null}
       <ZoneVerdicts verdicts={report.verdicts} rows={rows} />
       {report.warnings.length > 0 ? (
         <Notice tone="warning" title={`${report.warnings.length} ${report.warnings.length === 1 ? 'measurement' : 'measurements'} to look at`} testID="report-warnings">

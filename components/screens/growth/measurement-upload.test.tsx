@@ -70,4 +70,23 @@ describe('MeasurementUpload', () => {
     await act(async () => fireEvent.press(await screen.findByRole('button', { name: 'Upload measurements' })));
     expect(await screen.findByTestId('upload-errors')).toHaveTextContent(/Line 4, column sigma_S_per_cm.*conductivity must be greater than 0/);
   });
+
+  it('offers a Hall factor for Hall concentrations, checks it, and sends it; without Hall values there is no such field', async () => {
+    const hall = ['position_mm,n_per_cm3', '0.2,2.1e19', '0.9,2.0e19', '1.4,8.5e18', '1.9,2.2e18'].join('\n');
+    const { requests } = picks('hall.csv', hall);
+    render();
+    await choose();
+    expect(await screen.findByTestId('measurement-status')).toHaveTextContent(/Ready to upload/);
+    fireEvent.changeText(screen.getByTestId('field-hall-factor'), '7');
+    expect(screen.getByTestId('error-hall-factor')).toHaveTextContent(/hallFactor must be 0.5–2/);
+    expect(screen.getByRole('button', { name: 'Upload measurements' })).toBeDisabled();
+    fireEvent.changeText(screen.getByTestId('field-hall-factor'), '1.1');
+    await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Upload measurements' })));
+    expect((requests.find((r) => r.method === 'POST')?.body as FormData).getAll('hallFactor')).toEqual(['1.1']);
+
+    picks('as-grown.csv', good);
+    await choose();
+    expect(await screen.findByTestId('measurement-status')).toHaveTextContent(/Ready to upload/);
+    expect(screen.queryByTestId('field-hall-factor')).toBeNull();
+  });
 });

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { parseMeasurementsCsv, type MeasurementPreview as Preview } from '@/shared/growth/parse-measurements';
+import { hallFactorSchema } from '@/shared/api/growth';
 import type { UploadIssue } from '@/shared/api/family-upload';
 import { ApiError } from '@/components/api/client';
 import { useUploadMeasurements } from '@/components/api/growth';
@@ -40,6 +41,8 @@ export function MeasurementUpload({ orderId, lengthMm, measureTemperature, onSav
   const [chosen, setChosen] = useState<Chosen | null>(null);
   const [refused, setRefused] = useState<string | null>(null);
   const [temperature, setTemperature] = useState(String(measureTemperature));
+  // Empty: the band model's Hall factor (1 for a measured-table family); a number overrides it.
+  const [hallFactor, setHallFactor] = useState('');
   const choose = async () => {
     const result = await pick();
     if (!result) return;
@@ -60,9 +63,13 @@ export function MeasurementUpload({ orderId, lengthMm, measureTemperature, onSav
   };
   const t = Number(temperature);
   const temperatureError = temperature.trim() === '' || !(t >= 200 && t <= 400) ? 'Give the measurement temperature in kelvin (200–400 K).' : undefined;
+  const hall = hallFactor.trim() === '' ? null : hallFactorSchema.safeParse(hallFactor.trim());
+  const serverHallError = upload.error instanceof ApiError ? upload.error.fieldErrors.find((e) => e.field === 'hallFactor')?.message : undefined;
+  const hallError = hall && !hall.success ? hall.error.issues[0]?.message : serverHallError;
+  const hasHall = chosen?.preview.points.some((q) => q.perCm3 !== undefined) ?? false;
   const save = () => {
-    if (!chosen || temperatureError) return;
-    upload.mutate({ file: chosen.file, temperature: t }, { onSuccess: () => { setChosen(null); onSaved?.(); } });
+    if (!chosen || temperatureError || (hall && !hall.success)) return;
+    upload.mutate({ file: chosen.file, temperature: t, hallFactor: hall?.success ? hall.data : undefined }, { onSuccess: () => { setChosen(null); setHallFactor(''); onSaved?.(); } });
   };
   const serverIssues = upload.error instanceof ApiError ? upload.error.fieldErrors.filter((e) => e.field.startsWith('file')).map((e) => issueFromField(e.field, e.message)) : [];
   return (
@@ -77,11 +84,14 @@ export function MeasurementUpload({ orderId, lengthMm, measureTemperature, onSav
       {chosen?.preview.ok ? (
         <View style={styles.save}>
           <TextField id="measure-temperature" label="Measured at" unit="K" mono keyboardType="decimal-pad" help="Used for rows without a temperature_K column." value={temperature} onChangeText={setTemperature} error={temperatureError} />
-          <Button label={upload.isPending ? 'Uploading…' : 'Upload measurements'} onPress={save} disabled={upload.isPending || temperatureError !== undefined} />
+          {hasHall ? (
+            <TextField id="hall-factor" label="Hall factor r_H (optional)" mono keyboardType="decimal-pad" help="Leave empty for the band model's factor at each point (1 for a measured-table family). Carrier concentration = r_H × Hall concentration." value={hallFactor} onChangeText={setHallFactor} error={hallError} />
+          ) : null}
+          <Button label={upload.isPending ? 'Uploading…' : 'Upload measurements'} onPress={save} disabled={upload.isPending || temperatureError !== undefined || hallError !== undefined} />
         </View>
       ) : null}
       {serverIssues.length > 0 ? <IssueList kind="error" issues={serverIssues} /> : null}
-      {upload.error && serverIssues.length === 0 ? <ErrorNotice title="Not uploaded" error={upload.error} /> : null}
+      {upload.error && serverIssues.length === 0 && !serverHallError ? <ErrorNotice title="Not uploaded" error={upload.error} /> : null}
       {upload.isSuccess ? (
         <Notice tone="ok" title="Measurements saved" testID="measurements-saved">
           <AppText>The report below predicts the as-grown leg and checks each zone; the physicist has been e-mailed.</AppText>

@@ -17,7 +17,7 @@ const fields: FieldSpec[] = [
   { field: 'batch', label: 'Batch', help: 'The name the grower files the piece under, e.g. NL-P7-24-031.', required: true },
   { field: 'dueDate', label: 'Due date', help: 'Optional, as YYYY-MM-DD.' },
   { field: 'zones', label: 'Zones K', help: '1–12 constant-doping zones; the sheet shows every K, you can change it later.', numeric: true },
-  { field: 'lossBudget', label: 'ΔT loss budget per band edge', unit: 'K', numeric: true },
+  { field: 'lossBudget', label: 'ΔT loss budget (any combination inside the bands)', unit: 'K', numeric: true },
   { field: 'measureTemperature', label: 'Check temperature', unit: 'K', help: 'Where the grower measures S and σ (usually room temperature).', numeric: true },
   { field: 'notes', label: 'Notes for the grower', multiline: true },
 ];

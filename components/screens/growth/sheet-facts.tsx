@@ -1,11 +1,13 @@
 import { StyleSheet, View } from 'react-native';
 import type { GrowthOrderDto } from '@/shared/api/growth';
-import type { SheetStep, SheetView } from '@/shared/api/growth-documents';
+import { yieldBasis, type SheetStep, type SheetView } from '@/shared/api/growth-documents';
 import { formatDay } from '@/components/format/date';
+import { legEndsWords } from '@/components/format/leg-ends-words';
 import { colors, spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';
 import { ampere, kelvin, mm } from './growth-format';
 import { paperOnlyMark } from './print-marks';
+import { percent } from './yield-view';
 
 export type SheetFactsProps = { order: GrowthOrderDto; sheet: SheetView; step: SheetStep };
 
@@ -18,8 +20,10 @@ export function SheetFacts({ order, sheet, step }: SheetFactsProps) {
     ['length', 'Leg length', `${mm(sheet.lengthMm)} (zone ≥ ${mm(sheet.minZoneMm)})`],
     ['deltaT', `Predicted ΔT, ${step.zones} ${step.zones === 1 ? 'zone' : 'zones'}`, `${kelvin(step.deltaT)} at ${ampere(step.current)}`],
     ['continuous', 'Continuous profile', `ΔT ${kelvin(sheet.continuous.deltaT)}`],
-    ['budget', 'Tolerance', `each band edge loses ≤ ${kelvin(sheet.lossBudget)} of ΔT`],
+    ['budget', 'Tolerance', step.joint ? `any combination inside the bands loses ≤ ${kelvin(sheet.lossBudget)} of ΔT` : `each band edge alone loses ≤ ${kelvin(sheet.lossBudget)} of ΔT`],
+    ...(step.yield ? [['yield', 'Yield', `${percent(step.yield.meetsBudget)} ${yieldBasis(step.yield, sheet.unit)}`] as [string, string, string]] : []),
     ['check', 'Checks measured at', kelvin(sheet.measureTemperature)],
+    ['ends', 'Computed with', legEndsWords(sheet.ends)],
   ];
   if (order.notes) facts.push(['notes', `Notes from ${order.releasedBy}`, order.notes]);
   return (

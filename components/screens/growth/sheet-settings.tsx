@@ -49,7 +49,7 @@ export function SheetSettings({ order, maxZones }: SheetSettingsProps) {
   };
   const counts = Array.from({ length: Math.max(1, Math.min(12, maxZones)) }, (_, i) => i + 1);
   return (
-    <Section title="Sheet settings" hint="Choosing K is immediate; a new loss budget or check temperature recomputes the bands (a few seconds)." testID="sheet-settings">
+    <Section title="Sheet settings" hint="Choosing K is immediate; a new loss budget or check temperature recomputes the bands and the yield (a few seconds)." testID="sheet-settings">
       <View style={styles.field}>
         <AppText variant="label">Number of zones K</AppText>
         <View style={styles.chips} role="radiogroup" aria-label="Number of zones">
@@ -61,7 +61,7 @@ export function SheetSettings({ order, maxZones }: SheetSettingsProps) {
       </View>
       <View style={styles.pair}>
         <View style={styles.grow}>
-          <TextField id="loss-budget" label="ΔT loss budget per band edge" unit="K" mono keyboardType="decimal-pad" value={draft.lossBudget} onChangeText={(t) => setDraft({ ...draft, lossBudget: t })} error={problems.lossBudget ?? serverField('lossBudget')} />
+          <TextField id="loss-budget" label="ΔT loss budget (any combination inside the bands)" unit="K" mono keyboardType="decimal-pad" value={draft.lossBudget} onChangeText={(t) => setDraft({ ...draft, lossBudget: t })} error={problems.lossBudget ?? serverField('lossBudget')} />
         </View>
         <View style={styles.grow}>
           <TextField id="check-temperature" label="Check temperature" unit="K" mono keyboardType="decimal-pad" value={draft.measureTemperature} onChangeText={(t) => setDraft({ ...draft, measureTemperature: t })} error={problems.measureTemperature ?? serverField('measureTemperature')} />

@@ -1,5 +1,5 @@
 import type { GrowthOrderDetail, GrowthOrderDto, GrowthState } from '@/shared/api/growth';
-import type { ReportView, SheetView, SheetZone } from '@/shared/api/growth-documents';
+import type { JointBandCheckView, ReportView, SheetView, SheetZone, YieldView } from '@/shared/api/growth-documents';
 
 /** Invented ids and numbers for component tests. */
 export const ids = {
@@ -23,14 +23,23 @@ export const threeZones: SheetZone[] = [
   zone(2, 1.64, 2, 2.9e18),
 ];
 
+/** How the three-zone bands were made joint (invented numbers of the engine's shape). */
+export const jointThree: JointBandCheckView = { method: 'all-corners', scale: 0.52, cornersSolved: 8, worstCornerLoss: 0.9997, perZoneWorstCornerLoss: 3.46 };
+
+/** An invented yield: 600 legs, 16 bins ending at the design's 89.3 K. */
+export const yieldThree: YieldView = {
+  scatterDecades: 0.05, samples: 600, seed: 1412, meetsBudget: 0.977, budget: 1, target: 89.3, mean: 88.95, p05: 88.2, p50: 89.05, p95: 89.27, infeasible: 0,
+  histogram: { edges: Array.from({ length: 17 }, (_, i) => 86.9 + 0.15 * i), counts: [1, 1, 2, 3, 4, 6, 9, 14, 22, 31, 45, 62, 84, 103, 118, 83], below: 12 },
+};
+
 export function sheet(overrides: Partial<SheetView> = {}): SheetView {
   return {
-    unit: 'K', lossBudget: 1, measureTemperature: 300, lengthMm: 2, minZoneMm: 0.25,
+    unit: 'K', lossBudget: 1, measureTemperature: 300, dopingScatter: 0.05, lengthMm: 2, minZoneMm: 0.25,
     continuous: { value: 91.2, deltaT: 91.2 },
     steps: [
       { zones: 1, value: 77.4, deltaT: 77.4, current: 2.61, rows: [zone(0, 0, 2, 1.4e19)] },
       { zones: 2, value: 86.9, deltaT: 86.9, current: 3.05, rows: [zone(0, 0, 1.5, 2.2e19), zone(1, 1.5, 2, 4.1e18)] },
-      { zones: 3, value: 89.3, deltaT: 89.3, current: 3.22, rows: threeZones },
+      { zones: 3, value: 89.3, deltaT: 89.3, current: 3.22, rows: threeZones, joint: jointThree, yield: yieldThree },
     ],
     ...overrides,
   };
@@ -40,7 +49,7 @@ export function order(overrides: Partial<GrowthOrderDto> = {}): GrowthOrderDto {
   return {
     id: ids.order, runId: ids.run, designName: 'Detector p-leg', batch: 'NL-TEST-007', dueDate: '2027-05-14', notes: 'Seed end is the cold end.',
     state: 'requested', closeReason: null, zones: 3, lossBudget: 1, measureTemperature: 300, sheetStatus: 'ready', sheetError: null,
-    releasedBy: 'Piet Okafor', createdAt: '2026-11-20T09:30:00.000Z', updatedAt: '2026-11-20T09:31:00.000Z',
+    dopingScatter: 0.05, yieldStatus: 'ready', sheetProgress: null, releasedBy: 'Piet Okafor', createdAt: '2026-11-20T09:30:00.000Z', updatedAt: '2026-11-20T09:31:00.000Z',
     ...overrides,
   };
 }

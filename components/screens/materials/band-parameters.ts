@@ -1,9 +1,11 @@
-import type { BandParameters } from '@/shared/engine';
+import type { BandParameters, MinorityBand } from '@/shared/engine';
 
-export type BandNumberKey = Exclude<keyof BandParameters, 'carrier'>;
+export type BandNumberKey = Exclude<keyof BandParameters, 'carrier' | 'minority'>;
 
-export type ParameterInfo = {
-  key: BandNumberKey;
+export type MinorityKey = keyof MinorityBand;
+
+export type ParameterInfo<K extends string = BandNumberKey> = {
+  key: K;
   label: string;
   symbol: string;
   /** Unit on screen; the stored value uses the same unit. */
@@ -59,3 +61,50 @@ export const bandParameters: readonly ParameterInfo[] = [
 
 export const carrierExplanation =
   'Holes (p) or electrons (n) carry the current; this fixes the sign of S.';
+
+/** The minority band's numbers (two-band, bipolar model). */
+export const minorityParameters: readonly ParameterInfo<MinorityKey>[] = [
+  {
+    key: 'bandGap',
+    label: 'Band gap at 0 K',
+    symbol: 'Eg0',
+    unit: 'eV',
+    explanation: 'Energy gap to the minority band, extrapolated to 0 K; a narrow gap (bismuth telluride ≈ 0.2 eV) lets carriers across it at room temperature.',
+    example: '0.2',
+  },
+  {
+    key: 'bandGapSlope',
+    label: 'Gap temperature coefficient',
+    symbol: 'β',
+    unit: 'eV/K',
+    explanation: 'Eg(T) = Eg0 − β·T; positive when the gap narrows as it warms (typically 1e-4 to 5e-4 eV/K).',
+    example: '1e-4',
+  },
+  {
+    key: 'effectiveMass',
+    label: 'Minority effective mass',
+    symbol: 'm*min',
+    unit: 'm₀',
+    explanation: 'Density-of-states mass of the band across the gap (electrons of a p-type family, holes of an n-type one).',
+    example: '1.0',
+  },
+  {
+    key: 'mobility300',
+    label: 'Minority mobility at 300 K',
+    symbol: 'μmin,300',
+    unit: 'cm²/(V·s)',
+    explanation: 'Non-degenerate drift mobility of the minority carriers; the faster they are, the sooner they cut S.',
+    example: '600',
+  },
+  {
+    key: 'mobilityExponent',
+    label: 'Minority mobility exponent',
+    symbol: 'amin',
+    unit: '',
+    explanation: 'μmin follows (T/300 K)^a; about −1.5 for acoustic phonons.',
+    example: '-1.5',
+  },
+];
+
+export const minorityExplanation =
+  'A second band across a gap. Where it holds enough carriers (a hot, lightly doped slice) they lower S and add bipolar heat conduction; the doping is then the net doping.';

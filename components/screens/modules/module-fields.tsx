@@ -10,7 +10,7 @@ const fields: [Key, string, string, string?][] = [
   ['deltaT', 'ΔT', 'K'],
   ['couples', 'Couples N', 'couples'],
   ['areaRatio', 'Area ratio A_n / A_p (optional)', '–', 'Default: the legs’ own areas'],
-  ['contactResistivity', 'Contact resistivity per junction (optional)', 'Ω·m²', 'e.g. 1e-10'],
+  ['contactResistivity', 'Contact resistivity per junction (optional)', 'Ω·m²', 'Blank: each run leg’s design contacts; a value replaces them'],
   ['coldPlateResistance', 'Cold plate thermal resistance (optional)', 'K/W'],
   ['hotPlateResistance', 'Hot plate thermal resistance (optional)', 'K/W'],
   ['currentLimit', 'Supply or wire current limit (optional)', 'A', 'Currents above it are flagged'],

@@ -1,6 +1,8 @@
 import { StyleSheet, View } from 'react-native';
 import type { RunDetail } from '@/shared/api/runs';
 import { runExportUrl } from '@/components/api/runs';
+import { legEndsOfCase } from '@/shared/engine/leg-ends';
+import { legEndsWords } from '@/components/format/leg-ends-words';
 import { formatScientific } from '@/components/format/number';
 import { colors, spacing } from '@/components/theme';
 import { DownloadLink } from '@/components/ui/download-link';
@@ -17,6 +19,8 @@ function facts(detail: RunDetail, r: RunResult): Fact[] {
   const list: Fact[] = [
     { key: 'engine', label: 'Engine version', value: detail.engineVersion },
     { key: 'family', label: 'Material family', value: `${detail.design.familyName}, version ${detail.familyVersion}` },
+    // From the case exactly as run: what every number on this page was computed with.
+    { key: 'ends', label: 'Computed with', value: legEndsWords(legEndsOfCase(detail.case)) },
     {
       key: 'accuracy',
       label: 'Accuracy',

@@ -7,6 +7,7 @@ import { colors, spacing } from '@/components/theme';
 import { Chip } from '@/components/ui/chip';
 import { Glyph } from '@/components/ui/glyph';
 import { AppText } from '@/components/ui/text';
+import { BipolarLine } from './bipolar-note';
 import { ProgressBar } from './progress-bar';
 import { asObjective, formatObjective, objectiveInfo, placeInLine } from './run-format';
 import { RunStateBadge } from './run-state-badge';
@@ -65,6 +66,7 @@ function RowBody({ run, live, showDesign, sweepLabel }: Omit<RunRowProps, 'selec
           {run.waiting.reason}
         </AppText>
       ) : null}
+      <BipolarLine bipolar={run.bipolar} />
       {run.state === 'failed' && run.error ? (
         <AppText variant="caption" tone="danger" numberOfLines={2}>
           {run.error}

@@ -62,6 +62,12 @@ export function design(overrides: Partial<Design> = {}): Design {
     monotone: false,
     starts: 16,
     minZoneMm: 0,
+    coldContactMicroOhmCm2: 0,
+    hotContactMicroOhmCm2: 0,
+    parasitic: 'none',
+    parasiticLoadW: 0,
+    emissivity: 0,
+    surroundingsK: null,
     createdBy: 'Piet',
     createdAt: '2026-02-01T09:00:00.000Z',
     updatedAt: '2026-02-01T09:00:00.000Z',
@@ -90,6 +96,7 @@ export function runSummary(state: RunState, overrides: Partial<RunSummary> = {})
     error: state === 'failed' ? 'the engine refused hotSide: no current gives a steady state' : null,
     attempts: state === 'queued' ? 0 : 1,
     waiting: state === 'queued' ? { position: 2, reason: '1 run ahead of it in the queue (each team\'s first waiting run goes before any team\'s second).' } : null,
+    bipolar: null,
     ...overrides,
   };
 }

@@ -22,6 +22,14 @@ export class Design {
   /** Independent starting points of the global search (each a full local optimisation). */
   @Column({ type: 'integer', default: 16 }) starts!: number;
   @Column({ type: 'double precision', default: 0 }) minZoneMm!: number;
+  /** Specific contact resistivity of the cold and hot junction, µΩ·cm² (1 µΩ·cm² = 1e-10 Ω·m²). */
+  @Column({ type: 'double precision', default: 0 }) coldContactMicroOhmCm2!: number;
+  @Column({ type: 'double precision', default: 0 }) hotContactMicroOhmCm2!: number;
+  /** Parasitic heat onto the cold side: none, a fixed load (parasiticLoadW), or radiation onto the sides (emissivity, surroundingsK). */
+  @Column({ type: 'text', default: 'none' }) parasitic!: 'none' | 'fixed' | 'radiation';
+  @Column({ type: 'double precision', default: 0 }) parasiticLoadW!: number;
+  @Column({ type: 'double precision', default: 0 }) emissivity!: number;
+  @Column({ type: 'double precision', nullable: true }) surroundingsK!: number | null;
   @Column({ type: 'text' }) createdBy!: string;
   @CreateDateColumn({ type: 'timestamptz' }) createdAt!: Date;
   @UpdateDateColumn({ type: 'timestamptz' }) updatedAt!: Date;

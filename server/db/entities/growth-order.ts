@@ -16,6 +16,10 @@ export class GrowthOrder {
   @Column({ type: 'integer', default: 3 }) zones!: number;
   @Column({ type: 'double precision', default: 1 }) lossBudget!: number;
   @Column({ type: 'double precision', default: 300 }) measureTemperature!: number;
+  /** The grower's typical doping scatter per zone for the yield, decades (1σ). */
+  @Column({ type: 'double precision', default: 0.05 }) dopingScatter!: number;
+  /** Fraction done of the sheet or yield job now computing; null when none is. */
+  @Column({ type: 'double precision', nullable: true }) sheetProgress!: number | null;
   @Column({ type: 'text', default: 'computing' }) sheetStatus!: 'computing' | 'ready' | 'failed';
   @Column({ type: 'jsonb', nullable: true }) sheet!: Record<string, unknown> | null;
   @Column({ type: 'text', nullable: true }) sheetError!: string | null;

@@ -15,15 +15,25 @@ export type DemoFamily = { name: string; summary: string; source: string; defini
 const modelFamilies: DemoFamily[] = [
   {
     name: 'NL-P7 (Bi,Sb)₂Te₃-like, p-type band model',
-    summary: 'Single parabolic band, acoustic-phonon scattering; m* = 1.0 m₀, μ₀ = 350 cm²/(V·s)·(T/300 K)^−1.5, κL = 1.0 W/(m·K)·(T/300 K)^−1.',
-    source: 'Demo data: typical values for a p-type bismuth-telluride alloy, from memory; not a measurement.',
-    definition: { kind: 'band', carrier: 'p', effectiveMass: 1.0, mobility300: 350, mobilityExponent: -1.5, latticeKappa300: 1.0, latticeKappaExponent: -1 },
+    summary:
+      'Two parabolic bands, acoustic-phonon scattering. Holes: m* = 1.0 m₀, μ₀ = 350 cm²/(V·s)·(T/300 K)^−1.5; electrons across the gap: m* = 1.0 m₀, μ₀ = 600 cm²/(V·s)·(T/300 K)^−1.5; ' +
+      'Eg = 0.20 eV − 1.0e-4 eV/K·T (0.17 eV at 300 K); κL = 1.0 W/(m·K)·(T/300 K)^−1.',
+    source: 'Demo data: typical values for a p-type bismuth-telluride alloy, band gap and minority mobility included, quoted from memory; not a measurement.',
+    definition: {
+      kind: 'band', carrier: 'p', effectiveMass: 1.0, mobility300: 350, mobilityExponent: -1.5, latticeKappa300: 1.0, latticeKappaExponent: -1,
+      minority: { effectiveMass: 1.0, mobility300: 600, mobilityExponent: -1.5, bandGap: 0.2, bandGapSlope: 1e-4 },
+    },
   },
   {
     name: 'NL-N3 Bi₂(Te,Se)₃-like, n-type band model',
-    summary: 'Single parabolic band, acoustic-phonon scattering; m* = 1.1 m₀, μ₀ = 300 cm²/(V·s)·(T/300 K)^−1.5, κL = 1.3 W/(m·K)·(T/300 K)^−1.',
-    source: 'Demo data: typical values for an n-type bismuth-telluride alloy, from memory; not a measurement.',
-    definition: { kind: 'band', carrier: 'n', effectiveMass: 1.1, mobility300: 300, mobilityExponent: -1.5, latticeKappa300: 1.3, latticeKappaExponent: -1 },
+    summary:
+      'Two parabolic bands, acoustic-phonon scattering. Electrons: m* = 1.1 m₀, μ₀ = 300 cm²/(V·s)·(T/300 K)^−1.5; holes across the gap: m* = 1.0 m₀, μ₀ = 200 cm²/(V·s)·(T/300 K)^−1.5; ' +
+      'Eg = 0.22 eV − 1.0e-4 eV/K·T (0.19 eV at 300 K); κL = 1.3 W/(m·K)·(T/300 K)^−1.',
+    source: 'Demo data: typical values for an n-type bismuth-telluride alloy, band gap and minority mobility included, quoted from memory; not a measurement.',
+    definition: {
+      kind: 'band', carrier: 'n', effectiveMass: 1.1, mobility300: 300, mobilityExponent: -1.5, latticeKappa300: 1.3, latticeKappaExponent: -1,
+      minority: { effectiveMass: 1.0, mobility300: 200, mobilityExponent: -1.5, bandGap: 0.22, bandGapSlope: 1e-4 },
+    },
   },
   {
     name: 'Reference leg, constant properties',
@@ -42,7 +52,9 @@ function measuredDemo(): DemoFamily {
   const model = familyFromMaterial(modelFamilies[0]!.definition);
   const rnd = mulberry32(7);
   const jitter = (v: number, rel: number): number => v * (1 + rel * (2 * rnd() - 1));
-  const dopings = [1e18, 2e18, 4e18, 8e18, 1.5e19, 3e19, 1.2e20];
+  // From 3e18 cm⁻³ up: below it the two-band model's hottest samples turn n-type
+  // (bipolar conduction), and a table holds one carrier type.
+  const dopings = [3e18, 4e18, 6e18, 8e18, 1.5e19, 3e19, 1.2e20];
   const temperatures = [220, 250, 280, 300, 330, 360, 400];
   const rows = dopings.flatMap((n) => temperatures.map((t) => {
     const p = propertiesAt(model, n, t);
@@ -72,7 +84,7 @@ export function demoFamilies(): DemoFamily[] {
 export const demoModule = {
   name: 'Demo: detector stage, 31 uniform couples',
   notes: 'Demo data: both legs at uniform doping, for comparing with couples built from graded runs.',
-  pFamily: { name: modelFamilies[0]!.name, perCm3: 1.3e19, lengthMm: 1.5, areaMm2: 1 },
+  pFamily: { name: modelFamilies[0]!.name, perCm3: 1.6e19, lengthMm: 1.5, areaMm2: 1 },
   nFamily: { name: modelFamilies[1]!.name, perCm3: 2e19, lengthMm: 1.5, areaMm2: 1 },
   hotSide: 300,
   deltaT: 30,

@@ -1,6 +1,6 @@
 import { figureOfMerit, type MaterialInput } from '@/shared/engine';
 import { formatNumber, formatScientific } from '@/components/format/number';
-import { bandParameters, carrierExplanation } from '../band-parameters';
+import { bandParameters, carrierExplanation, minorityExplanation, minorityParameters } from '../band-parameters';
 import { carrierLabel } from '../family-labels';
 
 /** One line of the parameters table, already in trade units. */
@@ -27,6 +27,14 @@ function tableRows(rows: TableRows): ParameterRow[] {
   ];
 }
 
+function minorityRows(minority: Extract<MaterialInput, { kind: 'band' }>['minority']): ParameterRow[] {
+  if (!minority) return [{ key: 'minority', label: 'Minority band', value: 'none (one band)', unit: '', explanation: minorityExplanation }];
+  return [
+    { key: 'minority', label: 'Minority band', value: 'yes (two bands)', unit: '', explanation: minorityExplanation },
+    ...minorityParameters.map((p) => ({ key: `minority-${p.key}`, label: `${p.label} ${p.symbol}`, value: formatNumber(minority[p.key], 4), unit: p.unit, explanation: p.explanation })),
+  ];
+}
+
 /** What the parameters table lists for each kind of family. */
 export function parameterRows(definition: MaterialInput): ParameterRow[] {
   switch (definition.kind) {
@@ -40,6 +48,7 @@ export function parameterRows(definition: MaterialInput): ParameterRow[] {
           unit: p.unit,
           explanation: p.explanation,
         })),
+        ...minorityRows(definition.minority),
       ];
     case 'constant':
       return [

@@ -91,4 +91,29 @@ describe('band family form model', () => {
     expect(split.other).toEqual(['definition: unknown key "colour"']);
     expect(humanize('definition.mobilityExponent', 'mobilityExponent is required')).toBe('Mobility exponent is required');
   });
+
+  it('adds the minority band when two bands are chosen, and names its fields by their labels', () => {
+    const two = { ...filled(), twoBands: true, minority: { bandGap: '0.2', bandGapSlope: '1e-4', effectiveMass: '1', mobility300: '600', mobilityExponent: '-1.5' } };
+    const result = validate(two);
+    expect(result.ok && result.request.definition).toEqual(expect.objectContaining({ minority: { bandGap: 0.2, bandGapSlope: 1e-4, effectiveMass: 1, mobility300: 600, mobilityExponent: -1.5 } }));
+    // One band: whatever was typed in the hidden minority fields is not sent.
+    const one = validate({ ...two, twoBands: false });
+    expect(one.ok && 'minority' in one.request.definition).toBe(false);
+    const bad = validate({ ...two, minority: { ...two.minority, bandGap: '170', mobility300: '' } });
+    expect(bad.ok).toBe(false);
+    if (bad.ok) return;
+    expect(bad.errors['definition.minority.bandGap']).toMatch(/^Band gap at 0 K above 10 is implausible: .*eV.*meV/);
+    expect(bad.errors['definition.minority.mobility300']).toBe('Minority mobility at 300 K is required');
+    const closing = validate({ ...two, minority: { ...two.minority, bandGap: '0.02' } });
+    expect(!closing.ok && closing.errors['definition.minority.bandGapSlope']).toMatch(/closes below 300 K/);
+  });
+
+  it('fills the minority fields from a stored two-band version, and leaves them at their defaults for one band', () => {
+    const stored = bandDetail().current;
+    const definition = { ...(stored.definition as Extract<typeof stored.definition, { kind: 'band' }>), minority: { bandGap: 0.22, bandGapSlope: 1e-4, effectiveMass: 1, mobility300: 200, mobilityExponent: -1.5 } };
+    const values = valuesFromVersion('Two-band', { ...stored, definition });
+    expect(values.twoBands).toBe(true);
+    expect(values.minority).toEqual({ bandGap: '0.22', bandGapSlope: '0.0001', effectiveMass: '1', mobility300: '200', mobilityExponent: '-1.5' });
+    expect(valuesFromVersion('One band', stored).twoBands).toBe(false);
+  });
 });

@@ -3,7 +3,7 @@ import { createFamilyRequestSchema, type FamilyVersion } from '@/shared/api/fami
 import type { FieldError } from '@/shared/api/errors';
 import type { MaterialInput } from '@/shared/engine';
 import { splitFieldErrors, type FieldErrors, type SplitErrors } from '@/components/ui/save-errors';
-import { bandParameters, type BandNumberKey } from '../band-parameters';
+import { bandParameters, minorityParameters, type BandNumberKey, type MinorityKey } from '../band-parameters';
 
 /** What the form holds: text as typed, so a half-typed "1e" is not lost. */
 export type FamilyFormValues = {
@@ -12,6 +12,9 @@ export type FamilyFormValues = {
   source: string;
   carrier: 'p' | 'n';
   numbers: Record<BandNumberKey, string>;
+  /** Two bands (a minority band across a gap) or one. */
+  twoBands: boolean;
+  minority: Record<MinorityKey, string>;
 };
 
 export type { FieldErrors };
@@ -32,6 +35,8 @@ export function emptyBandValues(): FamilyFormValues {
       latticeKappa300: '',
       latticeKappaExponent: '-1',
     },
+    twoBands: false,
+    minority: { bandGap: '', bandGapSlope: '', effectiveMass: '', mobility300: '', mobilityExponent: '-1.5' },
   };
 }
 
@@ -42,7 +47,11 @@ export function valuesFromVersion(name: string, version: Pick<FamilyVersion, 'de
   if (definition.kind !== 'band') return values;
   const numbers = { ...values.numbers };
   for (const p of bandParameters) numbers[p.key] = String(definition[p.key]);
-  return { ...values, carrier: definition.carrier, numbers };
+  const stored = definition.minority;
+  if (!stored) return { ...values, carrier: definition.carrier, numbers };
+  const minority = { ...values.minority };
+  for (const p of minorityParameters) minority[p.key] = String(stored[p.key]);
+  return { ...values, carrier: definition.carrier, numbers, twoBands: true, minority };
 }
 
 /** "" → missing (the schema says "is required"); anything else a number, NaN if it is not one. */
@@ -55,6 +64,7 @@ function parseNumber(text: string): number | undefined {
 function bandDefinition(values: FamilyFormValues): Record<string, unknown> {
   const definition: Record<string, unknown> = { kind: 'band', carrier: values.carrier };
   for (const p of bandParameters) definition[p.key] = parseNumber(values.numbers[p.key]);
+  if (values.twoBands) definition.minority = Object.fromEntries(minorityParameters.map((p) => [p.key, parseNumber(values.minority[p.key])]));
   return definition;
 }
 
@@ -64,6 +74,8 @@ const labels: Record<string, string> = {
   source: 'Source',
   'definition.carrier': 'Carrier type',
   ...Object.fromEntries(bandParameters.map((p) => [`definition.${p.key}`, p.label])),
+  'definition.minority': 'Minority band',
+  ...Object.fromEntries(minorityParameters.map((p) => [`definition.minority.${p.key}`, p.label])),
 };
 
 /** The label a field has on screen ("Effective mass"), or its path when it has none. */

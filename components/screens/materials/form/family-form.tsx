@@ -50,12 +50,14 @@ export function FamilyForm(props: FamilyFormProps) {
   return (
     <View style={styles.form}>
       {fixedDefinition ? null : (
-        <Section title="Band model" hint="Single parabolic band with acoustic-phonon scattering.">
+        <Section title="Band model" hint="Parabolic bands with acoustic-phonon scattering: the majority band, and optionally a minority band across a gap.">
           <BandFields
             values={values}
             errors={errors}
             onCarrier={(carrier) => setValues((v) => ({ ...v, carrier }))}
             onNumber={(key, text) => setValues((v) => ({ ...v, numbers: { ...v.numbers, [key]: text } }))}
+            onTwoBands={(twoBands) => setValues((v) => ({ ...v, twoBands }))}
+            onMinority={(key, text) => setValues((v) => ({ ...v, minority: { ...v.minority, [key]: text } }))}
           />
         </Section>
       )}

@@ -4,6 +4,7 @@ import type { MaterialInput } from '@/shared/engine';
 import { plotSetup, type CurveQuantity } from '@/components/charts/family-curves';
 import { colors, layout, radii, spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';
+import { BipolarPlot } from './bipolar-plot';
 import { DopingPlot } from './doping-plot';
 import { OptimumPlot } from './optimum-plot';
 import { TemperatureChips } from './temperature-chips';
@@ -57,6 +58,9 @@ export function FamilyPlots({ definition, quantities = allQuantities, showOptimu
       measured={setup.measured}
     />
   ));
+  if (setup.family?.minorityShare) {
+    charts.push(<BipolarPlot key="bipolar" family={setup.family} temperatures={temperatures} range={setup.dopingRange} />);
+  }
   if (showOptimum && setup.family) {
     charts.push(
       <OptimumPlot
