@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { colors, radii, spacing } from '@/components/theme';
 import { Glyph, type GlyphName } from './glyph';
+import { boxMark } from './box-mark';
 import { AppText } from './text';
 
 export type NoticeTone = 'info' | 'warning' | 'danger' | 'ok';
@@ -13,7 +14,7 @@ const toneWord: Record<NoticeTone, string> = { info: 'Note', warning: 'Warning',
 export function Notice({ tone, title, children, testID }: { tone: NoticeTone; title?: string; children?: ReactNode; testID?: string }) {
   const color = toneColor[tone];
   return (
-    <View style={[styles.box, toneBox[tone]]} role={tone === 'danger' ? 'alert' : 'note'} testID={testID}>
+    <View style={[styles.box, toneBox[tone]]} role={tone === 'danger' ? 'alert' : 'note'} testID={testID} {...boxMark}>
       <View style={styles.titleRow}>
         <Glyph name={toneGlyph[tone]} color={color} />
         <AppText variant="label" style={{ color }}>

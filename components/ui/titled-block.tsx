@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { type StyleProp, StyleSheet, View, type ViewStyle } from 'react-native';
 import { spacing } from '@/components/theme';
+import { boxMark } from './box-mark';
 import { AppText } from './text';
 
 export type TitledBlockProps = {
@@ -16,7 +17,7 @@ export type TitledBlockProps = {
 /** One chart, table or diagram under a small heading (level 3) and an optional hint. */
 export function TitledBlock({ title, hint, style, children, testID }: TitledBlockProps) {
   return (
-    <View style={[styles.block, style]} testID={testID}>
+    <View style={[styles.block, style]} testID={testID} {...boxMark}>
       <View style={styles.heading}>
         <AppText variant="bodyStrong" role="heading" aria-level={3}>
           {title}

@@ -33,7 +33,10 @@ describe('MarkedCurrentsTable', () => {
     expect(within(best).getByText('1.5')).toBeOnTheScreen();
     expect(within(best).queryByText(/over the limit/)).toBeNull();
     expect(within(best).getByText('0.72')).toBeOnTheScreen();
-    expect(screen.getByText('A')).toBeOnTheScreen();
+    // A phone shows one card per marked current, each number under its quantity and unit.
+    expect(within(qc).getByText('Graded optimum · Maximum Qc')).toBeOnTheScreen();
+    expect(within(qc).getByText('I (A)')).toBeOnTheScreen();
+    expect(within(qc).getByText('Qc (W)')).toBeOnTheScreen();
   });
 
   it('says when there is no maximum COP (ΔT = 0 K)', () => {
@@ -60,7 +63,7 @@ describe('CurvesBody', () => {
   it('computes the optimum and baselines with the engine and marks both currents', () => {
     renderWithProviders(<CurvesBody runCase={detail.case} result={parsed.result} />, { session: sessionAs('viewer') });
     const max = screen.getByTestId('marked-currents-optimum-qc');
-    expect(within(max).getByText('Maximum Qc')).toBeOnTheScreen();
+    expect(within(max).getByText('Graded optimum · Maximum Qc')).toBeOnTheScreen();
     expect(screen.getByTestId('marked-currents-optimum-cop')).toBeOnTheScreen();
     expect(screen.getByTestId('marked-currents-uniform-qc')).toBeOnTheScreen();
     expect(screen.getByTestId('pumping-range-optimum')).toHaveTextContent(/pumps heat from .* A to .* A\./);

@@ -1,13 +1,30 @@
 import { StyleSheet, View } from 'react-native';
-import type { MeasurementPreview as Preview } from '@/shared/growth/parse-measurements';
-import { formatNumber } from '@/components/format/number';
-import { colors, spacing } from '@/components/theme';
+import type { MeasuredPoint, MeasurementPreview as Preview } from '@/shared/growth/parse-measurements';
+import { formatNumber, formatScientific } from '@/components/format/number';
+import { spacing } from '@/components/theme';
+import { DataTable, type DataColumn } from '@/components/ui/data-table';
 import { Notice } from '@/components/ui/notice';
 import { AppText } from '@/components/ui/text';
 import { IssueList } from '../materials/upload/issue-list';
-import { kelvin, microVoltPerK, mm, perCm3, siemensPerCm } from './growth-format';
+import { mm } from './growth-format';
 
 const shownRows = 8;
+
+const orDash = (v: number | undefined, f: (v: number) => string) => (v === undefined ? '–' : f(v));
+
+/** Line and position, S and σ, and n and T when the file has them; units in the heads. */
+function pointColumns(points: MeasuredPoint[]): DataColumn<MeasuredPoint>[] {
+  const num = { width: 84, grow: 1, mono: true, align: 'right' } as const;
+  const columns: DataColumn<MeasuredPoint>[] = [
+    { key: 'line', head: 'Line', unit: '', width: 48, mono: true, cell: (p) => String(p.line) },
+    { key: 'x', head: 'x', unit: 'mm', ...num, cell: (p) => formatNumber(p.positionMm, 3) },
+    { key: 'S', head: 'S', unit: 'µV/K', ...num, cell: (p) => orDash(p.seebeck, (v) => formatNumber(v * 1e6, 3)) },
+    { key: 'sigma', head: 'σ', unit: 'S/cm', ...num, cell: (p) => orDash(p.sigma, (v) => formatNumber(v / 100, 3)) },
+  ];
+  if (points.some((p) => p.perCm3 !== undefined)) columns.push({ key: 'n', head: 'n', unit: 'cm⁻³', ...num, width: 100, cell: (p) => orDash(p.perCm3, (v) => formatScientific(v, 3)) });
+  if (points.some((p) => p.temperature !== undefined)) columns.push({ key: 'T', head: 'T', unit: 'K', ...num, cell: (p) => orDash(p.temperature, (v) => formatNumber(v, 4)) });
+  return columns;
+}
 
 /** The positions read from the file, in the trade's units, before anything is saved. */
 export function MeasurementPreview({ preview }: { preview: Preview }) {
@@ -27,17 +44,15 @@ export function MeasurementPreview({ preview }: { preview: Preview }) {
       <IssueList kind="error" issues={preview.errors} />
       <IssueList kind="warning" issues={preview.warnings} />
       {preview.ok ? (
-        <View role="table" aria-label="Measured positions" testID="measurement-rows">
-          {points.slice(0, shownRows).map((p) => (
-            <View key={p.line} role="row" style={styles.row}>
-              <AppText variant="mono" tone="muted" style={styles.line}>{`line ${p.line}`}</AppText>
-              <AppText variant="mono" style={styles.cell}>{mm(p.positionMm)}</AppText>
-              <AppText variant="mono" style={styles.cell}>{p.seebeck !== undefined ? microVoltPerK(p.seebeck * 1e6) : '–'}</AppText>
-              <AppText variant="mono" style={styles.cell}>{p.sigma !== undefined ? siemensPerCm(p.sigma / 100) : '–'}</AppText>
-              {p.perCm3 !== undefined ? <AppText variant="mono" style={styles.cell}>{perCm3(p.perCm3)}</AppText> : null}
-              {p.temperature !== undefined ? <AppText variant="mono" style={styles.cell}>{kelvin(p.temperature)}</AppText> : null}
-            </View>
-          ))}
+        <View style={styles.rows}>
+          <DataTable
+            label="Measured positions"
+            testID="measurement-rows"
+            columns={pointColumns(points)}
+            rows={points.slice(0, shownRows)}
+            rowKey={(p) => String(p.line)}
+            rowTestID={(p) => `measurement-row-${p.line}`}
+          />
           {points.length > shownRows ? (
             <AppText variant="caption" tone="muted">{`…and ${formatNumber(points.length - shownRows, 4)} more positions.`}</AppText>
           ) : null}
@@ -49,7 +64,5 @@ export function MeasurementPreview({ preview }: { preview: Preview }) {
 
 const styles = StyleSheet.create({
   wrap: { gap: spacing.md },
-  row: { flexDirection: 'row', flexWrap: 'wrap', columnGap: spacing.md, paddingVertical: spacing.xxs, borderTopWidth: 1, borderTopColor: colors.border },
-  line: { width: 64 },
-  cell: { minWidth: 92 },
+  rows: { gap: spacing.xs },
 });

@@ -51,7 +51,9 @@ describe('MeasurementUpload', () => {
     render();
     await choose();
     expect(await screen.findByTestId('measurement-status')).toHaveTextContent(/Ready to upload.*4 positions from 0\.2\smm to 1\.9\smm/);
-    expect(screen.getByTestId('measurement-rows')).toHaveTextContent(/line 2.*0\.2\smm.*190\sµV\/K.*1350\sS\/cm/);
+    // Units in the heads, values under them: line 2 read as 0.2 mm, 190 µV/K and 1350 S/cm.
+    expect(screen.getByTestId('measurement-rows')).toHaveTextContent(/^Line\s?x\s?mmS\s?µV\/Kσ\s?S\/cm/);
+    expect(screen.getByTestId('measurement-row-2')).toHaveTextContent(/^20\.21901350$/);
     fireEvent.changeText(screen.getByTestId('field-measure-temperature'), '29.5');
     expect(screen.getByTestId('error-measure-temperature')).toHaveTextContent(/kelvin/);
     fireEvent.changeText(screen.getByTestId('field-measure-temperature'), '296');

@@ -1,61 +1,23 @@
-import { ScrollView, StyleSheet, View } from 'react-native';
 import type { ModuleTrade } from '@/shared/engine';
 import { formatNumber } from '@/components/format/number';
-import { colors, spacing } from '@/components/theme';
-import { useIsWide } from '@/components/shell/use-is-wide';
-import { AppText } from '@/components/ui/text';
+import { DataTable, type DataColumn } from '@/components/ui/data-table';
 import { limitWords } from '@/components/screens/curves/marked-currents-table';
 
-type Width = 'count' | 'number' | 'current';
+type TradeRow = ModuleTrade['rows'][number];
 
-const heads: [string, string, Width][] = [
-  ['N', 'couples', 'count'],
-  ['Leg area p', 'mm²', 'number'],
-  ['I at max Qc', 'A', 'current'],
-  ['V at max Qc', 'V', 'number'],
-  ['Max Qc', 'W', 'number'],
+/** The current column is wide enough on wide windows for "56.98 (over the limit)" on one line. */
+const columns: DataColumn<TradeRow>[] = [
+  { key: 'couples', head: 'N', unit: 'couples', width: 72, mono: true, cell: (r) => String(r.couples) },
+  { key: 'area', head: 'Leg area p', unit: 'mm²', width: 112, phoneWidth: 96, mono: true, cell: (r) => formatNumber(r.legArea.p * 1e6, 4) },
+  { key: 'current', head: 'I at max Qc', unit: 'A', width: 200, phoneWidth: 112, mono: true, cell: (r) => limitWords(r.maxHeatLoad) },
+  { key: 'voltage', head: 'V at max Qc', unit: 'V', width: 112, phoneWidth: 96, mono: true, cell: (r) => formatNumber(r.maxHeatLoad.voltage, 4) },
+  { key: 'heatLoad', head: 'Max Qc', unit: 'W', width: 112, phoneWidth: 96, mono: true, cell: (r) => formatNumber(r.maxHeatLoad.heatLoad, 4) },
 ];
 
 /**
  * The N-couple trade: the same total leg area split into other numbers of
- * couples. The current column is wide enough on wide windows for
- * "56.98 (over the limit)" on one line; narrow windows scroll sideways.
+ * couples. On a phone it scrolls inside its card, N held at the left.
  */
 export function TradeTable({ trade }: { trade: ModuleTrade }) {
-  const wide = useIsWide();
-  const width = (w: Width) => [styles.cell, w === 'count' ? styles.count : w === 'current' && wide ? styles.current : styles.number];
-  return (
-    <ScrollView horizontal>
-      <View role="table" aria-label="Couples at the same total leg area" testID="trade-table">
-        <View role="row" style={styles.row}>
-          {heads.map(([h, u, w]) => (
-            <View key={h} role="columnheader" style={width(w)}>
-              <AppText variant="label">{h}</AppText>
-              <AppText variant="caption" tone="muted">
-                {u}
-              </AppText>
-            </View>
-          ))}
-        </View>
-        {trade.rows.map((r) => (
-          <View key={r.couples} role="row" style={[styles.row, styles.line]}>
-            {[String(r.couples), formatNumber(r.legArea.p * 1e6, 4), limitWords(r.maxHeatLoad), formatNumber(r.maxHeatLoad.voltage, 4), formatNumber(r.maxHeatLoad.heatLoad, 4)].map((t, i) => (
-              <AppText key={i} role="cell" variant="mono" style={width(heads[i][2])}>
-                {t}
-              </AppText>
-            ))}
-          </View>
-        ))}
-      </View>
-    </ScrollView>
-  );
+  return <DataTable label="Couples at the same total leg area" testID="trade-table" columns={columns} rows={trade.rows} rowKey={(r) => String(r.couples)} />;
 }
-
-const styles = StyleSheet.create({
-  row: { flexDirection: 'row' },
-  line: { borderTopWidth: 1, borderTopColor: colors.border },
-  cell: { paddingVertical: spacing.xs, paddingRight: spacing.sm },
-  count: { width: 72 },
-  number: { width: 112 },
-  current: { width: 200 },
-});

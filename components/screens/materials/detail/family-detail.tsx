@@ -1,10 +1,11 @@
-import { StyleSheet, useWindowDimensions, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { Link } from 'expo-router';
 import type { FamilyDetailResponse } from '@/shared/api/families';
 import type { BackTarget } from '@/components/shell/back-link';
 import { ScreenFrame } from '@/components/shell/screen-frame';
-import { colors, layout, spacing, type as typeScale } from '@/components/theme';
+import { colors, spacing, type as typeScale } from '@/components/theme';
 import { BlockHeading } from '@/components/ui/block-heading';
+import { Columns } from '@/components/ui/columns';
 import { Section } from '@/components/ui/form-section';
 import { Notice } from '@/components/ui/notice';
 import { AppText } from '@/components/ui/text';
@@ -34,8 +35,6 @@ const plotsHint = {
 /** Everything about one family: what it is, its numbers, plots, versions, actions. */
 export function FamilyDetail({ detail, back }: { detail: FamilyDetailResponse; back: BackTarget }) {
   const { family, current } = detail;
-  const { width } = useWindowDimensions();
-  const twoColumns = width >= layout.twoColumnMinWidth + layout.railWidth;
   const older = current.version !== family.version;
   return (
     <ScreenFrame title={family.name} back={back}>
@@ -44,18 +43,14 @@ export function FamilyDetail({ detail, back }: { detail: FamilyDetailResponse; b
         <FamilyOverview family={family} version={current} />
         <FamilyActions family={family} version={current.version} />
       </Section>
-      <View style={twoColumns ? styles.columns : styles.stack}>
-        <View style={styles.column}>
-          <Section title="Parameters" hint="In the units of the trade.">
-            <ParameterTable definition={current.definition} />
-          </Section>
-        </View>
-        <View style={styles.column}>
-          <Section title="Versions" hint="A version a run has used is locked; editing adds a new one." testID="versions">
-            <VersionHistory familyId={family.id} versions={detail.versions} latest={family.version} viewing={current.version} />
-          </Section>
-        </View>
-      </View>
+      <Columns>
+        <Section title="Parameters" hint="In the units of the trade.">
+          <ParameterTable definition={current.definition} />
+        </Section>
+        <Section title="Versions" hint="A version a run has used is locked; editing adds a new one." testID="versions">
+          <VersionHistory familyId={family.id} versions={detail.versions} latest={family.version} viewing={current.version} />
+        </Section>
+      </Columns>
       <View style={styles.plots} testID="family-plots">
         <BlockHeading title="Plots" hint={plotsHint[current.definition.kind]} />
         <FamilyPlots key={`${family.id}-${current.version}`} definition={current.definition} />
@@ -65,9 +60,6 @@ export function FamilyDetail({ detail, back }: { detail: FamilyDetailResponse; b
 }
 
 const styles = StyleSheet.create({
-  columns: { flexDirection: 'row', gap: spacing.lg, alignItems: 'flex-start' },
-  stack: { gap: spacing.lg },
-  column: { flex: 1, gap: spacing.lg },
   plots: { gap: spacing.md },
   link: { ...typeScale.label, color: colors.primary, textDecorationLine: 'underline' },
 });

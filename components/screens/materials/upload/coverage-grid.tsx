@@ -1,7 +1,8 @@
-import { ScrollView, StyleSheet, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import type { UploadCoverage } from '@/shared/api/family-upload';
 import { formatNumber, formatScientific } from '@/components/format/number';
 import { colors, radii, spacing } from '@/components/theme';
+import { DataTable, type DataColumn } from '@/components/ui/data-table';
 import { Glyph } from '@/components/ui/glyph';
 import { AppText } from '@/components/ui/text';
 
@@ -12,6 +13,15 @@ const cellWidth = 52;
 function holesText(coverage: UploadCoverage): string {
   const listed = coverage.firstHoles.map((h) => `${formatScientific(h.perCm3, 3)} cm⁻³ at ${formatNumber(h.temperature, 4)} K`).join('; ');
   return `First missing: ${listed}${coverage.holes > coverage.firstHoles.length ? `; and ${coverage.holes - coverage.firstHoles.length} more` : ''}.`;
+}
+
+/** A tick where measured, a cross where missing; the words are for screen readers. */
+function Mark({ ok, label }: { ok: boolean; label: string }) {
+  return (
+    <View style={[styles.cell, ok ? styles.present : styles.missing]} aria-label={`${label}: ${ok ? 'measured' : 'missing'}`}>
+      <Glyph name={ok ? 'check' : 'cross'} color={ok ? colors.ok : colors.danger} />
+    </View>
+  );
 }
 
 /**
@@ -38,43 +48,20 @@ export function CoverageGrid({ coverage }: { coverage: UploadCoverage }) {
       </View>
     );
   }
+  const columns: DataColumn<number>[] = [
+    { key: 'n', head: 'n (cm⁻³) \\ T (K)', width: rowHeaderWidth, mono: true, cell: (i) => formatScientific(dopings[i], 3) },
+    ...temperatures.map((t, j): DataColumn<number> => ({
+      key: String(t),
+      head: formatNumber(t, 4),
+      width: cellWidth,
+      align: 'center',
+      cell: (i) => <Mark ok={present[i]?.[j] === true} label={`${formatScientific(dopings[i], 3)} cm⁻³ at ${t} K`} />,
+    })),
+  ];
   return (
     <View style={styles.wrap} testID="coverage-grid">
       {summary}
-      <ScrollView horizontal contentContainerStyle={styles.scroll}>
-        <View role="table" aria-label="Grid coverage">
-          <View style={styles.row} role="row">
-            <AppText variant="monoStrong" tone="faint" style={styles.corner} role="columnheader">
-              {'n (cm⁻³) \\ T (K)'}
-            </AppText>
-            {temperatures.map((t) => (
-              <AppText key={t} variant="monoStrong" tone="muted" style={styles.colHeader} role="columnheader">
-                {formatNumber(t, 4)}
-              </AppText>
-            ))}
-          </View>
-          {dopings.map((n, i) => (
-            <View key={n} style={styles.row} role="row">
-              <AppText variant="mono" style={styles.rowHeader} role="rowheader">
-                {formatScientific(n, 3)}
-              </AppText>
-              {temperatures.map((t, j) => {
-                const ok = present[i]?.[j] === true;
-                return (
-                  <View
-                    key={t}
-                    style={[styles.cell, ok ? styles.present : styles.missing]}
-                    role="cell"
-                    aria-label={`${formatScientific(n, 3)} cm⁻³ at ${t} K: ${ok ? 'measured' : 'missing'}`}
-                  >
-                    <Glyph name={ok ? 'check' : 'cross'} color={ok ? colors.ok : colors.danger} />
-                  </View>
-                );
-              })}
-            </View>
-          ))}
-        </View>
-      </ScrollView>
+      <DataTable label="Grid coverage" columns={columns} rows={dopings.map((_, i) => i)} rowKey={(i) => String(dopings[i])} rowHeaders />
       <View style={styles.key}>
         <Glyph name="check" color={colors.ok} />
         <AppText variant="caption" tone="muted">
@@ -91,12 +78,7 @@ export function CoverageGrid({ coverage }: { coverage: UploadCoverage }) {
 
 const styles = StyleSheet.create({
   wrap: { gap: spacing.sm },
-  scroll: { paddingBottom: spacing.xs },
-  row: { flexDirection: 'row', alignItems: 'center', gap: spacing.xxs, marginBottom: spacing.xxs },
-  corner: { width: rowHeaderWidth },
-  colHeader: { width: cellWidth, textAlign: 'center' },
-  rowHeader: { width: rowHeaderWidth },
-  cell: { width: cellWidth, height: 28, borderRadius: radii.sm, alignItems: 'center', justifyContent: 'center' },
+  cell: { height: 28, borderRadius: radii.sm, alignItems: 'center', justifyContent: 'center' },
   present: { backgroundColor: colors.okSoft },
   missing: { backgroundColor: colors.dangerSoft, borderWidth: 1, borderColor: colors.danger, borderStyle: 'dashed' },
   key: { flexDirection: 'row', alignItems: 'center', gap: spacing.xs },

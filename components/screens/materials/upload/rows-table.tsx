@@ -1,21 +1,22 @@
-import { ScrollView, StyleSheet, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import type { UploadRow } from '@/shared/api/family-upload';
 import { formatNumber, formatScientific } from '@/components/format/number';
-import { colors, spacing } from '@/components/theme';
+import { spacing } from '@/components/theme';
+import { DataTable, type DataColumn } from '@/components/ui/data-table';
 import { AppText } from '@/components/ui/text';
 
 export const rowsShown = 50;
 
-type Column = { title: string; width: number; value: (r: UploadRow) => string };
+const num = (head: string, unit: string, width: number, value: (r: UploadRow) => string): DataColumn<UploadRow> => ({ key: head, head, unit, width, grow: 1, align: 'right', mono: true, cell: value });
 
 /** The parsed values back in trade units, so a unit slip is visible at a glance. */
-const columns: Column[] = [
-  { title: 'Line', width: 48, value: (r) => String(r.line) },
-  { title: 'n (cm⁻³)', width: 116, value: (r) => formatScientific(r.perCm3, 3) },
-  { title: 'T (K)', width: 64, value: (r) => formatNumber(r.temperature, 4) },
-  { title: 'S (µV/K)', width: 84, value: (r) => formatNumber(r.seebeck * 1e6, 4) },
-  { title: 'σ (S/cm)', width: 92, value: (r) => formatNumber(r.sigma / 100, 4) },
-  { title: 'κ (W/(m·K))', width: 100, value: (r) => formatNumber(r.kappa, 3) },
+const columns: DataColumn<UploadRow>[] = [
+  { key: 'line', head: 'Line', unit: '', width: 48, align: 'right', mono: true, cell: (r) => String(r.line) },
+  num('n', 'cm⁻³', 100, (r) => formatScientific(r.perCm3, 3)),
+  num('T', 'K', 64, (r) => formatNumber(r.temperature, 4)),
+  num('S', 'µV/K', 76, (r) => formatNumber(r.seebeck * 1e6, 4)),
+  num('σ', 'S/cm', 84, (r) => formatNumber(r.sigma / 100, 4)),
+  num('κ', 'W/(m·K)', 84, (r) => formatNumber(r.kappa, 3)),
 ];
 
 /** The first rows as read and converted, and how many there are in all. */
@@ -26,33 +27,11 @@ export function RowsTable({ rows, rowCount }: { rows: UploadRow[]; rowCount: num
       <AppText tone="muted">
         {rowCount > shown.length ? `First ${shown.length} of ${rowCount} rows.` : `All ${rowCount} ${rowCount === 1 ? 'row' : 'rows'}.`}
       </AppText>
-      <ScrollView horizontal>
-        <View role="table" aria-label="Parsed rows">
-          <View style={[styles.row, styles.head]} role="row">
-            {columns.map((c) => (
-              <AppText key={c.title} variant="monoStrong" tone="muted" style={[styles.cell, { width: c.width }]} role="columnheader">
-                {c.title}
-              </AppText>
-            ))}
-          </View>
-          {shown.map((r) => (
-            <View key={r.line} style={styles.row} role="row">
-              {columns.map((c) => (
-                <AppText key={c.title} variant="mono" style={[styles.cell, { width: c.width }]} role="cell">
-                  {c.value(r)}
-                </AppText>
-              ))}
-            </View>
-          ))}
-        </View>
-      </ScrollView>
+      <DataTable label="Parsed rows" columns={columns} rows={shown} rowKey={(r) => String(r.line)} />
     </View>
   );
 }
 
 const styles = StyleSheet.create({
   wrap: { gap: spacing.sm },
-  row: { flexDirection: 'row', borderBottomWidth: 1, borderBottomColor: colors.border, paddingVertical: spacing.xs },
-  head: { borderBottomColor: colors.textFaint },
-  cell: { paddingRight: spacing.sm, textAlign: 'right' },
 });

@@ -1,0 +1,73 @@
+import { useState, type ReactNode } from 'react';
+import { type NativeScrollEvent, type NativeSyntheticEvent, Platform, ScrollView, StyleSheet, View, type ViewStyle } from 'react-native';
+import { colors, spacing } from '@/components/theme';
+import { AppText } from './text';
+
+/**
+ * Sticks a cell to the left edge of the nearest sideways scroller while the
+ * rest of its row scrolls under it. Web only: react-native-web passes
+ * `position: sticky` through to CSS; a device scrolls the cell along.
+ */
+export const stickyLeft: ViewStyle | null = Platform.OS === 'web' ? ({ position: 'sticky', left: 0, zIndex: 1 } as unknown as ViewStyle) : null;
+
+/** Steps of the right-edge fade, lightest first (no gradient primitive in React Native). */
+const fadeSteps = [0.25, 0.5, 0.75, 0.92];
+
+type Size = { view: number; content: number; offset: number };
+
+/**
+ * Content wider than its card scrolls inside the card, never the page. While
+ * more lies to the right, the right edge fades and a line under it says
+ * "Scroll sideways for more →", so a cut-off column never looks like the end
+ * of the table.
+ */
+export function SideScroll({ children, testID, surface = colors.surface }: { children: ReactNode; testID?: string; surface?: string }) {
+  const [size, setSize] = useState<Size>({ view: 0, content: 0, offset: 0 });
+  const overflows = size.content > size.view + 1;
+  const moreRight = overflows && size.offset + size.view < size.content - 1;
+  const onScroll = (e: NativeSyntheticEvent<NativeScrollEvent>) => {
+    const offset = e.nativeEvent.contentOffset.x;
+    setSize((s) => (s.offset === offset ? s : { ...s, offset }));
+  };
+  return (
+    <View style={styles.wrap}>
+      <View>
+        <ScrollView
+          horizontal
+          testID={testID}
+          contentContainerStyle={styles.content}
+          scrollEventThrottle={32}
+          onScroll={onScroll}
+          onLayout={(e) => {
+            const view = e.nativeEvent.layout.width;
+            setSize((s) => (s.view === view ? s : { ...s, view }));
+          }}
+          onContentSizeChange={(content) => setSize((s) => (s.content === content ? s : { ...s, content }))}
+        >
+          {children}
+        </ScrollView>
+        {moreRight ? (
+          <View style={styles.fade} pointerEvents="none" testID="side-scroll-fade">
+            {fadeSteps.map((opacity) => (
+              <View key={opacity} style={[styles.fadeStep, { backgroundColor: surface, opacity }]} />
+            ))}
+          </View>
+        ) : null}
+      </View>
+      {overflows ? (
+        <AppText variant="caption" tone="muted" style={styles.cue} testID="side-scroll-cue">
+          {moreRight ? 'Scroll sideways for more →' : '← Scroll back for the first columns'}
+        </AppText>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: spacing.xxs },
+  // Grow to the card's width so columns that may grow fill it; wider content scrolls.
+  content: { flexGrow: 1 },
+  fade: { position: 'absolute', top: 0, bottom: 0, right: 0, width: 32, flexDirection: 'row' },
+  fadeStep: { flex: 1 },
+  cue: { alignSelf: 'flex-end' },
+});
