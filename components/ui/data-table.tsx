@@ -86,7 +86,7 @@ function ScrollingTable<R>({ label, columns, rows, rowKey, testID, rowTestID, ro
     return box;
   };
   return (
-    <SideScroll surface={surface}>
+    <SideScroll surface={surface} testID={testID ? `${testID}-scroll` : undefined}>
       <View role="table" aria-label={label} testID={testID} style={styles.table}>
         <View role="row" style={[styles.row, styles.headRow]}>
           {columns.map((c, i) => (

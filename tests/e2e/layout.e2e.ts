@@ -1,0 +1,156 @@
+import type { Page } from 'playwright-core';
+import { familiesResponseSchema } from '../../shared/api/families';
+import { modulesResponseSchema } from '../../shared/api/modules';
+import {
+  baseUrl,
+  convergedRun,
+  demoPFamilyName,
+  getJsonAs,
+  openBrowser,
+  pageProblems,
+  postJsonAs,
+  saveScreenshot,
+  signInAs,
+  visible,
+  type BrowserSession,
+} from './browser';
+import { overlapProblems, sidewaysProblems, tableReach } from './layout-checks';
+import { sparseGridCsv } from '../server/fixtures/table-files';
+
+jest.setTimeout(600_000);
+
+/** The widths every screen is checked at: small and common phones, a tablet (the narrowest side-rail layout), a desktop. */
+const widths = [360, 390, 768, 1280] as const;
+const height = 844;
+
+/** A screen to visit: its address, and optionally what to do once it has loaded (choose a file, open a tab). */
+type Screen = { name: string; path: string; prepare?: (page: Page) => Promise<void>; tables?: boolean };
+
+/** Clicks the picker button and answers the browser's file chooser. */
+async function chooseFile(page: Page, name: string, contents: string): Promise<void> {
+  const chooser = page.waitForEvent('filechooser');
+  await visible(page.getByRole('button', { name: /^Choose (CSV file|another file)$/ })).click();
+  await (await chooser).setFiles({ name, mimeType: 'text/csv', buffer: Buffer.from(contents, 'utf8') });
+}
+
+/** Loaded: the title is shown, nothing says "Loading…", and the network has been quiet for a moment. */
+async function settled(page: Page): Promise<void> {
+  await page.locator('[role="heading"][aria-level="1"]').filter({ visible: true }).first().waitFor({ timeout: 60_000 });
+  await page.waitForLoadState('networkidle', { timeout: 30_000 }).catch(() => undefined);
+  await page.getByText(/^Loading/).filter({ visible: true }).first().waitFor({ state: 'hidden', timeout: 60_000 });
+  await page.waitForTimeout(300);
+}
+
+async function putJsonAs(session: BrowserSession, path: string, data: unknown): Promise<void> {
+  const response = await session.context.request.put(`${baseUrl}${path}`, { data, headers: { Origin: baseUrl } });
+  if (!response.ok()) throw new Error(`PUT ${path} answered ${response.status()}: ${await response.text()}`);
+}
+
+/** Room-temperature S and σ every 0.25 mm along a 1.5 mm leg: plausible numbers, not a fit to any zone. */
+function asGrownCsv(): string {
+  const lines = ['position_mm,seebeck_uV_per_K,sigma_S_per_cm'];
+  for (let mm = 0.1; mm < 1.5; mm += 0.25) lines.push(`${mm.toFixed(2)},${(200 + 60 * mm).toFixed(1)},${(900 - 300 * mm).toFixed(1)}`);
+  return `${lines.join('\n')}\n`;
+}
+
+describe('every screen fits a phone, a tablet and a desktop: no sideways page, no overlapping cards, every table column reachable', () => {
+  let admin: BrowserSession;
+  let page: Page;
+  const screens: Screen[] = [];
+  const stamp = Date.now().toString(36).toUpperCase();
+  /** Tables that scrolled inside their card at a phone width: at least the wide numeric ones must. */
+  const scrolledOnPhone = new Set<string>();
+
+  beforeAll(async () => {
+    admin = await openBrowser();
+    await signInAs(admin, 'ada@northlight.example');
+    const { families } = familiesResponseSchema.parse(await getJsonAs(admin, '/api/families'));
+    const family = families.find((f) => demoPFamilyName.test(f.name))!;
+    const { modules } = modulesResponseSchema.parse(await getJsonAs(admin, '/api/modules'));
+    // Two short runs of the demo family to open, compare and release.
+    const [runA, runB] = await Promise.all([
+      convergedRun(admin, { name: `Layout leg A ${stamp}`, controlPoints: 3 }, 300),
+      convergedRun(admin, { name: `Layout leg B ${stamp}`, controlPoints: 4 }, 300),
+    ]);
+    const run = (await getJsonAs(admin, `/api/runs/${runA}`)) as { design: { id: string } };
+    const { order } = (await postJsonAs(admin, `/api/runs/${runA}/release`, { batch: `Layout ${stamp}`, zones: 3 })) as { order: { id: string } };
+    for (const state of ['accepted', 'growing', 'grown']) await putJsonAs(admin, `/api/growth-orders/${order.id}/state`, { state });
+    screens.push(
+      { name: 'materials', path: '/' },
+      { name: 'family', path: `/materials/${family.id}` },
+      { name: 'family-edit', path: `/materials/${family.id}/edit` },
+      { name: 'family-new', path: '/materials/new' },
+      { name: 'family-upload', path: '/materials/upload', tables: true, prepare: (p) => chooseFile(p, 'sparse.csv', sparseGridCsv(12)).then(() => p.getByTestId('upload-preview').filter({ visible: true }).first().waitFor()) },
+      { name: 'designs', path: '/designs' },
+      { name: 'design-new', path: '/designs/new' },
+      { name: 'design', path: `/designs/${run.design.id}` },
+      { name: 'runs', path: '/runs' },
+      { name: 'run', path: `/runs/${runA}`, tables: true },
+      { name: 'curves', path: `/runs/${runA}/curves`, tables: true },
+      { name: 'compare', path: `/runs/compare?ids=${runA},${runB}&modules=${modules[0]!.id}`, tables: true },
+      { name: 'modules', path: '/modules' },
+      { name: 'module-new', path: '/modules/new' },
+      { name: 'module', path: `/modules/${modules[0]!.id}`, tables: true },
+      { name: 'growth-orders', path: '/growth' },
+      {
+        name: 'growth-order',
+        path: `/growth/${order.id}`,
+        tables: true,
+        prepare: async (p) => {
+          await p.getByTestId('growth-sheet').filter({ visible: true }).first().waitFor({ timeout: 120_000 });
+          await chooseFile(p, 'as-grown.csv', asGrownCsv());
+          await p.getByTestId('measurement-rows').filter({ visible: true }).first().waitFor();
+        },
+      },
+      { name: 'team', path: '/team' },
+      { name: 'audit', path: '/team/audit' },
+      { name: 'account', path: '/account' },
+      { name: 'outbox', path: '/outbox' },
+      { name: 'system', path: '/system' },
+    );
+    page = await admin.newPage('phone');
+  });
+
+  afterAll(async () => {
+    await admin?.close();
+  });
+
+  it('holds at 360, 390, 768 and 1280 px on every screen', async () => {
+    const problems: string[] = [];
+    for (const screen of screens) {
+      await page.setViewportSize({ width: widths[0], height });
+      await page.goto(`${baseUrl}${screen.path}`);
+      await settled(page);
+      await screen.prepare?.(page);
+      for (const width of widths) {
+        await page.setViewportSize({ width, height });
+        await page.waitForTimeout(250);
+        await page.evaluate(() => window.scrollTo(0, 0));
+        const at = `${screen.name} at ${width} px`;
+        for (const p of await sidewaysProblems(page)) problems.push(`${at}: ${p}`);
+        for (const p of await overlapProblems(page)) problems.push(`${at}: ${p}`);
+        for (const t of await tableReach(page)) {
+          for (const p of t.problems) problems.push(`${at}: table "${t.label}": ${p}`);
+          if (t.overflows && width < 768) scrolledOnPhone.add(t.label);
+        }
+        if (screen.tables && (width === 390 || width === 1280)) await tableShots(page, screen.name, width);
+      }
+    }
+    expect(problems).toEqual([]);
+    // The wide numeric tables scroll inside their card on a phone rather than vanish off its edge.
+    expect([...scrolledOnPhone]).toEqual(expect.arrayContaining(['Profile along the leg', 'Runs side by side', 'Couples at the same total leg area', 'Parsed rows']));
+    expect(pageProblems(admin)).toEqual([]);
+  });
+});
+
+/** A screenshot of each visible table, scrolled into view, to look at. */
+async function tableShots(page: Page, screen: string, width: number): Promise<void> {
+  const tables = page.locator('[role="table"]').filter({ visible: true });
+  const count = await tables.count();
+  for (let i = 0; i < count; i++) {
+    const table = tables.nth(i);
+    const label = ((await table.getAttribute('aria-label')) ?? `table-${i}`).toLowerCase().replace(/[^a-z0-9]+/g, '-');
+    await table.scrollIntoViewIfNeeded();
+    await saveScreenshot(page, `layout-${screen}-${label}-${width}`);
+  }
+}
