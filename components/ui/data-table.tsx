@@ -79,14 +79,15 @@ export function DataTable<R>(props: DataTableProps<R>) {
 }
 
 function ScrollingTable<R>({ label, columns, rows, rowKey, testID, rowTestID, rowHeaders = false, surface = colors.surface, wide }: DataTableProps<R> & { wide: boolean }) {
+  const columnWidth = (c: DataColumn<R>) => (wide ? c.width : (c.phoneWidth ?? c.width));
   const cellBox = (c: DataColumn<R>, i: number): ViewStyle[] => {
-    const width = wide ? c.width : (c.phoneWidth ?? c.width);
+    const width = columnWidth(c);
     const box: ViewStyle[] = [styles.cell, { flexBasis: width, minWidth: width, flexGrow: c.grow ?? 0 }];
     if (i === 0 && stickyLeft) box.push(stickyLeft, { backgroundColor: surface });
     return box;
   };
   return (
-    <SideScroll surface={surface} testID={testID ? `${testID}-scroll` : undefined}>
+    <SideScroll surface={surface} contentWidth={columns.reduce((sum, c) => sum + columnWidth(c), 0)} testID={testID ? `${testID}-scroll` : undefined}>
       <View role="table" aria-label={label} testID={testID} style={styles.table}>
         <View role="row" style={[styles.row, styles.headRow]}>
           {columns.map((c, i) => (
@@ -147,7 +148,7 @@ function DataCards<R>({ label, columns, rows, rowKey, testID, rowTestID }: DataT
 }
 
 const styles = StyleSheet.create({
-  table: { flexGrow: 1 },
+  table: { width: '100%' },
   row: { flexDirection: 'row', borderTopWidth: 1, borderTopColor: colors.border },
   headRow: { borderTopWidth: 0 },
   cell: { paddingVertical: spacing.xs, paddingRight: spacing.sm, gap: spacing.xxs, justifyContent: 'center' },

@@ -15,13 +15,26 @@ const fadeSteps = [0.25, 0.5, 0.75, 0.92];
 
 type Size = { view: number; content: number; offset: number };
 
+type SideScrollProps = {
+  children: ReactNode;
+  /**
+   * The least width the content needs (a table: the sum of its columns).
+   * The content gets exactly the card's width or this, whichever is more:
+   * left to itself it would be as wide as its longest unwrapped line.
+   */
+  contentWidth: number;
+  testID?: string;
+  /** The card colour behind, for the fade. */
+  surface?: string;
+};
+
 /**
  * Content wider than its card scrolls inside the card, never the page. While
  * more lies to the right, the right edge fades and a line under it says
  * "Scroll sideways for more →", so a cut-off column never looks like the end
  * of the table.
  */
-export function SideScroll({ children, testID, surface = colors.surface }: { children: ReactNode; testID?: string; surface?: string }) {
+export function SideScroll({ children, contentWidth, testID, surface = colors.surface }: SideScrollProps) {
   const [size, setSize] = useState<Size>({ view: 0, content: 0, offset: 0 });
   const overflows = size.content > size.view + 1;
   const moreRight = overflows && size.offset + size.view < size.content - 1;
@@ -35,7 +48,7 @@ export function SideScroll({ children, testID, surface = colors.surface }: { chi
         <ScrollView
           horizontal
           testID={testID}
-          contentContainerStyle={styles.content}
+          contentContainerStyle={{ width: Math.max(size.view, contentWidth) }}
           scrollEventThrottle={32}
           onScroll={onScroll}
           onLayout={(e) => {
@@ -65,8 +78,6 @@ export function SideScroll({ children, testID, surface = colors.surface }: { chi
 
 const styles = StyleSheet.create({
   wrap: { gap: spacing.xxs },
-  // Grow to the card's width so columns that may grow fill it; wider content scrolls.
-  content: { flexGrow: 1 },
   fade: { position: 'absolute', top: 0, bottom: 0, right: 0, width: 32, flexDirection: 'row' },
   fadeStep: { flex: 1 },
   cue: { alignSelf: 'flex-end' },

@@ -76,6 +76,7 @@ const styles = StyleSheet.create({
     alignItems: 'center',
     gap: spacing.md,
   },
-  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
+  // Never wider than the toolbar: on a narrow phone the two buttons wrap rather than push past the edge.
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm, maxWidth: '100%' },
   filters: { flexDirection: 'row', gap: spacing.sm },
 });
