@@ -24,7 +24,7 @@ const widths = [360, 390, 768, 1280] as const;
 const height = 844;
 
 /** A screen to visit: its address, and optionally what to do once it has loaded (choose a file, open a tab). */
-type Screen = { name: string; path: string; prepare?: (page: Page) => Promise<void>; tables?: boolean };
+type Screen = { name: string; path: string; prepare?: (page: Page) => Promise<void>; tables?: boolean; shot?: string };
 
 /** Clicks the picker button and answers the browser's file chooser. */
 async function chooseFile(page: Page, name: string, contents: string): Promise<void> {
@@ -77,7 +77,7 @@ describe('every screen fits a phone, a tablet and a desktop: no sideways page, n
     for (const state of ['accepted', 'growing', 'grown']) await putJsonAs(admin, `/api/growth-orders/${order.id}/state`, { state });
     screens.push(
       { name: 'materials', path: '/' },
-      { name: 'family', path: `/materials/${family.id}` },
+      { name: 'family', path: `/materials/${family.id}`, shot: 'versions' },
       { name: 'family-edit', path: `/materials/${family.id}/edit` },
       { name: 'family-new', path: '/materials/new' },
       { name: 'family-upload', path: '/materials/upload', tables: true, prepare: (p) => chooseFile(p, 'sparse.csv', sparseGridCsv(12)).then(() => p.getByTestId('upload-preview').filter({ visible: true }).first().waitFor()) },
@@ -134,6 +134,10 @@ describe('every screen fits a phone, a tablet and a desktop: no sideways page, n
           if (t.overflows && width < 768) scrolledOnPhone.add(t.label);
         }
         if (screen.tables && (width === 390 || width === 1280)) await tableShots(page, screen.name, width);
+        if (screen.shot && (width === 390 || width === 1280)) {
+          await visible(page.getByTestId(screen.shot)).scrollIntoViewIfNeeded();
+          await saveScreenshot(page, `layout-${screen.name}-${width}`);
+        }
       }
     }
     expect(problems).toEqual([]);
@@ -151,6 +155,7 @@ async function tableShots(page: Page, screen: string, width: number): Promise<vo
     const table = tables.nth(i);
     const label = ((await table.getAttribute('aria-label')) ?? `table-${i}`).toLowerCase().replace(/[^a-z0-9]+/g, '-');
     await table.scrollIntoViewIfNeeded();
+    await page.waitForTimeout(150);
     await saveScreenshot(page, `layout-${screen}-${label}-${width}`);
   }
 }

@@ -14,14 +14,14 @@ const orDash = (v: number | undefined, f: (v: number) => string) => (v === undef
 
 /** Line and position, S and σ, and n and T when the file has them; units in the heads. */
 function pointColumns(points: MeasuredPoint[]): DataColumn<MeasuredPoint>[] {
-  const num = { width: 84, grow: 1, mono: true, align: 'right' } as const;
+  const num = { width: 92, mono: true, align: 'right' } as const;
   const columns: DataColumn<MeasuredPoint>[] = [
     { key: 'line', head: 'Line', unit: '', width: 48, mono: true, cell: (p) => String(p.line) },
     { key: 'x', head: 'x', unit: 'mm', ...num, cell: (p) => formatNumber(p.positionMm, 3) },
     { key: 'S', head: 'S', unit: 'µV/K', ...num, cell: (p) => orDash(p.seebeck, (v) => formatNumber(v * 1e6, 3)) },
     { key: 'sigma', head: 'σ', unit: 'S/cm', ...num, cell: (p) => orDash(p.sigma, (v) => formatNumber(v / 100, 3)) },
   ];
-  if (points.some((p) => p.perCm3 !== undefined)) columns.push({ key: 'n', head: 'n', unit: 'cm⁻³', ...num, width: 100, cell: (p) => orDash(p.perCm3, (v) => formatScientific(v, 3)) });
+  if (points.some((p) => p.perCm3 !== undefined)) columns.push({ key: 'n', head: 'n', unit: 'cm⁻³', ...num, width: 112, cell: (p) => orDash(p.perCm3, (v) => formatScientific(v, 3)) });
   if (points.some((p) => p.temperature !== undefined)) columns.push({ key: 'T', head: 'T', unit: 'K', ...num, cell: (p) => orDash(p.temperature, (v) => formatNumber(v, 4)) });
   return columns;
 }

@@ -7,12 +7,12 @@ import { AppText } from '@/components/ui/text';
 
 export const rowsShown = 50;
 
-const num = (head: string, unit: string, width: number, value: (r: UploadRow) => string): DataColumn<UploadRow> => ({ key: head, head, unit, width, grow: 1, align: 'right', mono: true, cell: value });
+const num = (head: string, unit: string, width: number, value: (r: UploadRow) => string): DataColumn<UploadRow> => ({ key: head, head, unit, width, align: 'right', mono: true, cell: value });
 
 /** The parsed values back in trade units, so a unit slip is visible at a glance. */
 const columns: DataColumn<UploadRow>[] = [
   { key: 'line', head: 'Line', unit: '', width: 48, align: 'right', mono: true, cell: (r) => String(r.line) },
-  num('n', 'cm⁻³', 100, (r) => formatScientific(r.perCm3, 3)),
+  num('n', 'cm⁻³', 112, (r) => formatScientific(r.perCm3, 3)),
   num('T', 'K', 64, (r) => formatNumber(r.temperature, 4)),
   num('S', 'µV/K', 76, (r) => formatNumber(r.seebeck * 1e6, 4)),
   num('σ', 'S/cm', 84, (r) => formatNumber(r.sigma / 100, 4)),
