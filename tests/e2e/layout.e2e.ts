@@ -102,6 +102,18 @@ describe('every screen fits a phone, a tablet and a desktop: no sideways page, n
           await p.getByTestId('measurement-rows').filter({ visible: true }).first().waitFor();
         },
       },
+      {
+        name: 'growth-report',
+        path: `/growth/${order.id}`,
+        tables: true,
+        shot: 'measurement-report',
+        prepare: async (p) => {
+          await p.getByTestId('growth-sheet').filter({ visible: true }).first().waitFor({ timeout: 120_000 });
+          await chooseFile(p, 'as-grown.csv', asGrownCsv());
+          await visible(p.getByRole('button', { name: 'Upload measurements' })).click();
+          await p.getByTestId('measurement-report').filter({ visible: true }).first().waitFor({ timeout: 60_000 });
+        },
+      },
       { name: 'team', path: '/team' },
       { name: 'audit', path: '/team/audit' },
       { name: 'account', path: '/account' },
