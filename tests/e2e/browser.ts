@@ -325,3 +325,10 @@ export async function convergedRun(session: BrowserSession, design: { name: stri
   }, seconds, 'the run to converge');
   return run.id;
 }
+
+/** Clicks the page's "Choose CSV file" (or "Choose another file") button and answers the browser's file chooser. */
+export async function chooseCsvFile(page: Page, name: string, contents: string): Promise<void> {
+  const chooser = page.waitForEvent('filechooser');
+  await visible(page.getByRole('button', { name: /^Choose (CSV file|another file)$/ })).click();
+  await (await chooser).setFiles({ name, mimeType: 'text/csv', buffer: Buffer.from(contents, 'utf8') });
+}

@@ -3,6 +3,7 @@ import { familiesResponseSchema } from '../../shared/api/families';
 import { modulesResponseSchema } from '../../shared/api/modules';
 import {
   baseUrl,
+  chooseCsvFile,
   convergedRun,
   demoPFamilyName,
   getJsonAs,
@@ -25,13 +26,6 @@ const height = 844;
 
 /** A screen to visit: its address, and optionally what to do once it has loaded (choose a file, open a tab). */
 type Screen = { name: string; path: string; prepare?: (page: Page) => Promise<void>; tables?: boolean; shot?: string };
-
-/** Clicks the picker button and answers the browser's file chooser. */
-async function chooseFile(page: Page, name: string, contents: string): Promise<void> {
-  const chooser = page.waitForEvent('filechooser');
-  await visible(page.getByRole('button', { name: /^Choose (CSV file|another file)$/ })).click();
-  await (await chooser).setFiles({ name, mimeType: 'text/csv', buffer: Buffer.from(contents, 'utf8') });
-}
 
 /** Loaded: the title is shown, nothing says "Loading…", and the network has been quiet for a moment. */
 async function settled(page: Page): Promise<void> {
@@ -80,7 +74,7 @@ describe('every screen fits a phone, a tablet and a desktop: no sideways page, n
       { name: 'family', path: `/materials/${family.id}`, shot: 'versions' },
       { name: 'family-edit', path: `/materials/${family.id}/edit` },
       { name: 'family-new', path: '/materials/new' },
-      { name: 'family-upload', path: '/materials/upload', tables: true, prepare: (p) => chooseFile(p, 'sparse.csv', sparseGridCsv(12)).then(() => p.getByTestId('upload-preview').filter({ visible: true }).first().waitFor()) },
+      { name: 'family-upload', path: '/materials/upload', tables: true, prepare: (p) => chooseCsvFile(p, 'sparse.csv', sparseGridCsv(12)).then(() => p.getByTestId('upload-preview').filter({ visible: true }).first().waitFor()) },
       { name: 'designs', path: '/designs' },
       { name: 'design-new', path: '/designs/new' },
       { name: 'design', path: `/designs/${run.design.id}` },
@@ -98,7 +92,7 @@ describe('every screen fits a phone, a tablet and a desktop: no sideways page, n
         tables: true,
         prepare: async (p) => {
           await p.getByTestId('growth-sheet').filter({ visible: true }).first().waitFor({ timeout: 120_000 });
-          await chooseFile(p, 'as-grown.csv', asGrownCsv());
+          await chooseCsvFile(p, 'as-grown.csv', asGrownCsv());
           await p.getByTestId('measurement-rows').filter({ visible: true }).first().waitFor();
         },
       },
@@ -109,7 +103,7 @@ describe('every screen fits a phone, a tablet and a desktop: no sideways page, n
         shot: 'measurement-report',
         prepare: async (p) => {
           await p.getByTestId('growth-sheet').filter({ visible: true }).first().waitFor({ timeout: 120_000 });
-          await chooseFile(p, 'as-grown.csv', asGrownCsv());
+          await chooseCsvFile(p, 'as-grown.csv', asGrownCsv());
           await visible(p.getByRole('button', { name: 'Upload measurements' })).click();
           await p.getByTestId('measurement-report').filter({ visible: true }).first().waitFor({ timeout: 60_000 });
         },
