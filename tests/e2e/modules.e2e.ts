@@ -39,12 +39,21 @@ function shownNumber(text: string): number {
 /** Half a unit in the last of `digits` significant digits of `value`: how far a correct display can be from it. */
 const halfUlp = (value: number, digits: number) => 0.5 * Math.pow(10, Math.floor(Math.log10(Math.abs(value))) - digits + 1);
 
-/** One marked-current row of a table, each cell under its column's head ("Leg", "Marked current", "I", "Qc", …). */
+/**
+ * One marked-current row of a table, each value under its column's head ("Leg", "Marked current", "I", "Qc", …).
+ * A phone shows a card per row instead: its title is "device · mark" (or the mark alone) and each line
+ * reads "head (unit)" then the value.
+ */
 async function markedRow(page: Page, table: string, row: string): Promise<Record<string, string>> {
   const line = visible(page.getByTestId(row));
   await line.waitFor({ timeout: 60_000 });
   const heads = (await visible(page.getByTestId(table)).locator('[role="columnheader"]').allInnerTexts()).map((h) => h.split('\n')[0].trim());
   const cells = await line.locator('[role="cell"]').allInnerTexts();
+  if (heads.length === 0) {
+    const title = (await line.locator('[role="rowheader"]').innerText()).trim().split(' · ');
+    const named: Record<string, string> = title.length === 2 ? { Leg: title[0], 'Marked current': title[1] } : { 'Marked current': title[0] };
+    return { ...named, ...Object.fromEntries(cells.map((c) => c.trim().split('\n')).map(([head, ...value]) => [head.replace(/ \(.*\)$/, '').trim(), value.join(' ').trim()])) };
+  }
   expect(cells).toHaveLength(heads.length);
   return Object.fromEntries(heads.map((h, i) => [h, cells[i].trim()]));
 }
@@ -127,7 +136,10 @@ describe('a physicist opens a run’s curves, builds a module and exports its CS
   it('shows the curves page at phone width', async () => {
     const page = await physicist.newPage('phone');
     await page.goto(`${baseUrl}/runs/${runId}/curves`);
-    await markedRow(page, 'marked-currents', 'marked-currents-optimum-qc');
+    // A card per marked current on a phone: every quantity is there, none cut off at the edge.
+    const qc = await markedRow(page, 'marked-currents', 'marked-currents-optimum-qc');
+    expect([qc.Leg, qc['Marked current']]).toEqual(['Graded optimum', 'Maximum Qc']);
+    for (const head of ['I', 'Qc', 'COP', 'V', 'P']) expect(shownNumber(qc[head])).toBeGreaterThan(0);
     await saveScreenshot(page, 'module-flow-curves-phone');
     await visible(page.getByTestId('marked-currents')).scrollIntoViewIfNeeded();
     await saveScreenshot(page, 'module-flow-curves-table-phone');
@@ -282,7 +294,9 @@ describe('a physicist opens a run’s curves, builds a module and exports its CS
   it('shows the saved module at phone width', async () => {
     const page = await physicist.newPage('phone');
     await page.goto(`${baseUrl}/modules/${moduleId}`);
-    await markedRow(page, 'module-marked', 'module-marked-module-qc');
+    const qc = await markedRow(page, 'module-marked', 'module-marked-module-qc');
+    expect(qc['Marked current']).toBe('Maximum Qc');
+    for (const head of ['Qc', 'COP', 'V', 'P']) expect(shownNumber(qc[head])).toBeGreaterThan(0);
     await visible(page.getByTestId('module-over-limit')).waitFor();
     await saveScreenshot(page, 'module-flow-saved-phone');
     await visible(page.getByTestId('module-marked')).scrollIntoViewIfNeeded();
