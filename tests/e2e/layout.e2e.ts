@@ -67,6 +67,8 @@ describe('every screen fits a phone, a tablet and a desktop: no sideways page, n
       convergedRun(admin, { name: `Layout leg B ${stamp}`, controlPoints: 4 }, 300),
     ]);
     const run = (await getJsonAs(admin, `/api/runs/${runA}`)) as { design: { id: string } };
+    // A two-point sweep of the hot side: short runs, finished or not by the time its page is checked.
+    const { sweep } = (await postJsonAs(admin, `/api/designs/${run.design.id}/sweeps`, { parameter: 'hotSide', values: [295, 305] })) as { sweep: { id: string } };
     const { order } = (await postJsonAs(admin, `/api/runs/${runA}/release`, { batch: `Layout ${stamp}`, zones: 3 })) as { order: { id: string } };
     for (const state of ['accepted', 'growing', 'grown']) await putJsonAs(admin, `/api/growth-orders/${order.id}/state`, { state });
     screens.push(
@@ -79,6 +81,7 @@ describe('every screen fits a phone, a tablet and a desktop: no sideways page, n
       { name: 'design-new', path: '/designs/new' },
       { name: 'design', path: `/designs/${run.design.id}` },
       { name: 'runs', path: '/runs' },
+      { name: 'sweep', path: `/sweeps/${sweep.id}` },
       { name: 'run', path: `/runs/${runA}`, tables: true },
       { name: 'curves', path: `/runs/${runA}/curves`, tables: true },
       { name: 'compare', path: `/runs/compare?ids=${runA},${runB}&modules=${modules[0]!.id}`, tables: true },
