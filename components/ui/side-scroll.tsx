@@ -10,6 +10,17 @@ import { AppText } from './text';
  */
 export const stickyLeft: ViewStyle | null = Platform.OS === 'web' ? ({ position: 'sticky', left: 0, zIndex: 1 } as unknown as ViewStyle) : null;
 
+/**
+ * Marks for print stylesheets (`data-side-scroll`): on paper nothing
+ * scrolls, so a printed page lets the scroller's content flow to the page
+ * width and drops the fade and the cue. Spread on a view; devices ignore it.
+ */
+export const sideScrollMarks = {
+  scroller: { dataSet: { sideScroll: 'scroller' } },
+  fade: { dataSet: { sideScroll: 'fade' } },
+  cue: { dataSet: { sideScroll: 'cue' } },
+} as const;
+
 /** Steps of the right-edge fade, lightest first (no gradient primitive in React Native). */
 const fadeSteps = [0.25, 0.5, 0.75, 0.92];
 
@@ -48,6 +59,7 @@ export function SideScroll({ children, contentWidth, testID, surface = colors.su
         <ScrollView
           horizontal
           testID={testID}
+          {...sideScrollMarks.scroller}
           contentContainerStyle={{ width: Math.max(size.view, contentWidth) }}
           scrollEventThrottle={32}
           onScroll={onScroll}
@@ -60,7 +72,7 @@ export function SideScroll({ children, contentWidth, testID, surface = colors.su
           {children}
         </ScrollView>
         {moreRight ? (
-          <View style={styles.fade} pointerEvents="none" testID="side-scroll-fade">
+          <View style={styles.fade} pointerEvents="none" testID="side-scroll-fade" {...sideScrollMarks.fade}>
             {fadeSteps.map((opacity) => (
               <View key={opacity} style={[styles.fadeStep, { backgroundColor: surface, opacity }]} />
             ))}
@@ -68,7 +80,7 @@ export function SideScroll({ children, contentWidth, testID, surface = colors.su
         ) : null}
       </View>
       {overflows ? (
-        <AppText variant="caption" tone="muted" style={styles.cue} testID="side-scroll-cue">
+        <AppText variant="caption" tone="muted" style={styles.cue} testID="side-scroll-cue" {...sideScrollMarks.cue}>
           {moreRight ? 'Scroll sideways for more →' : '← Scroll back for the first columns'}
         </AppText>
       ) : null}

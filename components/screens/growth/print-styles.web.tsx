@@ -29,6 +29,11 @@ export const sheetPrintCss = `
 @media screen {
   [data-print-sheet] [data-print="only"] { display: none !important; }
 }
+@media print {
+  [data-print-sheet] [data-side-scroll="scroller"] { overflow: visible !important; }
+  [data-print-sheet] [data-side-scroll="scroller"] > * { width: 100% !important; }
+  [data-print-sheet] [data-side-scroll="fade"], [data-print-sheet] [data-side-scroll="cue"] { display: none !important; }
+}
 `;
 
 /** Web: adds the print stylesheet while a sheet is on the page, removes it after. */
