@@ -65,7 +65,8 @@ export type TableReach = { label: string; overflows: boolean; problems: string[]
 /**
  * Every visible table: each column head can be brought into view (scrolled
  * to inside its own scroller, which fits the window), and a table wider than
- * its card shows the "scroll sideways" cue and the edge fade. Scrollers are
+ * its card shows the "scroll sideways" cue and the edge fade and holds its
+ * first column at the left edge when scrolled. Scrollers are
  * put back where they were.
  */
 export function tableReach(page: Page): Promise<TableReach[]> {
@@ -98,6 +99,13 @@ export function tableReach(page: Page): Promise<TableReach[]> {
         if (r.width > 0 && (r.left < Math.max(bounds.left, 0) - 1 || r.right > Math.min(bounds.right, width) + 1)) {
           problems.push(`"${(head.textContent ?? '').trim()}" cannot be brought into view (${Math.round(r.left)}–${Math.round(r.right)} px)`);
         }
+      }
+      if (sideways && heads.length > 0) {
+        // Scrolled to the far end, the first column (what each row is) is still held at the left edge.
+        sideways.scrollLeft = sideways.scrollWidth;
+        const first = heads[0].getBoundingClientRect();
+        const edge = sideways.getBoundingClientRect().left;
+        if (Math.abs(first.left - edge) > 1) problems.push(`the first column is not held at the left edge when scrolled (${Math.round(first.left)} px, edge ${Math.round(edge)} px)`);
       }
       if (sideways) sideways.scrollLeft = before;
       return { label, overflows: sideways !== null, problems };

@@ -166,5 +166,18 @@ async function tableShots(page: Page, screen: string, width: number): Promise<vo
     await table.scrollIntoViewIfNeeded();
     await page.waitForTimeout(150);
     await saveScreenshot(page, `layout-${screen}-${label}-${width}`);
+    // Scrolled to its last column (a phone): the held first column and the cue, to look at.
+    const scrolled = await table.evaluate((el) => {
+      let s = el.parentElement;
+      while (s && !['auto', 'scroll'].includes(getComputedStyle(s).overflowX)) s = s.parentElement;
+      if (!s || s.scrollWidth <= s.clientWidth + 1) return false;
+      s.scrollLeft = s.scrollWidth;
+      return true;
+    });
+    if (scrolled) {
+      await page.waitForTimeout(150);
+      await saveScreenshot(page, `layout-${screen}-${label}-${width}-scrolled`);
+      await table.evaluate((el) => el.closest('[data-side-scroll="scroller"]')?.scrollTo({ left: 0 }));
+    }
   }
 }
