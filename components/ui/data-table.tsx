@@ -121,7 +121,7 @@ function headWithUnit(c: { head: string; unit?: string }): string {
   return c.unit && c.unit !== '–' ? `${c.head} (${c.unit})` : c.head;
 }
 
-/** One card per row: the first column is the title, every other column a "head: value" line. */
+/** One card per row: the first column is the title, every other column a "head (unit)" line with its value. */
 function DataCards<R>({ label, columns, rows, rowKey, testID, rowTestID }: DataTableProps<R>) {
   const [title, ...rest] = columns;
   return (
@@ -131,16 +131,21 @@ function DataCards<R>({ label, columns, rows, rowKey, testID, rowTestID }: DataT
           <View role="rowheader" style={styles.cardTitle}>
             <CellContent value={title.cell(r, ri)} strong />
           </View>
-          {rest.map((c) => (
-            <View key={c.key} role="cell" style={styles.cardLine}>
-              <AppText variant="caption" tone="muted" style={styles.cardTerm}>
-                {headWithUnit(c)}
-              </AppText>
-              <View style={styles.cardValue}>
-                <CellContent value={c.cell(r, ri)} mono={c.mono} />
+          {rest.map((c) => {
+            const value = c.cell(r, ri);
+            // A line with nothing to say is left out (a table keeps its empty cell to hold the column).
+            if (value === '') return null;
+            return (
+              <View key={c.key} role="cell" style={styles.cardLine}>
+                <AppText variant="caption" tone="muted" style={styles.cardTerm}>
+                  {headWithUnit(c)}
+                </AppText>
+                <View style={styles.cardValue}>
+                  <CellContent value={value} mono={c.mono} />
+                </View>
               </View>
-            </View>
-          ))}
+            );
+          })}
         </View>
       ))}
     </View>

@@ -42,6 +42,9 @@ describe('MarkedCurrentsTable', () => {
   it('says when there is no maximum COP (ΔT = 0 K)', () => {
     renderWithProviders(<MarkedCurrentsTable rows={[{ key: 'uniform', label: 'Best uniform', maxHeatLoad: point(3, false), maxCop: null }]} />);
     expect(within(screen.getByTestId('marked-currents-uniform-cop')).getByText('none at ΔT = 0 K')).toBeOnTheScreen();
+    // On a phone's card the empty quantities of that line are left out rather than shown blank.
+    expect(within(screen.getByTestId('marked-currents-uniform-cop')).queryByText('Qc (W)')).toBeNull();
+    expect(within(screen.getByTestId('marked-currents-uniform-qc')).getByText('Qc (W)')).toBeOnTheScreen();
   });
 
   it('leaves the device column out for a single device named around the table', () => {
