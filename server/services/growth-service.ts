@@ -5,6 +5,7 @@ import type { z } from 'zod';
 import type { GrowthOrderDetail, GrowthOrderDto, closeOrderSchema, growthStateChangeSchema, releaseRequestSchema, sheetSettingsSchema, yieldSettingsSchema } from '../../shared/api';
 import { growerStates } from '../../shared/api';
 import type { GrowthSheet } from '../../shared/growth/growth-sheet';
+import { stepBlocker } from '../../shared/growth/order-steps';
 import { inApiThread } from './api-threads';
 import type { ReportThreadAnswer, ReportThreadInput } from './report-thread';
 import { recordAudit, type AuditWho } from '../audit/audit-log';
@@ -131,6 +132,10 @@ export async function changeState(ds: DataSource, team: Team, actor: Actor, id: 
     const to = growerStates.indexOf(input.state);
     if (from < 0) throw new HttpError(409, `The order is ${o.state}; it can no longer change.`, [{ field: 'state', message: o.state }], 'Conflict');
     if (to !== from + 1) throw new ValidationError([{ field: 'state', message: `from ${o.state} the next state is ${growerStates[from + 1] ?? 'none (the physicist closes it)'}` }]);
+    // A step cannot be undone: the same precondition the client disables its button on.
+    const [{ uploads }]: Array<{ uploads: number }> = await m.query('SELECT count(*)::int AS uploads FROM growth_measurement WHERE order_id = $1', [o.id]);
+    const blocker = stepBlocker(input.state, { sheetStatus: o.sheetStatus, uploads });
+    if (blocker) throw new HttpError(409, `Not ${input.state} yet: ${blocker.message}.`, [blocker], 'Conflict');
     await m.query('UPDATE growth_order SET state = $2, updated_at = now() WHERE id = $1', [o.id, input.state]);
     await event(m, o.id, actor.displayName, 'state', o.state, input.state, input.note);
   });

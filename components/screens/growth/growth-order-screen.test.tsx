@@ -163,15 +163,61 @@ describe('GrowthOrderScreen: actions', () => {
     expect(screen.getByRole('button', { name: 'Start growing' })).toBeOnTheScreen();
   });
 
-  it('the physicist must give a reason to close, then rejects', async () => {
+  it('closing has no verdict chosen: the physicist picks one, gives a reason, confirms, then it closes', async () => {
     const { requests } = show(detail('grown'), 'physicist', { [`POST ${orderUrl}/close`]: () => ok(detail('rejected')) });
-    await act(async () => fireEvent.press(await screen.findByRole('button', { name: 'Close as rejected' })));
-    expect(screen.getByTestId('error-close-reason')).toHaveTextContent(/Give a reason/);
+    expect(await screen.findByTestId('close-choose')).toHaveTextContent('Choose Approve or Reject first.');
+    expect(screen.getByTestId('verdict-rejected')).not.toBeChecked();
+    expect(screen.getByTestId('verdict-approved')).not.toBeChecked();
+    expect(button(/^Close as/)).toBeNull();
+    expect(button('Close the order')).toBeDisabled();
+    fireEvent.press(screen.getByTestId('verdict-rejected'));
+    await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Close as rejected' })));
+    expect(screen.getByTestId('error-close-reason')).toHaveTextContent(/Give a reason for rejecting/);
     expect(requests.some((r) => r.method === 'POST')).toBe(false);
     fireEvent.changeText(screen.getByTestId('field-close-reason'), 'Boule cracked in zone 1.');
     await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Close as rejected' })));
+    // One more question before an irreversible step; "Keep" goes back without sending.
+    expect(screen.getByTestId('close-confirm')).toHaveTextContent(/Close the order as rejected\?.*closes for good.*e-mailed/);
+    expect(requests.some((r) => r.method === 'POST')).toBe(false);
+    await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Yes, close as rejected' })));
     expect(requests.find((r) => r.method === 'POST')).toMatchObject({ body: { verdict: 'rejected', reason: 'Boule cracked in zone 1.' } });
     expect(await screen.findByTestId('close-reason')).toBeOnTheScreen();
+  });
+
+  it('a measured order is not pre-set to approve either; approving asks for a reason and confirmation too', async () => {
+    const { requests } = show(withReport('measured'), 'physicist', { [`POST ${orderUrl}/close`]: () => ok(detail('rejected')) });
+    expect(await screen.findByTestId('close-choose')).toBeOnTheScreen();
+    expect(screen.getByTestId('verdict-approved')).not.toBeChecked();
+    fireEvent.press(screen.getByTestId('verdict-approved'));
+    expect(screen.getByTestId('verdict-approved')).toBeChecked();
+    fireEvent.changeText(screen.getByTestId('field-close-reason'), 'Within band; go ahead.');
+    await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Close as approved' })));
+    await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Keep' })));
+    expect(requests.some((r) => r.method === 'POST')).toBe(false);
+    await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Close as approved' })));
+    await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Yes, close as approved' })));
+    expect(requests.find((r) => r.method === 'POST')).toMatchObject({ body: { verdict: 'approved', reason: 'Within band; go ahead.' } });
+  });
+
+  it('"Mark as measured" stays disabled until a measurement is uploaded, and says why', async () => {
+    show(detail('grown'), 'grower');
+    expect(await screen.findByRole('button', { name: 'Mark as measured' })).toBeDisabled();
+    expect(screen.getByTestId('advance-blocker')).toHaveTextContent(/No measurements yet.*opens once the as-grown measurements are uploaded/);
+  });
+
+  it('"Mark as measured" is enabled once an upload is in', async () => {
+    show(withReport('grown'), 'grower');
+    expect(await screen.findByRole('button', { name: 'Mark as measured' })).not.toBeDisabled();
+    expect(screen.queryByTestId('advance-blocker')).toBeNull();
+  });
+
+  it('"Start growing" waits for the growth sheet', async () => {
+    const computing = detail('accepted');
+    computing.order = { ...computing.order, sheetStatus: 'computing' };
+    computing.sheet = null;
+    show(computing, 'grower');
+    expect(await screen.findByRole('button', { name: 'Start growing' })).toBeDisabled();
+    expect(screen.getByTestId('advance-blocker')).toHaveTextContent(/Growth sheet not ready/);
   });
 
   it('a change refused because the order was closed meanwhile reloads it: the verdict shows, the actions go', async () => {
