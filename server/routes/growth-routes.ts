@@ -39,7 +39,7 @@ export function growthRoutes(d: GrowthDeps): RouteSpec[] {
       res.json(await orderDetail(ds, requireTeam(req), req.params.id));
     }),
     route('post', '/growth-orders/:id/close', designers, body(closeOrderSchema), async (req, res) => {
-      await closeOrder(ds, requireTeam(req), requireUser(req), req.params.id, res.locals.body);
+      await closeOrder(d, requireTeam(req), requireUser(req), req.params.id, res.locals.body);
       res.json(await orderDetail(ds, requireTeam(req), req.params.id));
     }),
     route('put', '/growth-orders/:id/sheet', designers, body(sheetSettingsSchema), async (req, res) => {
