@@ -174,7 +174,8 @@ describe('growth hand-off in a real browser: release, print, grow, measure, judg
     expect(await visible(page.getByTestId('zone-diagram')).innerText()).toMatch(/Shading follows the target doping/);
     await visible(page.getByTestId('zone-diagram')).scrollIntoViewIfNeeded();
     await saveScreenshot(page, 'growth-sheet-print-media-desktop');
-    await page.emulateMedia({ media: 'screen' });
+    // Back to no emulation: page.pdf() then prints with the print media again.
+    await page.emulateMedia({ media: null });
     for (const format of ['A4', 'Letter'] as const) {
       const pdf = await page.pdf({ format });
       expect(pageCount(pdf)).toBe(1);

@@ -76,6 +76,19 @@ it('release → sheet (K = 1 is the best uniform leg) → grower steps → measu
   const report = up.body.report as MeasurementReport;
   expect(report.verdicts.map((v) => v.verdict)).toEqual(['within', 'high', 'within']);
   expect(report.asGrown.atDesignCurrent.deltaT).toBeLessThan(report.target.deltaT);
+  // The report as CSV: every position with its readings, bands and verdict; the off zone's positions read outside.
+  const reportCsv = await physicist.get(`/api/growth-orders/${orderId}/report.csv`);
+  expect(reportCsv.status).toBe(200);
+  const csvRows = reportCsv.text.split('\n').filter((l) => /^\d/.test(l)).map((l) => l.split(','));
+  const csvHeader = reportCsv.text.split('\n').find((l) => l.startsWith('line,'))!.split(',');
+  expect(csvHeader).toEqual(expect.arrayContaining(['seebeck_verdict', 'sigma_verdict', 'verdict']));
+  expect(csvRows).toHaveLength(report.points.length);
+  const col = (name: string) => csvHeader.indexOf(name);
+  for (const r of csvRows) {
+    const zone = Number(r[col('zone')]);
+    expect([r[col('seebeck_verdict')], r[col('verdict')]]).toEqual(zone === 2 ? ['below band', 'outside band (2 of 2 readings)'] : ['within band', 'within band']);
+  }
+  expect(reportCsv.text).toMatch(/^# zone verdicts,zone 1 within band \(0 of \d+ readings outside\); zone 2 above band \(\d+ of \d+ readings outside\); zone 3 within band/m);
   const physicistMail = await eventually(async () => (await ctx.ds.query('SELECT subject, text FROM captured_mail WHERE $1 = ANY(mail_to) AND subject LIKE $2', [demo.physicist, `%Measurements back for batch ${batch}%`]))[0] as { subject: string; text: string } | undefined);
   expect(physicistMail.text).toMatch(/zone 2 \(high\)/);
 
