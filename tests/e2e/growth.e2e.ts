@@ -310,6 +310,13 @@ describe('growth hand-off in a real browser: release, print, grow, measure, judg
       expect(rowText).toMatch(/Outside band: S above, σ below/);
       expect(rowText).toMatch(/above band [\d.]+–[\d.]+\sµV\/K[\s\S]*below band [\d.]+–[\d.]+\sS\/cm/);
       await saveScreenshot(page, `growth-report-readings-${size}`);
+      if (size === 'desktop') {
+        // The report's CSV link carries the same verdict per position.
+        const href = await visible(page.getByTestId('report-csv')).getAttribute('href');
+        const csv = await (await physicist.context.request.get(new URL(href!, baseUrl).toString())).text();
+        const strayRow = csv.split('\n').find((l) => l.startsWith(`${strayLine},`))!;
+        expect(strayRow).toMatch(/above band,.*below band,.*outside band \(2 of 2 readings\)$/);
+      }
       const plot = visible(page.getByTestId('report-plot'));
       await plot.scrollIntoViewIfNeeded();
       // The as-grown series is drawn in the warm colour; positions with a reading out of band have a marker and a legend entry of their own.

@@ -114,6 +114,7 @@ describe('GrowthOrderScreen: each measurement against its band', () => {
     expect(screen.getByTestId('reading-row-2')).toHaveTextContent(/Within band/);
     expect(screen.getByTestId('reading-row-2')).not.toHaveTextContent(/Outside/);
     expect(screen.getByTestId('report-summary')).toHaveTextContent(/2 of 3 positions have a reading outside its zone's band/);
+    expect(screen.getByTestId('report-csv')).toHaveTextContent('Report CSV');
   });
 
   it('a report stored before readings were judged says it was judged zone by zone only', async () => {
