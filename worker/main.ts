@@ -9,6 +9,7 @@ import { startBoss } from '../server/queue/boss';
 import { queues } from '../server/queue/queues';
 import { startRunSweeper } from '../server/runs/run-sweeper';
 import { accountMailJob } from './account-mail-job';
+import { growthMailJob } from './growth-mail-job';
 import { startHeartbeat } from './heartbeat';
 import { runJob } from './run-job';
 import { sheetJob, type SheetJobData } from './sheet-job';
@@ -52,6 +53,12 @@ async function main(): Promise<void> {
     // The job's data names addresses; the log says only what kind went out.
     const outcome = await accountMailJob({ ds, mailer, appOrigin: env.appOrigin }, job.data);
     console.log(`[worker] account mail ${job.id}: ${outcome}`);
+    return { workerId, outcome };
+  });
+  await boss.work(queues.growthMail, { pollingIntervalSeconds: 0.5, batchSize: 1 }, async ([job]) => {
+    if (!job) return null;
+    const outcome = await growthMailJob({ ds, mailer, appOrigin: env.appOrigin }, job.data);
+    console.log(`[worker] growth mail ${job.id}: ${outcome}`);
     return { workerId, outcome };
   });
   const sweeper = startRunSweeper(life, env.runStaleSeconds, 'worker');

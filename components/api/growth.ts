@@ -147,3 +147,8 @@ export function useUploadMeasurements(id: string) {
 export function growthSheetExportUrl(id: string, format: 'csv' | 'json'): string {
   return `${apiBaseUrl()}${orderPath(id)}/sheet.${format}`;
 }
+
+/** One upload's measurement report as CSV: every position's readings, bands and verdicts. */
+export function measurementReportCsvUrl(id: string, uploadId: string): string {
+  return `${apiBaseUrl()}${orderPath(id)}/report.csv?upload=${encodeURIComponent(uploadId)}`;
+}

@@ -63,3 +63,19 @@ export function passwordChangedMail(to: string, o: { how: 'changed' | 'reset'; r
     text: `The password of your Frostgrade account was just ${what}; every other session of the account was signed out.\n\nIf it was not you, reset your password now and tell your team's admin: ${o.reset}${footer}`,
   };
 }
+
+/**
+ * The physicist's verdict on a growth order, to the team's growers. Members
+ * only (the team's own words may go in the subject): the batch names the order.
+ */
+export function orderClosedMail(to: string[], o: { batch: string; designName: string; verdict: 'approved' | 'rejected'; reason: string; by: string; link: string }): OutgoingMail {
+  const what = o.verdict === 'approved' ? 'approved' : 'rejected';
+  const next = o.verdict === 'approved'
+    ? 'The piece is accepted. The order is closed and keeps its measurements and timeline.'
+    : 'The piece is not accepted. A regrowth comes as a new order when the physicist releases the run again.';
+  return {
+    to,
+    subject: `Growth order ${o.batch} ${what}`,
+    text: [`${o.by} ${what} growth order ${o.batch}${o.designName ? ` (${o.designName})` : ''}.`, '', `Reason: ${o.reason}`, '', next, '', `Open the order: ${o.link}`].join('\n') + footer,
+  };
+}

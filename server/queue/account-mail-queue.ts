@@ -5,7 +5,7 @@ import { inTransaction } from '../runs/run-jobs';
 import { queues } from './queues';
 
 /** A mail server that is down for a while is retried with backoff: 30 s, 60 s, 120 s, … */
-const retry = { retryLimit: 6, retryDelay: 30, retryBackoff: true } as const;
+export const mailRetry = { retryLimit: 6, retryDelay: 30, retryBackoff: true } as const;
 
 /**
  * Puts an account mail on its queue for a worker (server/mail/account-mail.ts);
@@ -14,6 +14,6 @@ const retry = { retryLimit: 6, retryDelay: 30, retryBackoff: true } as const;
  */
 export async function enqueueAccountMail(boss: PgBoss, job: AccountMailJob, m?: EntityManager): Promise<void> {
   const data = accountMailJobSchema.parse(job);
-  const id = await boss.send(queues.accountMail, data, { ...retry, ...(m ? inTransaction(m) : {}) });
+  const id = await boss.send(queues.accountMail, data, { ...mailRetry, ...(m ? inTransaction(m) : {}) });
   if (!id) throw new Error(`pg-boss did not create an ${data.kind} mail job`);
 }

@@ -6,4 +6,6 @@ export const queues = {
   growthSheet: 'growth-sheet',
   /** Account mail (sign-up and invitation links, resets, notices to owners): sent by a worker, never inside a request. */
   accountMail: 'account-mail',
+  /** Mail about growth orders (the verdict and its reason to the growers): sent by a worker, never inside a request. */
+  growthMail: 'growth-mail',
 } as const;

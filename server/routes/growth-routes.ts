@@ -8,7 +8,7 @@ import { recordAudit } from '../audit/audit-log';
 import { route, type RouteSpec } from '../http/route-table';
 import { fileOf, uploadThen } from '../http/upload';
 import { body, parseOrThrow } from '../http/validate';
-import { exportSheet } from '../services/growth-export';
+import { exportReport, exportSheet } from '../services/growth-export';
 import { changeState, closeOrder, listOrders, orderDetail, releaseRun, updateScatter, updateSheetSettings, uploadMeasurements, type GrowthDeps } from '../services/growth-service';
 
 /** Growers move orders and upload measurements; admins may stand in for them. */
@@ -39,7 +39,7 @@ export function growthRoutes(d: GrowthDeps): RouteSpec[] {
       res.json(await orderDetail(ds, requireTeam(req), req.params.id));
     }),
     route('post', '/growth-orders/:id/close', designers, body(closeOrderSchema), async (req, res) => {
-      await closeOrder(ds, requireTeam(req), requireUser(req), req.params.id, res.locals.body);
+      await closeOrder(d, requireTeam(req), requireUser(req), req.params.id, res.locals.body);
       res.json(await orderDetail(ds, requireTeam(req), req.params.id));
     }),
     route('put', '/growth-orders/:id/sheet', designers, body(sheetSettingsSchema), async (req, res) => {
@@ -61,5 +61,11 @@ export function growthRoutes(d: GrowthDeps): RouteSpec[] {
       await recordAudit(ds, auditWho(req), { action: 'sheet-exported', summary: `exported the growth sheet ${out.filename}`, subjectId: String(req.params.id) });
       res.type(format === 'csv' ? 'text/csv' : 'application/json').attachment(out.filename).send(out.body);
     })),
+    // The newest upload's report, or the one named by `?upload=<id>`: each position's readings and verdicts.
+    route('get', '/growth-orders/:id/report.csv', objectReaders.growth, async (req, res) => {
+      const out = await exportReport(ds, requireTeam(req), req.params.id, typeof req.query.upload === 'string' ? req.query.upload : undefined);
+      await recordAudit(ds, auditWho(req), { action: 'report-exported', summary: `exported the measurement report ${out.filename}`, subjectId: String(req.params.id) });
+      res.type('text/csv').attachment(out.filename).send(out.body);
+    }),
   ];
 }

@@ -1,8 +1,9 @@
 import type { DataSource } from 'typeorm';
-import { jointBandNote, yieldNote } from '../../shared/api/growth-documents';
+import { jointBandNote, readReport, yieldNote, type InferredPointView, type ReadingView } from '../../shared/api/growth-documents';
 import type { GrowthSheet } from '../../shared/growth/growth-sheet';
 import { Team } from '../db/entities';
-import { HttpError } from '../http/errors';
+import { HttpError, NotFoundError } from '../http/errors';
+import { isUuid } from '../http/validate';
 import { csvComment, csvDocument } from './csv-writer';
 import { findOrder } from './growth-service';
 
@@ -38,4 +39,57 @@ export async function exportSheet(ds: DataSource, team: Team, id: unknown, forma
     csvComment('Model predictions: verify the grown piece by measurement before building hardware; follow lab safety rules and local codes.'),
   ];
   return { filename: `${stem}.csv`, body: csvDocument({ comments, header, rows }) };
+}
+
+const readingWords: Record<ReadingView['verdict'], string> = { within: 'within band', low: 'below band', high: 'above band' };
+
+/** A reading's four cells: value, band low and high, verdict in words; empty when it was not measured. */
+function readingCells(p: InferredPointView, kind: ReadingView['kind']): Array<number | string | null> {
+  const r = p.readings?.find((x) => x.kind === kind);
+  if (!r) return [null, null, null, ''];
+  const [low, high] = [r.low, r.high].sort((a, b) => a - b);
+  return [g(r.value, 6), g(low!), g(high!), readingWords[r.verdict]];
+}
+
+/**
+ * One upload's report (the newest, or `uploadId`): one row per measured
+ * position with each reading, the band it was judged against and the
+ * verdict in words, then the position's verdict; the zone verdicts and the
+ * predicted ΔT go in the comments.
+ */
+export async function exportReport(ds: DataSource, team: Team, id: unknown, uploadId?: unknown): Promise<{ filename: string; body: string }> {
+  const o = await findOrder(ds.manager, team, id);
+  if (uploadId !== undefined && !isUuid(uploadId)) throw new NotFoundError('measurement upload');
+  const rows: Array<{ id: string; uploaded_by: string; uploaded_at: Date; temperature: number; prediction: unknown }> = await ds.query(
+    `SELECT id, uploaded_by, uploaded_at, temperature, prediction FROM growth_measurement WHERE order_id = $1 AND ($2::uuid IS NULL OR id = $2::uuid) ORDER BY uploaded_at DESC LIMIT 1`,
+    [o.id, uploadId ?? null]);
+  const upload = rows[0];
+  if (!upload) {
+    if (uploadId !== undefined) throw new NotFoundError('measurement upload');
+    throw new HttpError(409, 'No measurements have been uploaded for this order yet.', [{ field: 'measurements', message: 'no upload yet' }], 'Conflict');
+  }
+  const report = readReport(upload.prediction);
+  if (!report) throw new HttpError(409, 'This upload\'s report is not in a shape this version of Frostgrade understands.', [{ field: 'report', message: 'unreadable' }], 'Conflict');
+  const judged = report.points.some((p) => p.readings !== undefined);
+  const header = ['line', 'position_mm', 'zone', 'n_inferred_per_cm3',
+    'seebeck_uV_per_K', 'seebeck_band_low_uV_per_K', 'seebeck_band_high_uV_per_K', 'seebeck_verdict',
+    'sigma_S_per_cm', 'sigma_band_low_S_per_cm', 'sigma_band_high_S_per_cm', 'sigma_verdict',
+    'hall_carriers_per_cm3', 'hall_band_low_per_cm3', 'hall_band_high_per_cm3', 'hall_verdict', 'verdict'];
+  const body = [...report.points].sort((a, b) => a.positionMm - b.positionMm).map((p) => {
+    const outside = (p.readings ?? []).filter((r) => r.verdict !== 'within').length;
+    const verdict = p.readings === undefined ? 'not judged (uploaded before readings were checked)' : outside > 0 ? `outside band (${outside} of ${p.readings.length} readings)` : 'within band';
+    return [p.line, g(p.positionMm, 6), p.zone === undefined ? null : p.zone + 1, g(p.perCm3), ...readingCells(p, 'seebeck'), ...readingCells(p, 'sigma'), ...readingCells(p, 'hall'), verdict];
+  });
+  const zoneWords: Record<string, string> = { within: 'within band', low: 'below band', high: 'above band', stray: 'readings outside band', unmeasured: 'not measured' };
+  const zones = report.verdicts.map((v) => `zone ${v.zone + 1} ${zoneWords[v.verdict]}${v.readings ? ` (${v.readingsOutside ?? 0} of ${v.readings} readings outside)` : ''}`);
+  const comments = [
+    csvComment('Frostgrade as-grown measurement report for batch', o.batch, `${report.zones} zones from the cold end`),
+    csvComment('uploaded by', upload.uploaded_by, `${upload.uploaded_at.toISOString()}; measured at ${g(upload.temperature)} K`),
+    csvComment('zone verdicts', zones.join('; ')),
+    csvComment(`predicted ΔT ${g(report.asGrown.atDesignCurrent.deltaT)} K at the design current ${g(report.target.current)} A (target ${g(report.target.deltaT)} K)`),
+    ...(judged ? [] : [csvComment('readings not judged: this upload predates the check of each reading; upload it again to check every measurement')]),
+    csvComment('Model predictions: verify the grown piece by measurement before building hardware; follow lab safety rules and local codes.'),
+  ];
+  const stem = `measurements-${o.batch.replace(/[^A-Za-z0-9._-]+/g, '-')}-${upload.uploaded_at.toISOString().slice(0, 10)}`;
+  return { filename: `${stem}.csv`, body: csvDocument({ comments, header, rows: body }) };
 }

@@ -5,6 +5,7 @@ import type { z } from 'zod';
 import type { GrowthOrderDetail, GrowthOrderDto, closeOrderSchema, growthStateChangeSchema, releaseRequestSchema, sheetSettingsSchema, yieldSettingsSchema } from '../../shared/api';
 import { growerStates } from '../../shared/api';
 import type { GrowthSheet } from '../../shared/growth/growth-sheet';
+import { stepBlocker } from '../../shared/growth/order-steps';
 import { inApiThread } from './api-threads';
 import type { ReportThreadAnswer, ReportThreadInput } from './report-thread';
 import { recordAudit, type AuditWho } from '../audit/audit-log';
@@ -12,6 +13,7 @@ import { GrowthOrder, Run, Team } from '../db/entities';
 import { HttpError, NotFoundError, ValidationError } from '../http/errors';
 import { isUuid } from '../http/validate';
 import type { Mailer } from '../mail/mailer';
+import { enqueueGrowthMail } from '../queue/growth-mail-queue';
 import { queues } from '../queue/queues';
 import { publishEvent } from '../db/events';
 import { findRun } from './run-service';
@@ -131,19 +133,26 @@ export async function changeState(ds: DataSource, team: Team, actor: Actor, id: 
     const to = growerStates.indexOf(input.state);
     if (from < 0) throw new HttpError(409, `The order is ${o.state}; it can no longer change.`, [{ field: 'state', message: o.state }], 'Conflict');
     if (to !== from + 1) throw new ValidationError([{ field: 'state', message: `from ${o.state} the next state is ${growerStates[from + 1] ?? 'none (the physicist closes it)'}` }]);
+    // A step cannot be undone: the same precondition the client disables its button on.
+    const [{ uploads }]: Array<{ uploads: number }> = await m.query('SELECT count(*)::int AS uploads FROM growth_measurement WHERE order_id = $1', [o.id]);
+    const blocker = stepBlocker(input.state, { sheetStatus: o.sheetStatus, uploads });
+    if (blocker) throw new HttpError(409, `Not ${input.state} yet: ${blocker.message}.`, [blocker], 'Conflict');
     await m.query('UPDATE growth_order SET state = $2, updated_at = now() WHERE id = $1', [o.id, input.state]);
     await event(m, o.id, actor.displayName, 'state', o.state, input.state, input.note);
   });
   await publishEvent(ds, { teamId: team.id, event: 'growth:changed', payload: { orderId: String(id) } });
 }
 
-export async function closeOrder(ds: DataSource, team: Team, actor: Actor, id: unknown, input: z.output<typeof closeOrderSchema>): Promise<void> {
+/** The physicist's verdict; the growers are told by a worker once it commits. */
+export async function closeOrder(d: GrowthDeps, team: Team, actor: Actor, id: unknown, input: z.output<typeof closeOrderSchema>): Promise<void> {
+  const { ds } = d;
   await ds.transaction(async (m) => {
     const o = await findOrder(m, team, id, true);
     assertOpen(o);
     if (input.verdict === 'approved' && o.state !== 'measured') throw new ValidationError([{ field: 'verdict', message: 'approve an order once the grown piece has been measured' }]);
     await m.query('UPDATE growth_order SET state = $2, close_reason = $3, updated_at = now() WHERE id = $1', [o.id, input.verdict, input.reason]);
     await event(m, o.id, actor.displayName, 'closed', o.state, input.verdict, input.reason);
+    await enqueueGrowthMail(d.boss, { kind: 'order-closed', orderId: o.id }, m);
   });
   await publishEvent(ds, { teamId: team.id, event: 'growth:changed', payload: { orderId: String(id) } });
 }
@@ -200,6 +209,8 @@ export async function uploadMeasurements(d: GrowthDeps, team: Team, actor: Actor
     await event(m, o.id, actor.displayName, 'measured', null, null, `${parsed.points.length} positions uploaded`);
   });
   const flagged = report.verdicts.filter((v) => v.verdict === 'low' || v.verdict === 'high');
+  const stray = report.verdicts.filter((v) => v.verdict === 'stray');
+  const pointsOutside = report.points.filter((q) => q.readings.some((r) => r.verdict !== 'within')).length;
   const to: Array<{ email: string }> = await d.ds.query(`SELECT DISTINCT email FROM app_user WHERE removed_at IS NULL AND (id = $1 OR id IN (SELECT user_id FROM design_follower WHERE design_id = $2))`, [o.releasedBy, run.designId]);
   if (to.length > 0) {
     await d.mailer.send({
@@ -208,7 +219,9 @@ export async function uploadMeasurements(d: GrowthDeps, team: Team, actor: Actor
       text: [`${actor.displayName} uploaded ${parsed.points.length} measured positions for batch ${o.batch}.`, '',
         `Predicted ΔT of the as-grown leg: ${report.asGrown.atDesignCurrent.deltaT.toFixed(2)} K at the design current, ${report.asGrown.atBestCurrent.deltaT.toFixed(2)} K at its best current (target ${report.target.deltaT.toFixed(2)} K).`,
         ...(report.hall ? [report.hall.note] : []),
-        flagged.length ? `Zones out of tolerance: ${flagged.map((v) => `zone ${v.zone + 1} (${v.verdict})`).join(', ')}.` : 'Every measured zone is within tolerance.', '',
+        flagged.length ? `Zones out of tolerance: ${flagged.map((v) => `zone ${v.zone + 1} (${v.verdict})`).join(', ')}.` : stray.length ? 'Every measured zone is within tolerance on average, but not every reading is.' : 'Every measured zone is within tolerance.',
+        ...(stray.length ? [`Zones with readings outside their band: ${stray.map((v) => `zone ${v.zone + 1} (${v.readingsOutside} of ${v.readings} readings)`).join(', ')}.`] : []),
+        `${pointsOutside} of ${report.points.length} measured positions have a reading outside their zone's band.`, '',
         `Open the order: ${d.appOrigin}/growth/${o.id}`, '', 'These are model predictions: confirm with a device measurement before building hardware.'].join('\n'),
     }).catch((err: Error) => console.error(`[api] measurement mail failed: ${err.message}`));
   }

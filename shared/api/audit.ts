@@ -19,6 +19,7 @@ export const auditActions = [
   'family-archived',
   'family-unarchived',
   'sheet-exported',
+  'report-exported',
   'audit-exported',
 ] as const;
 export const auditActionSchema = z.enum(auditActions);

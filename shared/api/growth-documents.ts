@@ -83,6 +83,15 @@ export const growthSheetSchema = z.object({
 
 const score = z.object({ value: z.number(), deltaT: z.number(), feasible: z.boolean() });
 
+/** One reading of a position against its zone's band (shared/growth/point-verdicts.ts): µV/K, S/cm, or cm⁻³ for Hall. */
+export const readingSchema = z.object({
+  kind: z.enum(['seebeck', 'sigma', 'hall']),
+  value: z.number(),
+  low: z.number(),
+  high: z.number(),
+  verdict: z.enum(['within', 'low', 'high']),
+});
+
 export const measurementReportSchema = z.object({
   zones: z.number().int(),
   points: z.array(
@@ -97,14 +106,19 @@ export const measurementReportSchema = z.object({
       hallFactor: z.number().nullable().optional(),
       disagree: z.boolean(),
       outOfRange: z.boolean(),
+      // Absent on reports stored before each reading was judged; the screen says so.
+      zone: z.number().int().optional(),
+      readings: z.array(readingSchema).optional(),
     }),
   ),
   verdicts: z.array(
     z.object({
       zone: z.number().int(),
       measured: z.number().nullable(),
-      verdict: z.enum(['within', 'low', 'high', 'unmeasured']),
+      verdict: z.enum(['within', 'low', 'high', 'stray', 'unmeasured']),
       points: z.number().int(),
+      readings: z.number().int().optional(),
+      readingsOutside: z.number().int().optional(),
     }),
   ),
   target: z.object({ value: z.number(), deltaT: z.number(), current: z.number() }),
@@ -123,6 +137,7 @@ export type SheetView = z.infer<typeof growthSheetSchema>;
 export type ReportView = z.infer<typeof measurementReportSchema>;
 export type ZoneVerdictView = ReportView['verdicts'][number];
 export type InferredPointView = ReportView['points'][number];
+export type ReadingView = z.infer<typeof readingSchema>;
 
 // Compile-time checks: what the server computes fits what the client reads.
 const _sheetFits = (s: GrowthSheet): SheetView => s;

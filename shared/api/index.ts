@@ -12,3 +12,4 @@ export * from './modules';
 export * from './growth-documents';
 export * from './account-mail';
 export * from './audit';
+export * from './growth-mail';

@@ -2,12 +2,25 @@ import type { DopingProblem } from '../engine/doping-problem';
 import { gradedLeg, withEnds } from '../engine/leg-profile';
 import { newWarmStart, scoreDesign, type DesignScore } from '../engine/evaluate-design';
 import { optimizeCurrent } from '../engine/optimize-current';
+import { zoneAt } from './point-verdicts';
 import type { ZoneTolerance } from './zone-tolerance';
 import type { ZoneLayout } from './zoned-leg';
 
 export type GrownPoint = { positionFraction: number; log10: number };
 
-export type ZoneVerdict = { zone: number; measured: number | null; verdict: 'within' | 'low' | 'high' | 'unmeasured'; points: number };
+/** A measured position with how many readings it holds and how many of them lie outside its zone's band. */
+export type JudgedPoint = GrownPoint & { readings: number; outside: number };
+
+/**
+ * 'low'/'high': the zone's doping (geometric mean of its positions) is outside
+ * its band; 'stray': the mean is inside but some reading is not — a zone
+ * never reads "within" while one of its measurements lies outside the band.
+ * `readings`/`readingsOutside` are absent on reports stored before readings were judged.
+ */
+export type ZoneVerdict = {
+  zone: number; measured: number | null; verdict: 'within' | 'low' | 'high' | 'stray' | 'unmeasured'; points: number;
+  readings?: number; readingsOutside?: number;
+};
 
 /**
  * The as-grown leg: doping piecewise linear in log10 n between measured
@@ -29,17 +42,19 @@ export function predictAsGrown(p: DopingProblem, points: GrownPoint[], designCur
   };
 }
 
-/** Each zone's measured doping (geometric mean of its points) against its tolerance band. */
-export function zoneVerdicts(layout: ZoneLayout, tolerances: ZoneTolerance[], points: GrownPoint[]): ZoneVerdict[] {
-  let start = 0;
-  return layout.fractions.map((f, k) => {
-    const end = start + f;
-    const inside = points.filter((q) => q.positionFraction >= start - 1e-9 && (q.positionFraction < end || (k === layout.fractions.length - 1 && q.positionFraction <= end + 1e-9)));
-    start = end;
-    if (inside.length === 0) return { zone: k, measured: null, verdict: 'unmeasured', points: 0 };
+/**
+ * Each zone's measured doping (geometric mean of its points) against its
+ * tolerance band, and how many of its readings lie outside the band.
+ */
+export function zoneVerdicts(layout: ZoneLayout, tolerances: ZoneTolerance[], points: JudgedPoint[]): ZoneVerdict[] {
+  return layout.fractions.map((_, k) => {
+    const inside = points.filter((q) => zoneAt(layout.fractions, q.positionFraction) === k);
+    if (inside.length === 0) return { zone: k, measured: null, verdict: 'unmeasured', points: 0, readings: 0, readingsOutside: 0 };
     const measured = 10 ** (inside.reduce((a, q) => a + q.log10, 0) / inside.length);
+    const readings = inside.reduce((a, q) => a + q.readings, 0);
+    const readingsOutside = inside.reduce((a, q) => a + q.outside, 0);
     const t = tolerances[k]!;
-    const verdict = measured < t.lowPerCm3 ? 'low' : measured > t.highPerCm3 ? 'high' : 'within';
-    return { zone: k, measured, verdict, points: inside.length };
+    const verdict = measured < t.lowPerCm3 ? 'low' : measured > t.highPerCm3 ? 'high' : readingsOutside > 0 ? 'stray' : 'within';
+    return { zone: k, measured, verdict, points: inside.length, readings, readingsOutside };
   });
 }

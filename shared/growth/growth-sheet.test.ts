@@ -76,6 +76,43 @@ describe('as-grown measurements against the sheet', () => {
     expect(report.asGrown.atDesignCurrent.deltaT).toBeLessThan(step.deltaT - 0.5);
   });
 
+  it('judges every reading against its zone\'s band: one stray position flags itself and its zone though the zone\'s mean is on target', () => {
+    // The shape of a real upload: S a few per cent above the band's top (312 against 246–304 µV/K)
+    // and σ below its bottom (292 against 306–603 S/cm) at one position of a zone otherwise on target.
+    const k = 1;
+    const zone = step.rows[k]!;
+    const at = zone.startMm + 0.75 * (zone.endMm - zone.startMm);
+    const stray = { seebeck: zone.seebeckBandUvK[1] * (312 / 304), sigma: zone.sigmaBandSCm[0] * (292 / 306) };
+    const lines = csvFor(step.rows.map((r) => r.perCm3)).split('\n');
+    lines.push(`${at.toFixed(3)},${stray.seebeck.toFixed(3)},${stray.sigma.toFixed(4)}`);
+    const parsed = parseMeasurementsCsv(lines.join('\n'), 1.5);
+    const report = reportMeasurements(caseJson, sheet, 3, parsed.points, 300);
+    const flagged = report.points.filter((q) => q.readings.some((r) => r.verdict !== 'within'));
+    expect(flagged.map((q) => q.positionMm)).toEqual([Number(at.toFixed(3))]);
+    expect(flagged[0]!.zone).toBe(k);
+    // Judged at the sheet's check temperature, the bands are the ones the sheet prints.
+    expect(flagged[0]!.readings).toEqual([
+      { kind: 'seebeck', value: expect.closeTo(stray.seebeck, 3), low: expect.closeTo(zone.seebeckBandUvK[0], 9), high: expect.closeTo(zone.seebeckBandUvK[1], 9), verdict: 'high' },
+      { kind: 'sigma', value: expect.closeTo(stray.sigma, 4), low: expect.closeTo(zone.sigmaBandSCm[0], 9), high: expect.closeTo(zone.sigmaBandSCm[1], 9), verdict: 'low' },
+    ]);
+    const inZone = report.points.filter((q) => q.zone === k);
+    expect(report.verdicts[k]).toMatchObject({ verdict: 'stray', points: inZone.length, readings: 2 * inZone.length, readingsOutside: 2 });
+    // The zone's mean doping alone would have read within: the stray point is one of several.
+    expect(report.verdicts[k]!.measured!).toBeGreaterThan(zone.lowPerCm3);
+    expect(report.verdicts.filter((_, i) => i !== k).map((v) => v.verdict)).toEqual(['within', 'within']);
+  });
+
+  it('reads a position measured at another temperature against the band at that temperature', () => {
+    const zone = step.rows[0]!;
+    const at350 = propertiesAt(family, zone.perCm3, 350);
+    const parsed = parseMeasurementsCsv(`position_mm,seebeck_uV_per_K,sigma_S_per_cm,temperature_K\n${((zone.startMm + zone.endMm) / 2).toFixed(3)},${at350.seebeck * 1e6},${at350.sigma / 100},350`, 1.5);
+    const [q] = reportMeasurements(caseJson, sheet, 3, parsed.points, 300).points;
+    // On target at 350 K: within, though its S lies outside the band the sheet prints for 300 K.
+    expect(q!.readings.map((r) => r.verdict)).toEqual(['within', 'within']);
+    const s = q!.readings[0]!;
+    expect(s.value < zone.seebeckBandUvK[0] || s.value > zone.seebeckBandUvK[1]).toBe(true);
+  });
+
   it('turns Hall concentrations into carrier concentrations with the band model\'s Hall factor, or one entered by hand', () => {
     // What a Hall measurement of a piece grown to target reads: p_H = p / r_H, r_H from one parabolic band with
     // acoustic-phonon scattering (3π/8 non-degenerate … 1 degenerate: Putley 1960, from memory; see hall-factor.test.ts).
@@ -98,6 +135,7 @@ describe('as-grown measurements against the sheet', () => {
       expect(q.fromHall).toBeCloseTo(q.hallFactor! * q.hallPerCm3!, -10);
     });
     expect(report.verdicts.map((v) => v.verdict)).toEqual(['within', 'within', 'within']);
+    expect(report.points.every((q) => q.readings.length === 1 && q.readings[0]!.kind === 'hall' && q.readings[0]!.verdict === 'within')).toBe(true);
     // Taken as the carrier concentration (r_H = 1 entered by hand), the same file reads low by log10 r_H.
     const asIs = reportMeasurements(caseJson, sheet, 3, parsed.points, 300, { hallFactor: 1 });
     expect(asIs.hall).toMatchObject({ source: 'entered', min: 1, max: 1 });

@@ -88,7 +88,12 @@ describe('as-grown measurements', () => {
     const bands = zoneTolerances(p, three.layout, three.score, 1);
     const mids: number[] = [];
     three.layout.fractions.reduce((start, f) => { mids.push(start + f / 2); return start + f; }, 0);
-    const grown = mids.map((f, k) => ({ positionFraction: f, log10: k === 1 ? Math.log10(bands[1]!.highPerCm3) + 0.2 : three.layout.log10[k]! }));
+    const grown = mids.map((f, k) => ({ positionFraction: f, log10: k === 1 ? Math.log10(bands[1]!.highPerCm3) + 0.2 : three.layout.log10[k]!, readings: 2, outside: 0 }));
     expect(zoneVerdicts(three.layout, bands, grown).map((v) => v.verdict)).toEqual(['within', 'high', 'within']);
+    // A zone whose mean is on target but holds a reading outside the band is not "within".
+    const stray = grown.map((q, k) => (k === 2 ? { ...q, outside: 1 } : q));
+    const verdicts = zoneVerdicts(three.layout, bands, stray);
+    expect(verdicts.map((v) => v.verdict)).toEqual(['within', 'high', 'stray']);
+    expect(verdicts[2]).toMatchObject({ readings: 2, readingsOutside: 1, points: 1 });
   });
 });

@@ -4,6 +4,7 @@ import { predictAsGrown, zoneVerdicts, type ZoneVerdict } from './as-grown';
 import type { GrowthSheet } from './growth-sheet';
 import { invertDoping } from './invert-doping';
 import type { MeasuredPoint } from './parse-measurements';
+import { judgeReadings, zoneAt, type Reading } from './point-verdicts';
 import { problemOf } from './zoning';
 
 /** S and σ giving doping estimates further apart than this (decades) are flagged. */
@@ -16,6 +17,9 @@ export const DISAGREEMENT_DECADES = 0.15;
 export type InferredPoint = {
   line: number; positionMm: number; perCm3: number; fromSeebeck: number | null; fromSigma: number | null; fromHall: number | null;
   hallPerCm3?: number | null; hallFactor?: number | null; disagree: boolean; outOfRange: boolean;
+  /** The zone (0 = cold end) the position lies in, and each of its readings against that zone's band. */
+  zone: number;
+  readings: Reading[];
 };
 
 /** Which Hall factor turned Hall concentrations into carrier concentrations, stated on the report. */
@@ -43,8 +47,8 @@ export type MeasurementReport = {
 /**
  * Infers the doping at each measured position from the family (inverting
  * S(n) and/or σ(n) at the measurement temperature, or taking a Hall value),
- * predicts the as-grown leg with the engine, and judges each zone against its
- * tolerance band.
+ * predicts the as-grown leg with the engine, and judges each reading and
+ * each zone against the zone's tolerance band.
  */
 export function reportMeasurements(caseJson: unknown, sheet: GrowthSheet, zones: number, points: MeasuredPoint[], temperature: number, options: ReportOptions = {}): MeasurementReport {
   const c = parseCase(caseJson, 'optimize');
@@ -68,7 +72,10 @@ export function reportMeasurements(caseJson: unknown, sheet: GrowthSheet, zones:
     const values = [est?.fromSeebeck, est?.fromSigma, fromHall].filter((v): v is number => typeof v === 'number');
     const log10 = values.reduce((a, v) => a + Math.log10(v), 0) / values.length;
     const spread = values.length > 1 ? Math.max(...values.map(Math.log10)) - Math.min(...values.map(Math.log10)) : 0;
+    const zone = zoneAt(step.layout.fractions, q.positionMm / sheet.lengthMm);
+    const readings = judgeReadings(family, step.rows[zone]!, t, { seebeck: q.seebeck, sigma: q.sigma, carrierPerCm3: fromHall });
     return {
+      zone, readings,
       line: q.line, positionMm: q.positionMm, perCm3: 10 ** log10, fromSeebeck: est?.fromSeebeck ?? null, fromSigma: est?.fromSigma ?? null, fromHall,
       hallPerCm3: q.perCm3 ?? null, hallFactor,
       disagree: spread > DISAGREEMENT_DECADES, outOfRange: est?.outOfRange ?? false,
@@ -81,12 +88,13 @@ export function reportMeasurements(caseJson: unknown, sheet: GrowthSheet, zones:
   const hall = hallFactors.length === 0 ? null : hallUsed(options.hallFactor !== undefined ? 'entered' : band ? 'band-model' : 'none', hallFactors);
   const p = problemOf(c, 1e-8);
   const grown = inferred.map((q) => ({ positionFraction: q.positionMm / sheet.lengthMm, log10: Math.log10(q.perCm3) }));
+  const judged = inferred.map((q, i) => ({ ...grown[i]!, readings: q.readings.length, outside: q.readings.filter((r) => r.verdict !== 'within').length }));
   const bands = step.rows.map((r) => ({ zone: r.index, perCm3: r.perCm3, lowPerCm3: r.lowPerCm3, highPerCm3: r.highPerCm3, lowAtBound: r.lowAtBound, highAtBound: r.highAtBound, slope: 0, curvature: 0, lossAtLow: r.lossAtLow, lossAtHigh: r.lossAtHigh }));
   const prediction = predictAsGrown(p, grown, step.current);
   return {
     zones: step.zones,
     points: inferred,
-    verdicts: zoneVerdicts(step.layout, bands, grown),
+    verdicts: zoneVerdicts(step.layout, bands, judged),
     target: { value: step.value, deltaT: step.deltaT, current: step.current },
     hall,
     asGrown: {

@@ -8,19 +8,30 @@ import { runDetailSchema } from '../../shared/api/runs';
 import { familyFromMaterial, propertiesAt, type MaterialInput } from '../../shared/engine';
 import type { GrowthSheet } from '../../shared/growth/growth-sheet';
 import type { MeasurementReport } from '../../shared/growth/measurement-report';
-import { baseUrl, convergedRun, getJsonAs, openBrowser, pageProblems, saveScreenshot, screenshotDir, signInAs, visible, waitForDrawnChart, type BrowserSession } from './browser';
+import { baseUrl, convergedRun, getJsonAs, openBrowser, pageProblems, saveScreenshot, screenshotDir, signInAs, visible, waitForDrawnChart, waitForMail, type BrowserSession } from './browser';
 
 jest.setTimeout(420_000);
 
 /** The zone grown off target on purpose, and by how much (3× the target doping: far above its band). */
 const offZone = 1;
 const offFactor = 3;
+/**
+ * A zone on target on average with one stray position three quarters along it:
+ * S a few per cent above the band's top and σ below its bottom, in the
+ * proportions of a real upload (312 against 246–304 µV/K, 292 against 306–603 S/cm).
+ */
+const strayZone = 2;
 
-/** POST JSON with the session's cookie and the app's Origin (writes must carry it). */
+/** Where the stray position lies (mm), and its line in the file (the last row). */
+function strayPoint(sheet: GrowthSheet, zones: number): { mm: number; seebeck: number; sigma: number } {
+  const zone = sheet.steps.find((s) => s.zones === zones)!.rows[strayZone]!;
+  return { mm: Number((zone.startMm + 0.75 * (zone.endMm - zone.startMm)).toFixed(3)), seebeck: zone.seebeckBandUvK[1] * (312 / 304), sigma: zone.sigmaBandSCm[0] * (292 / 306) };
+}
+
 /**
  * Room-temperature S (µV/K) and σ (S/cm) every 0.1 mm along the leg, from
  * the family at each zone's target doping, with one zone grown `offFactor`
- * times too heavily doped.
+ * times too heavily doped, and the stray position as the file's last row.
  */
 function measurementsCsv(sheet: GrowthSheet, zones: number, material: MaterialInput): string {
   const step = sheet.steps.find((s) => s.zones === zones)!;
@@ -31,6 +42,8 @@ function measurementsCsv(sheet: GrowthSheet, zones: number, material: MaterialIn
     const at = propertiesAt(family, step.rows[k]!.perCm3 * (k === offZone ? offFactor : 1), sheet.measureTemperature);
     lines.push(`${mm.toFixed(2)},${(at.seebeck * 1e6).toFixed(2)},${(at.sigma / 100).toFixed(3)}`);
   }
+  const stray = strayPoint(sheet, zones);
+  lines.push(`${stray.mm},${stray.seebeck.toFixed(2)},${stray.sigma.toFixed(3)}`);
   return `${lines.join('\n')}\n`;
 }
 
@@ -148,6 +161,21 @@ describe('growth hand-off in a real browser: release, print, grow, measure, judg
     // The sheet says what its zones and bands were computed with (this demo design: ideal contacts, none).
     expect(await visible(page.getByTestId('sheet-fact-ends')).innerText()).toMatch(/Computed with\s+ideal contacts \(0\sµΩ·cm²\), no parasitic heat/);
 
+    // On paper the zone diagram keeps its doping shading, as its caption says, printed exactly.
+    await page.emulateMedia({ media: 'print' });
+    const fills = await page.getByTestId('zone-diagram').locator('[data-testid^="zone-box-"]').evaluateAll((boxes) =>
+      boxes.map((b) => { const st = getComputedStyle(b); return { fill: st.backgroundColor, exact: st.getPropertyValue('print-color-adjust') }; }));
+    expect(fills).toHaveLength(rows.length);
+    for (const f of fills) expect(f).toEqual({ fill: expect.stringMatching(/^rgb\(/), exact: 'exact' });
+    // Higher target doping, darker shade (the ramp reads in black and white too).
+    const grey = (rgb: string) => { const [r, g, b] = rgb.match(/\d+/g)!.map(Number); return 0.2126 * r! + 0.7152 * g! + 0.0722 * b!; };
+    const byDoping = rows.map((r, i) => ({ n: r.perCm3, grey: grey(fills[i]!.fill) })).sort((a, b) => a.n - b.n);
+    for (let i = 1; i < byDoping.length; i += 1) expect(byDoping[i]!.grey).toBeLessThanOrEqual(byDoping[i - 1]!.grey);
+    expect(await visible(page.getByTestId('zone-diagram')).innerText()).toMatch(/Shading follows the target doping/);
+    await visible(page.getByTestId('zone-diagram')).scrollIntoViewIfNeeded();
+    await saveScreenshot(page, 'growth-sheet-print-media-desktop');
+    // Back to no emulation: page.pdf() then prints with the print media again.
+    await page.emulateMedia({ media: null });
     for (const format of ['A4', 'Letter'] as const) {
       const pdf = await page.pdf({ format });
       expect(pageCount(pdf)).toBe(1);
@@ -203,6 +231,23 @@ describe('growth hand-off in a real browser: release, print, grow, measure, judg
     }
     expect(await visible(page.getByTestId('order-timeline')).innerText()).toMatch(/Accepted → Growing[\s\S]*Greta Moreau[\s\S]*Bridgman run/);
 
+    // Grown, nothing uploaded: "Mark as measured" is there but disabled, and says why, at both widths.
+    for (const size of ['phone', 'desktop'] as const) {
+      const p = size === 'desktop' ? page : await grower.newPage('phone');
+      if (size === 'phone') await p.goto(`${baseUrl}/growth/${orderId}`);
+      const mark = visible(p.getByRole('button', { name: 'Mark as measured' }));
+      await mark.waitFor({ timeout: 30_000 });
+      expect(await mark.isDisabled()).toBe(true);
+      expect(await visible(p.getByTestId('advance-blocker')).innerText()).toMatch(/No measurements yet[\s\S]*opens once the as-grown measurements are uploaded/);
+      await visible(p.getByTestId('advance-order')).scrollIntoViewIfNeeded();
+      await saveScreenshot(p, `growth-measured-disabled-${size}`);
+      if (size === 'phone') await p.close();
+    }
+    // The API refuses the same step, naming what is missing.
+    const early = await grower.context.request.put(`${baseUrl}/api/growth-orders/${orderId}/state`, { data: { state: 'measured' }, headers: { Origin: baseUrl } });
+    expect(early.status()).toBe(409);
+    expect(((await early.json()) as { errors: Array<{ field: string }> }).errors[0]!.field).toBe('measurements');
+
     const detail = await orderDetail(grower, orderId);
     const run = runDetailSchema.parse(await getJsonAs(physicist, `/api/runs/${runId}`));
     const csv = measurementsCsv(detail.sheet as unknown as GrowthSheet, detail.order.zones, (run.case as { material: MaterialInput }).material);
@@ -225,6 +270,7 @@ describe('growth hand-off in a real browser: release, print, grow, measure, judg
     const verdict = visible(page.getByTestId(`verdict-${offZone + 1}`));
     await verdict.waitFor({ timeout: 60_000 });
     expect(await verdict.innerText()).toMatch(/Above band/);
+    expect(await visible(page.getByRole('button', { name: 'Mark as measured' })).isDisabled()).toBe(false);
     await visible(page.getByRole('button', { name: 'Mark as measured' })).click();
     await visible(page.getByTestId('order-state')).filter({ hasText: 'Measured' }).waitFor({ timeout: 20_000 });
     await visible(page.getByTestId('measurement-report')).scrollIntoViewIfNeeded();
@@ -235,7 +281,13 @@ describe('growth hand-off in a real browser: release, print, grow, measure, judg
   it('the physicist sees the predicted ΔT of the as-grown leg and the flagged zone', async () => {
     const detail = await orderDetail(physicist, orderId);
     const report = detail.measurements[0]!.report as unknown as MeasurementReport;
-    expect(report.verdicts.map((v) => v.verdict)).toEqual(report.verdicts.map((v) => (v.zone === offZone ? 'high' : 'within')));
+    expect(report.verdicts.map((v) => v.verdict)).toEqual(report.verdicts.map((v) => (v.zone === offZone ? 'high' : v.zone === strayZone ? 'stray' : 'within')));
+    const stray = strayPoint(detail.sheet as unknown as GrowthSheet, detail.order.zones);
+    const flagged = report.points.filter((q) => q.readings.some((r) => r.verdict !== 'within'));
+    // Every position of the off zone, and the stray one — no other.
+    expect(flagged.filter((q) => q.zone !== offZone).map((q) => q.positionMm)).toEqual([stray.mm]);
+    const strayLine = flagged.find((q) => q.zone === strayZone)!.line;
+    expect(report.verdicts[strayZone]).toMatchObject({ readingsOutside: 2 });
     expect(report.asGrown.atDesignCurrent.deltaT).toBeLessThan(report.target.deltaT);
     for (const size of ['desktop', 'phone'] as const) {
       const page = await physicist.newPage(size);
@@ -244,26 +296,68 @@ describe('growth hand-off in a real browser: release, print, grow, measure, judg
       await predicted.waitFor({ timeout: 60_000 });
       expect(await predicted.innerText()).toContain(`${Number(report.asGrown.atDesignCurrent.deltaT.toPrecision(3))}\u202fK`);
       expect(await visible(page.getByTestId('report-target')).innerText()).toContain(`${Number(report.target.deltaT.toPrecision(3))}\u202fK`);
-      expect(await visible(page.getByTestId('report-summary')).innerText()).toMatch(new RegExp(`zone ${offZone + 1} above band`));
+      expect(await visible(page.getByTestId('report-summary')).innerText()).toMatch(new RegExp(`zone ${offZone + 1} above band, zone ${strayZone + 1} readings outside band`));
       await visible(page.getByTestId('measurement-report')).scrollIntoViewIfNeeded();
       await saveScreenshot(page, `growth-report-${size}`);
+      // The stray zone does not read "Within band", and says how many readings are out.
+      const zoneCard = visible(page.getByTestId(`verdict-${strayZone + 1}`));
+      expect(await zoneCard.innerText()).toMatch(new RegExp(`Readings outside band[\\s\\S]*2 of ${report.verdicts[strayZone]!.readings} readings outside its band`));
+      expect(await zoneCard.innerText()).not.toMatch(/Within band/);
+      // The stray position's row: each reading, its band, and the verdict in words.
+      const row = visible(page.getByTestId(`reading-row-${strayLine}`));
+      await row.scrollIntoViewIfNeeded();
+      const rowText = await row.innerText();
+      expect(rowText).toMatch(/Outside band: S above, σ below/);
+      expect(rowText).toMatch(/above band [\d.]+–[\d.]+\sµV\/K[\s\S]*below band [\d.]+–[\d.]+\sS\/cm/);
+      await saveScreenshot(page, `growth-report-readings-${size}`);
+      if (size === 'desktop') {
+        // The report's CSV link carries the same verdict per position.
+        const href = await visible(page.getByTestId('report-csv')).getAttribute('href');
+        const csv = await (await physicist.context.request.get(new URL(href!, baseUrl).toString())).text();
+        const strayRow = csv.split('\n').find((l) => l.startsWith(`${strayLine},`))!;
+        expect(strayRow).toMatch(/above band,.*below band,.*outside band \(2 of 2 readings\)$/);
+      }
       const plot = visible(page.getByTestId('report-plot'));
       await plot.scrollIntoViewIfNeeded();
-      // The as-grown series is drawn in the warm colour.
+      // The as-grown series is drawn in the warm colour; positions with a reading out of band have a marker and a legend entry of their own.
       expect(await waitForDrawnChart(page, plot, 40)).toBeGreaterThanOrEqual(40);
+      expect(await plot.innerText()).toMatch(/Reading outside its band/);
+      expect(await plot.locator('[role="img"]').first().getAttribute('aria-label')).toContain(`${report.points.length} measured positions, ${flagged.length} of them with a reading outside its band`);
       await saveScreenshot(page, `growth-report-plot-${size}`);
       await page.close();
     }
   });
 
-  it('the physicist rejects the piece with a reason, which closes the order', async () => {
+  it('closing has no verdict chosen, at phone and desktop widths', async () => {
+    for (const size of ['phone', 'desktop'] as const) {
+      const page = await physicist.newPage(size);
+      await page.goto(`${baseUrl}/growth/${orderId}`);
+      const close = visible(page.getByTestId('close-order'));
+      await close.waitFor({ timeout: 30_000 });
+      for (const id of ['verdict-approved', 'verdict-rejected']) expect(await visible(page.getByTestId(id)).getAttribute('aria-checked')).toBe('false');
+      expect(await page.getByRole('button', { name: /^Close as/ }).count()).toBe(0);
+      expect(await visible(page.getByRole('button', { name: 'Close the order' })).isDisabled()).toBe(true);
+      expect(await close.innerText()).toMatch(/Choose Approve or Reject first/);
+      await close.scrollIntoViewIfNeeded();
+      await saveScreenshot(page, `growth-close-unchosen-${size}`);
+      await page.close();
+    }
+  });
+
+  it('the physicist rejects the piece with a reason, which closes the order and mails the grower', async () => {
     const page = await physicist.newPage('desktop');
     await page.goto(`${baseUrl}/growth/${orderId}`);
     const close = visible(page.getByTestId('close-order'));
     await close.waitFor({ timeout: 30_000 });
     await visible(page.getByTestId('verdict-rejected')).click();
-    await visible(page.getByTestId('field-close-reason')).fill(`Zone ${offZone + 1} over-doped; regrow with less dopant.`);
+    const reason = `Zone ${offZone + 1} over-doped; regrow with less dopant.`;
+    await visible(page.getByTestId('field-close-reason')).fill(reason);
     await visible(page.getByRole('button', { name: 'Close as rejected' })).click();
+    const confirm = visible(page.getByTestId('close-confirm'));
+    expect(await confirm.innerText()).toMatch(/Close the order as rejected\?[\s\S]*closes for good[\s\S]*e-mailed/);
+    await close.scrollIntoViewIfNeeded();
+    await saveScreenshot(page, 'growth-close-confirm-desktop');
+    await visible(page.getByRole('button', { name: 'Yes, close as rejected' })).click();
     await visible(page.getByTestId('order-state')).filter({ hasText: 'Rejected' }).waitFor({ timeout: 20_000 });
     expect(await visible(page.getByTestId('close-reason')).innerText()).toMatch(/over-doped; regrow/);
     expect(await page.getByRole('button', { name: /Mark as|Accept the order|Start growing/ }).count()).toBe(0);
@@ -272,6 +366,25 @@ describe('growth hand-off in a real browser: release, print, grow, measure, judg
     await visible(page.getByTestId('order-timeline')).scrollIntoViewIfNeeded();
     await saveScreenshot(page, 'growth-closed-desktop');
     await page.close();
+
+    // The grower is e-mailed the verdict and the reason; the admin's outbox shows it, at both widths.
+    const admin = await openBrowser();
+    try {
+      await signInAs(admin, 'ada@northlight.example');
+      const mail = await waitForMail(admin, 'greta@northlight.example', new RegExp(`^Growth order ${batch} rejected$`), 30_000);
+      expect(mail.text).toContain(`Reason: ${reason}`);
+      expect(mail.text).toContain(`/growth/${orderId}`);
+      for (const size of ['phone', 'desktop'] as const) {
+        const outbox = await admin.newPage(size);
+        await outbox.goto(`${baseUrl}/outbox`);
+        await visible(outbox.getByText(`Growth order ${batch} rejected`)).waitFor({ timeout: 30_000 });
+        await saveScreenshot(outbox, `growth-verdict-mail-${size}`);
+        await outbox.close();
+      }
+      expect(pageProblems(admin)).toEqual([]);
+    } finally {
+      await admin.close();
+    }
   });
 
   it('raised no uncaught errors in the page', () => {

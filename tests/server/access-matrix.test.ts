@@ -83,6 +83,7 @@ const policy: Record<string, 'public' | Role[]> = {
   'POST /growth-orders/:id/measurements': ['admin', 'grower'],
   'GET /growth-orders/:id/sheet.csv': all.slice(),
   'GET /growth-orders/:id/sheet.json': all.slice(),
+  'GET /growth-orders/:id/report.csv': all.slice(),
   'GET /modules': runReaders,
   'POST /modules': designers,
   'GET /modules/:id': runReaders,

@@ -122,6 +122,13 @@ describe('a run, its export and its growth sheets', () => {
       expect(csv.comments[0]![0]).toBe('# Frostgrade growth sheet for batch');
       expectCellOf(csv.comments[0]!, oneLine(batch));
       expect(csv.rows.map((r) => r[0])).toEqual(['1', '2']);
+      // The measurement report of the same order carries the batch the same way, and each position's verdict in words.
+      const up = await grower.post(`/api/growth-orders/${id}/measurements`).attach('file', Buffer.from('position_mm,seebeck_uV_per_K\n0.4,200\n1.2,180\n'), 'as-grown.csv');
+      expect(up.status).toBe(201);
+      const report = readSafeCsv((await grower.get(`/api/growth-orders/${id}/report.csv`)).text, ['within band', 'above band', 'below band', 'outside band (1 of 1 readings)']);
+      expect(report.comments[0]![0]).toBe('# Frostgrade as-grown measurement report for batch');
+      expectCellOf(report.comments[0]!, oneLine(batch));
+      expect(report.rows.map((r) => r.at(-1))).toEqual(report.rows.map(() => expect.stringMatching(/^(within band|outside band \(1 of 1 readings\))$/)));
     }
   });
 });

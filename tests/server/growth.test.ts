@@ -2,7 +2,7 @@ import { growthOrderDetailSchema, growthSheetSchema, measurementReportSchema } f
 import { familyFromMaterial, propertiesAt, type MaterialInput } from '../../shared/engine';
 import type { GrowthSheet } from '../../shared/growth/growth-sheet';
 import type { MeasurementReport } from '../../shared/growth/measurement-report';
-import { demo, eventually, openContext, signedIn, type TestContext } from './context';
+import { databaseNow, demo, eventually, mailTo, openContext, signedIn, type TestContext } from './context';
 
 let ctx: TestContext;
 jest.setTimeout(120_000);
@@ -64,6 +64,9 @@ it('release → sheet (K = 1 is the best uniform leg) → grower steps → measu
     const at = propertiesAt(family, step.rows[k]!.perCm3 * (k === 1 ? 3 : 1), 300);
     lines.push(`${mm.toFixed(2)},${(at.seebeck * 1e6).toFixed(2)},${(at.sigma / 100).toFixed(3)}`);
   }
+  // Measured needs an upload: refused, naming what is missing, before any is in.
+  const early = await grower.put(`/api/growth-orders/${orderId}/state`).send({ state: 'measured' });
+  expect([early.status, early.body.errors?.[0]?.field, early.body.message]).toEqual([409, 'measurements', expect.stringMatching(/upload the as-grown measurements first/)]);
   const bad = await grower.post(`/api/growth-orders/${orderId}/measurements`).attach('file', Buffer.from('position_mm,seebeck_uV_per_K\n0.5,abc'), 'm.csv');
   expect(bad.status).toBe(400);
   expect(bad.body.errors[0].field).toBe('file:line 2:seebeck_uV_per_K');
@@ -73,13 +76,34 @@ it('release → sheet (K = 1 is the best uniform leg) → grower steps → measu
   const report = up.body.report as MeasurementReport;
   expect(report.verdicts.map((v) => v.verdict)).toEqual(['within', 'high', 'within']);
   expect(report.asGrown.atDesignCurrent.deltaT).toBeLessThan(report.target.deltaT);
+  // The report as CSV: every position with its readings, bands and verdict; the off zone's positions read outside.
+  const reportCsv = await physicist.get(`/api/growth-orders/${orderId}/report.csv`);
+  expect(reportCsv.status).toBe(200);
+  const csvRows = reportCsv.text.split('\n').filter((l) => /^\d/.test(l)).map((l) => l.split(','));
+  const csvHeader = reportCsv.text.split('\n').find((l) => l.startsWith('line,'))!.split(',');
+  expect(csvHeader).toEqual(expect.arrayContaining(['seebeck_verdict', 'sigma_verdict', 'verdict']));
+  expect(csvRows).toHaveLength(report.points.length);
+  const col = (name: string) => csvHeader.indexOf(name);
+  for (const r of csvRows) {
+    const zone = Number(r[col('zone')]);
+    expect([r[col('seebeck_verdict')], r[col('verdict')]]).toEqual(zone === 2 ? ['below band', 'outside band (2 of 2 readings)'] : ['within band', 'within band']);
+  }
+  expect(reportCsv.text).toMatch(/^# zone verdicts,zone 1 within band \(0 of \d+ readings outside\); zone 2 above band \(\d+ of \d+ readings outside\); zone 3 within band/m);
   const physicistMail = await eventually(async () => (await ctx.ds.query('SELECT subject, text FROM captured_mail WHERE $1 = ANY(mail_to) AND subject LIKE $2', [demo.physicist, `%Measurements back for batch ${batch}%`]))[0] as { subject: string; text: string } | undefined);
   expect(physicistMail.text).toMatch(/zone 2 \(high\)/);
 
   expect((await grower.put(`/api/growth-orders/${orderId}/state`).send({ state: 'measured' })).status).toBe(200);
   expect((await physicist.post(`/api/growth-orders/${orderId}/close`).send({ verdict: 'rejected', reason: '' })).status).toBe(400);
+  const beforeClose = await databaseNow(ctx);
   const closed = growthOrderDetailSchema.parse((await physicist.post(`/api/growth-orders/${orderId}/close`).send({ verdict: 'rejected', reason: 'zone 2 overdoped; regrow' })).body);
   expect(closed.order.state).toBe('rejected');
+  // The grower is told by a worker, with the reason and a link.
+  const verdictMail = await mailTo(ctx, demo.grower, new RegExp(`^Growth order ${batch} rejected$`), { after: beforeClose });
+  expect(verdictMail.text).toMatch(/Piet Okafor rejected growth order .*\n\nReason: zone 2 overdoped; regrow\n/);
+  expect(verdictMail.text).toContain(`/growth/${orderId}`);
+  // Nobody else in the team is mailed the verdict (the physicist who closed it, the viewer).
+  const others: Array<{ n: number }> = await ctx.ds.query('SELECT count(*)::int AS n FROM captured_mail WHERE subject = $1 AND NOT ($2 = ANY(mail_to))', [`Growth order ${batch} rejected`, demo.grower]);
+  expect(others[0]!.n).toBe(0);
   expect(closed.timeline.map((e) => e.toState ?? e.kind)).toEqual(['requested', 'accepted', 'growing', 'grown', 'measured', 'measured', 'rejected']);
   expect(closed.timeline.map((e) => e.by)).toContain('Greta Moreau');
   // A closed order is a record: no step, upload, sheet change or second verdict; each 409 names `state`.
@@ -184,6 +208,14 @@ it('the sheet\'s bands hold jointly and carry a yield; the grower changes the sc
   }
   const stored = growthOrderDetailSchema.parse((await physicist.get(`/api/growth-orders/${orderId}`)).body);
   expect(stored.measurements).toHaveLength(2);
+  // Hall readings are judged against the zone's doping band too: on target, every one inside it.
+  expect(modelReport.points.every((q) => q.readings.length === 1 && q.readings[0]!.kind === 'hall' && q.readings[0]!.verdict === 'within')).toBe(true);
+  // Approved with a reason: the grower hears that too.
+  expect((await grower.put(`/api/growth-orders/${orderId}/state`).send({ state: 'measured' })).status).toBe(200);
+  const beforeApproval = await databaseNow(ctx);
+  expect((await physicist.post(`/api/growth-orders/${orderId}/close`).send({ verdict: 'approved', reason: 'every zone within band' })).status).toBe(200);
+  const approvedMail = await mailTo(ctx, demo.grower, /^Growth order Y-\d+ approved$/, { after: beforeApproval });
+  expect(approvedMail.text).toMatch(/Reason: every zone within band/);
   expect(stored.measurements.map((m) => measurementReportSchema.parse(m.report).hall?.source).sort()).toEqual(['band-model', 'entered']);
   expect(material.kind).toBe('band');
 });

@@ -89,15 +89,46 @@ describe('GrowthOrderScreen: the report', () => {
     expect(screen.getByTestId('report-target')).toHaveTextContent(k(r.target.deltaT));
     expect(screen.getByTestId('report-best-current')).toHaveTextContent(k(r.asGrown.atBestCurrent.deltaT));
     for (const v of r.verdicts) {
-      const word = { within: 'Within band', high: 'Above band', low: 'Below band', unmeasured: 'Not measured' }[v.verdict];
-      expect(screen.getByTestId(`verdict-${v.zone + 1}`)).toHaveTextContent(new RegExp(`Zone ${v.zone + 1}.*${word}`));
+      const word = { within: 'Within band', high: 'Above band', low: 'Below band', stray: 'Readings outside band', unmeasured: 'Not measured' }[v.verdict];
+      expect(screen.getByTestId(`verdict-${v.zone + 1}`)).toHaveTextContent(new RegExp(`Zone ${v.zone + 1}.*${word}.*${v.readingsOutside ? `${v.readingsOutside} of ${v.readings} readings outside` : `all ${v.readings} readings inside`} its band`));
     }
+    // Zone 3's mean is on target, but one reading is not: it does not read "Within band".
+    expect(screen.getByTestId('verdict-3')).not.toHaveTextContent(/Within band/);
+    expect(screen.getByTestId('verdict-readings-3')).toHaveTextContent('1 of 2 readings outside its band');
     const flagged = r.verdicts.filter((v) => v.verdict === 'high').map((v) => `zone ${v.zone + 1} above band`);
     expect(screen.getByTestId('report-summary')).toHaveTextContent(new RegExp(`Zones out of tolerance.*${flagged.join('.*')}`));
     expect(screen.getByTestId('report-warnings')).toHaveTextContent(new RegExp(r.warnings[0].replace(/[.()]/g, (c) => `\\${c}`)));
     expect(within(screen.getByTestId('report-plot')).getByTestId('series-plot')).toHaveTextContent(
-      new RegExp(`Carrier concentration n \\(cm⁻³\\) vs Position from the cold end x \\(mm\\).*Target:${2 * r.zones}.*As grown \\(inferred\\):${r.points.length}\\+${r.points.length}`),
+      new RegExp(`Carrier concentration n \\(cm⁻³\\) vs Position from the cold end x \\(mm\\).*Target:${2 * r.zones}.*As grown \\(inferred\\):${r.points.length}\\+${r.points.length}.*Reading outside its band:0\\+2`),
     );
+  });
+});
+
+describe('GrowthOrderScreen: each measurement against its band', () => {
+  it('lists every position with each reading, its band and a verdict in words; a position outside its band is flagged', async () => {
+    show(withReport('measured'), 'grower');
+    const stray = await screen.findByTestId('reading-row-4');
+    expect(stray).toHaveTextContent(/1\.8\smm.*312\sµV\/K.*above band 246–304\sµV\/K.*310\sS\/cm.*within band 306–603\sS\/cm/);
+    expect(stray).toHaveTextContent(/Outside band: S above/);
+    expect(screen.getByTestId('reading-row-3')).toHaveTextContent(/Outside band: S below, σ above/);
+    expect(screen.getByTestId('reading-row-2')).toHaveTextContent(/Within band/);
+    expect(screen.getByTestId('reading-row-2')).not.toHaveTextContent(/Outside/);
+    expect(screen.getByTestId('report-summary')).toHaveTextContent(/2 of 3 positions have a reading outside its zone's band/);
+    expect(screen.getByTestId('report-csv')).toHaveTextContent('Report CSV');
+  });
+
+  it('a report stored before readings were judged says it was judged zone by zone only', async () => {
+    const old = withReport('measured');
+    const r = report();
+    old.measurements[0]!.report = {
+      ...r,
+      points: r.points.map(({ zone: _zone, readings: _readings, ...p }) => p),
+      verdicts: r.verdicts.map(({ readings: _r, readingsOutside: _o, ...v }) => ({ ...v, verdict: v.verdict === 'stray' ? 'within' : v.verdict })),
+    } as unknown as Record<string, unknown>;
+    show(old, 'physicist');
+    expect(await screen.findByTestId('report-summary')).toHaveTextContent(/Judged zone by zone only: this upload predates the check of each reading/);
+    expect(screen.getByTestId('reading-row-4')).toHaveTextContent(/1\.8\smm/);
+    expect(screen.queryByTestId('verdict-readings-3')).toBeNull();
   });
 });
 
@@ -133,15 +164,61 @@ describe('GrowthOrderScreen: actions', () => {
     expect(screen.getByRole('button', { name: 'Start growing' })).toBeOnTheScreen();
   });
 
-  it('the physicist must give a reason to close, then rejects', async () => {
+  it('closing has no verdict chosen: the physicist picks one, gives a reason, confirms, then it closes', async () => {
     const { requests } = show(detail('grown'), 'physicist', { [`POST ${orderUrl}/close`]: () => ok(detail('rejected')) });
-    await act(async () => fireEvent.press(await screen.findByRole('button', { name: 'Close as rejected' })));
-    expect(screen.getByTestId('error-close-reason')).toHaveTextContent(/Give a reason/);
+    expect(await screen.findByTestId('close-choose')).toHaveTextContent('Choose Approve or Reject first.');
+    expect(screen.getByTestId('verdict-rejected')).not.toBeChecked();
+    expect(screen.getByTestId('verdict-approved')).not.toBeChecked();
+    expect(button(/^Close as/)).toBeNull();
+    expect(button('Close the order')).toBeDisabled();
+    fireEvent.press(screen.getByTestId('verdict-rejected'));
+    await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Close as rejected' })));
+    expect(screen.getByTestId('error-close-reason')).toHaveTextContent(/Give a reason for rejecting/);
     expect(requests.some((r) => r.method === 'POST')).toBe(false);
     fireEvent.changeText(screen.getByTestId('field-close-reason'), 'Boule cracked in zone 1.');
     await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Close as rejected' })));
+    // One more question before an irreversible step; "Keep" goes back without sending.
+    expect(screen.getByTestId('close-confirm')).toHaveTextContent(/Close the order as rejected\?.*closes for good.*e-mailed/);
+    expect(requests.some((r) => r.method === 'POST')).toBe(false);
+    await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Yes, close as rejected' })));
     expect(requests.find((r) => r.method === 'POST')).toMatchObject({ body: { verdict: 'rejected', reason: 'Boule cracked in zone 1.' } });
     expect(await screen.findByTestId('close-reason')).toBeOnTheScreen();
+  });
+
+  it('a measured order is not pre-set to approve either; approving asks for a reason and confirmation too', async () => {
+    const { requests } = show(withReport('measured'), 'physicist', { [`POST ${orderUrl}/close`]: () => ok(detail('rejected')) });
+    expect(await screen.findByTestId('close-choose')).toBeOnTheScreen();
+    expect(screen.getByTestId('verdict-approved')).not.toBeChecked();
+    fireEvent.press(screen.getByTestId('verdict-approved'));
+    expect(screen.getByTestId('verdict-approved')).toBeChecked();
+    fireEvent.changeText(screen.getByTestId('field-close-reason'), 'Within band; go ahead.');
+    await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Close as approved' })));
+    await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Keep' })));
+    expect(requests.some((r) => r.method === 'POST')).toBe(false);
+    await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Close as approved' })));
+    await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Yes, close as approved' })));
+    expect(requests.find((r) => r.method === 'POST')).toMatchObject({ body: { verdict: 'approved', reason: 'Within band; go ahead.' } });
+  });
+
+  it('"Mark as measured" stays disabled until a measurement is uploaded, and says why', async () => {
+    show(detail('grown'), 'grower');
+    expect(await screen.findByRole('button', { name: 'Mark as measured' })).toBeDisabled();
+    expect(screen.getByTestId('advance-blocker')).toHaveTextContent(/No measurements yet.*opens once the as-grown measurements are uploaded/);
+  });
+
+  it('"Mark as measured" is enabled once an upload is in', async () => {
+    show(withReport('grown'), 'grower');
+    expect(await screen.findByRole('button', { name: 'Mark as measured' })).not.toBeDisabled();
+    expect(screen.queryByTestId('advance-blocker')).toBeNull();
+  });
+
+  it('"Start growing" waits for the growth sheet', async () => {
+    const computing = detail('accepted');
+    computing.order = { ...computing.order, sheetStatus: 'computing' };
+    computing.sheet = null;
+    show(computing, 'grower');
+    expect(await screen.findByRole('button', { name: 'Start growing' })).toBeDisabled();
+    expect(screen.getByTestId('advance-blocker')).toHaveTextContent(/Growth sheet not ready/);
   });
 
   it('a change refused because the order was closed meanwhile reloads it: the verdict shows, the actions go', async () => {

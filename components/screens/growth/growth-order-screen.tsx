@@ -62,7 +62,7 @@ function OrderPage({ detail }: { detail: GrowthOrderDetail }) {
   return (
     <ScreenFrame title={`Batch ${order.batch}`} subtitle={`${order.designName} · ${dueText(order)} · released by ${order.releasedBy}`} back={back}>
       <OrderOverview order={order} />
-      <AdvanceOrder orderId={order.id} state={order.state} measured={measured} />
+      <AdvanceOrder orderId={order.id} state={order.state} sheetStatus={order.sheetStatus} measured={measured} />
       {reportFirst ? measurements : null}
       {reportFirst ? <CloseOrder orderId={order.id} state={order.state} /> : null}
       <SheetBlock detail={detail} />

@@ -2,10 +2,12 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { GrowthOrderDetail } from '@/shared/api/growth';
 import { readReport, type SheetView } from '@/shared/api/growth-documents';
+import { measurementReportCsvUrl } from '@/components/api/growth';
 import { useRole } from '@/components/auth/session';
 import { formatDateTime } from '@/components/format/date';
 import { spacing } from '@/components/theme';
 import { Chip } from '@/components/ui/chip';
+import { DownloadLink } from '@/components/ui/download-link';
 import { Section } from '@/components/ui/form-section';
 import { Notice } from '@/components/ui/notice';
 import { AppText } from '@/components/ui/text';
@@ -38,7 +40,10 @@ export function MeasurementsSection({ detail, sheet }: MeasurementsSectionProps)
         </View>
       ) : null}
       {picked ? (
-        <AppText variant="caption" tone="muted" testID="report-provenance">{`Uploaded by ${picked.uploadedBy} · ${formatDateTime(picked.uploadedAt)} · measured at ${kelvin(picked.temperature)}`}</AppText>
+        <View style={styles.provenance}>
+          <AppText variant="caption" tone="muted" testID="report-provenance">{`Uploaded by ${picked.uploadedBy} · ${formatDateTime(picked.uploadedAt)} · measured at ${kelvin(picked.temperature)}`}</AppText>
+          {report ? <DownloadLink label="Report CSV" url={measurementReportCsvUrl(order.id, picked.id)} testID="report-csv" /> : null}
+        </View>
       ) : null}
       {picked && report && sheet ? <MeasurementReportView report={report} rows={rows} lengthMm={sheet.lengthMm} /> : null}
       {picked && !report ? (
@@ -52,4 +57,5 @@ export function MeasurementsSection({ detail, sheet }: MeasurementsSectionProps)
 
 const styles = StyleSheet.create({
   uploads: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.xs },
+  provenance: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: spacing.sm },
 });

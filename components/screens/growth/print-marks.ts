@@ -10,3 +10,9 @@ export const screenOnlyMark = { dataSet: { print: 'hide' } } as const;
 
 /** On paper only: e.g. the order's facts that the page header shows on screen. */
 export const paperOnlyMark = { dataSet: { print: 'only' } } as const;
+
+/**
+ * A fill that carries meaning on paper (the zone diagram's doping shading):
+ * kept, and printed exactly, where every other background is dropped.
+ */
+export const keepFillMark = { dataSet: { printFill: 'keep' } } as const;

@@ -9,7 +9,9 @@ const styleId = 'frostgrade-sheet-print';
  * are otherwise clipped to the window), every sibling along the way — the
  * navigation, the page header, other sections — is not printed, and inside
  * the sheet what is marked screen-only (buttons, links, settings) goes.
- * Colours become black on white; borders carry the structure.
+ * Colours become black on white; borders carry the structure. Fills that
+ * carry meaning (the zone diagram's doping shading, `data-print-fill`) stay,
+ * printed exactly, and read in black and white too: the ramp darkens with doping.
  */
 export const sheetPrintCss = `
 @media print {
@@ -23,7 +25,9 @@ export const sheetPrintCss = `
   *:has([data-print-sheet]) > :not(:has([data-print-sheet])):not([data-print-sheet]) { display: none !important; }
   [data-print-sheet] { width: 100% !important; max-width: none !important; border: 0 !important; padding: 0 !important; gap: 10px !important; }
   [data-print-sheet] [data-print="hide"] { display: none !important; }
-  [data-print-sheet] * { color: #000 !important; border-color: #000 !important; background-color: transparent !important; box-shadow: none !important; }
+  [data-print-sheet] * { color: #000 !important; border-color: #000 !important; box-shadow: none !important; }
+  [data-print-sheet] *:not([data-print-fill]) { background-color: transparent !important; }
+  [data-print-sheet] [data-print-fill] { -webkit-print-color-adjust: exact !important; print-color-adjust: exact !important; }
   [data-print-sheet] [role="row"], [data-print-sheet] [data-testid^="zone-row-"] { break-inside: avoid; }
 }
 @media screen {

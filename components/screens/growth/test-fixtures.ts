@@ -54,19 +54,22 @@ export function order(overrides: Partial<GrowthOrderDto> = {}): GrowthOrderDto {
   };
 }
 
-/** A report with zone 2 grown above its band. */
+/** A report with zone 2 grown above its band, and zone 3 on target on average with one Seebeck reading above its band. */
 export function report(): ReportView {
   return {
     zones: 3,
     points: [
-      { line: 2, positionMm: 0.5, perCm3: 3.0e19, fromSeebeck: 2.9e19, fromSigma: 3.1e19, fromHall: null, disagree: false, outOfRange: false },
-      { line: 3, positionMm: 1.3, perCm3: 3.6e19, fromSeebeck: 2.6e19, fromSigma: 5.0e19, fromHall: null, disagree: true, outOfRange: false },
-      { line: 4, positionMm: 1.8, perCm3: 3.0e18, fromSeebeck: 3.0e18, fromSigma: 3.0e18, fromHall: null, disagree: false, outOfRange: false },
+      { line: 2, positionMm: 0.5, perCm3: 3.0e19, fromSeebeck: 2.9e19, fromSigma: 3.1e19, fromHall: null, disagree: false, outOfRange: false, zone: 0,
+        readings: [{ kind: 'seebeck', value: 161, low: 150, high: 175, verdict: 'within' }, { kind: 'sigma', value: 1100, low: 900, high: 1300, verdict: 'within' }] },
+      { line: 3, positionMm: 1.3, perCm3: 3.6e19, fromSeebeck: 2.6e19, fromSigma: 5.0e19, fromHall: null, disagree: true, outOfRange: false, zone: 1,
+        readings: [{ kind: 'seebeck', value: 150, low: 170, high: 210, verdict: 'low' }, { kind: 'sigma', value: 1800, low: 700, high: 1200, verdict: 'high' }] },
+      { line: 4, positionMm: 1.8, perCm3: 3.0e18, fromSeebeck: 3.0e18, fromSigma: 3.0e18, fromHall: null, disagree: false, outOfRange: false, zone: 2,
+        readings: [{ kind: 'seebeck', value: 312, low: 246, high: 304, verdict: 'high' }, { kind: 'sigma', value: 310, low: 306, high: 603, verdict: 'within' }] },
     ],
     verdicts: [
-      { zone: 0, measured: 3.0e19, verdict: 'within', points: 1 },
-      { zone: 1, measured: 3.6e19, verdict: 'high', points: 1 },
-      { zone: 2, measured: 3.0e18, verdict: 'within', points: 1 },
+      { zone: 0, measured: 3.0e19, verdict: 'within', points: 1, readings: 2, readingsOutside: 0 },
+      { zone: 1, measured: 3.6e19, verdict: 'high', points: 1, readings: 2, readingsOutside: 2 },
+      { zone: 2, measured: 3.0e18, verdict: 'stray', points: 1, readings: 2, readingsOutside: 1 },
     ],
     target: { value: 89.3, deltaT: 89.3, current: 3.22 },
     asGrown: { atDesignCurrent: { value: 84.1, deltaT: 84.1, feasible: true }, atBestCurrent: { value: 85.0, deltaT: 85.0, current: 3.4, feasible: true } },

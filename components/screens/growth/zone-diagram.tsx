@@ -6,6 +6,7 @@ import { colors, radii, spacing } from '@/components/theme';
 import { gradeColor } from '@/components/ui/graded-strip';
 import { AppText } from '@/components/ui/text';
 import { mm, zoneName } from './growth-format';
+import { keepFillMark } from './print-marks';
 
 export type ZoneDiagramProps = { rows: SheetZone[]; lengthMm: number };
 
@@ -36,7 +37,8 @@ export function labelRows(positions: number[], widthPx: number): number[] {
 /**
  * The leg as the grower will cut it: a bar from the cold end (0 mm) to the
  * hot end, one box per zone with its number and target doping, boundaries
- * marked in mm underneath. Drawn with views, so it prints as it shows.
+ * marked in mm underneath. Drawn with views, so it prints as it shows —
+ * shading included (`keepFillMark`), as the caption promises.
  */
 export function ZoneDiagram({ rows, lengthMm }: ZoneDiagramProps) {
   const [width, setWidth] = useState(0);
@@ -54,7 +56,7 @@ export function ZoneDiagram({ rows, lengthMm }: ZoneDiagramProps) {
           const share = (r.endMm - r.startMm) / lengthMm;
           const roomy = share * width >= labelledWidth;
           return (
-            <View key={r.index} style={[styles.zone, i < rows.length - 1 && styles.divider, { flex: share, backgroundColor: gradeColor(dopingShade(rows, r.perCm3)) }]} testID={`zone-box-${r.index + 1}`}>
+            <View key={r.index} {...keepFillMark} style={[styles.zone, i < rows.length - 1 && styles.divider, { flex: share, backgroundColor: gradeColor(dopingShade(rows, r.perCm3)) }]} testID={`zone-box-${r.index + 1}`}>
               <AppText variant="label" style={styles.zoneText} numberOfLines={1}>
                 {roomy ? zoneName(r.index) : `${r.index + 1}`}
               </AppText>

@@ -11,8 +11,19 @@ export const verdictLook: Record<ZoneVerdictView['verdict'], Look> = {
   within: { label: 'Within band', glyph: 'check', color: colors.ok, meaning: 'the grown doping is inside the tolerance band' },
   low: { label: 'Below band', glyph: 'minus', color: colors.danger, meaning: 'under-doped: below the band' },
   high: { label: 'Above band', glyph: 'plus', color: colors.danger, meaning: 'over-doped: above the band' },
+  stray: { label: 'Readings outside band', glyph: 'bang', color: colors.danger, meaning: 'the zone’s mean is inside the band, but some of its measurements are not' },
   unmeasured: { label: 'Not measured', glyph: 'ring', color: colors.textMuted, meaning: 'no measured position in this zone' },
 };
+
+/** Every verdict but "within" and "not measured" asks the grower to look. */
+export const isFlagged = (v: ZoneVerdictView) => v.verdict === 'low' || v.verdict === 'high' || v.verdict === 'stray';
+
+/** "1 of 4 readings outside its band"; null on reports stored before readings were judged. */
+export function readingsLine(v: ZoneVerdictView): string | null {
+  if (v.readings === undefined || v.readingsOutside === undefined || v.readings === 0) return null;
+  if (v.readingsOutside === 0) return `all ${v.readings} ${v.readings === 1 ? 'reading' : 'readings'} inside its band`;
+  return `${v.readingsOutside} of ${v.readings} ${v.readings === 1 ? 'reading' : 'readings'} outside its band`;
+}
 
 export type ZoneVerdictsProps = { verdicts: ZoneVerdictView[]; rows: SheetZone[] };
 
@@ -23,7 +34,8 @@ export function ZoneVerdicts({ verdicts, rows }: ZoneVerdictsProps) {
       {verdicts.map((v) => {
         const look = verdictLook[v.verdict];
         const row = rows[v.zone];
-        const flagged = v.verdict === 'low' || v.verdict === 'high';
+        const flagged = isFlagged(v);
+        const readings = readingsLine(v);
         return (
           <View key={v.zone} role="listitem" style={[styles.item, flagged && { borderColor: look.color }]} testID={`verdict-${v.zone + 1}`}>
             <View style={styles.head}>
@@ -38,6 +50,7 @@ export function ZoneVerdicts({ verdicts, rows }: ZoneVerdictsProps) {
             <AppText>
               {v.measured !== null ? `measured ${perCm3(v.measured)} (${v.points} ${v.points === 1 ? 'position' : 'positions'})` : 'no measured position'}
             </AppText>
+            {readings ? <AppText variant={v.readingsOutside ? 'bodyStrong' : 'body'} testID={`verdict-readings-${v.zone + 1}`}>{readings}</AppText> : null}
             {row ? <AppText variant="caption" tone="muted">{`target ${perCm3(row.perCm3)} · band ${bandText(row)}`}</AppText> : null}
           </View>
         );

@@ -18,6 +18,7 @@ export const auditActionLabels: Record<AuditAction, string> = {
   'family-archived': 'Family archived',
   'family-unarchived': 'Family restored',
   'sheet-exported': 'Sheet exported',
+  'report-exported': 'Report exported',
   'audit-exported': 'Trail exported',
 };
 
