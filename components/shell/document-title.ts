@@ -10,7 +10,7 @@ export const appName = 'Frostgrade';
  */
 const sections: Record<string, string> = {
   index: 'Materials', materials: 'Materials', designs: 'Designs', runs: 'Runs', sweeps: 'Runs', modules: 'Modules',
-  growth: 'Growth', team: 'Team', account: 'Account', outbox: 'Outbox', system: 'System',
+  growth: 'Growth', team: 'Team', account: 'Team', outbox: 'Outbox', system: 'System',
 };
 
 export function sectionOfRoute(routeName: string | undefined): string | null {
