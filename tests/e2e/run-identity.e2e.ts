@@ -104,6 +104,8 @@ describe('runs told apart, pages named, progress worded', () => {
       await expect(visible(page.getByTestId('compare-table-row-starts')).innerText()).resolves.toMatch(/Search starts\s+1\s+2/);
       await visible(page.getByTestId('compare-table-row-launched')).waitFor();
       await saveScreenshot(page, `run-identity-compare-${viewport}`);
+      await visible(page.getByTestId('compare-table-row-starts')).scrollIntoViewIfNeeded();
+      await saveScreenshot(page, `run-identity-compare-settings-${viewport}`);
 
       await page.goto(`${baseUrl}/runs/${more.id}/curves`);
       await visible(page.getByRole('link', { name: `Back to Run ${more.number} · ${designName}` })).waitFor();
@@ -185,8 +187,8 @@ describe('runs told apart, pages named, progress worded', () => {
         await page.goto(`${baseUrl}/runs/${long.id}`);
         const start = visible(page.getByTestId('start-progress'));
         await start.waitFor({ timeout: 300_000 });
-        await expect(visible(page.getByTestId('best-current')).innerText()).resolves.toMatch(/^at \d+(\.\d+)? A$/);
-        await expect(start.innerText()).resolves.toMatch(/^Start \d+ of 600, searching: best ΔT of this start -?\d+(\.\d+)? K at \d+(\.\d+)? A$/);
+        await expect(visible(page.getByTestId('best-current')).innerText()).resolves.toMatch(/^at \d+(\.\d+)?\sA$/);
+        await expect(start.innerText()).resolves.toMatch(/^Start \d+ of 600, searching: best ΔT of this start -?\d+(\.\d+)?\sK at \d+(\.\d+)?\sA$/);
         await expect(visible(page.getByTestId('best-so-far')).innerText()).resolves.toMatch(/Best ΔT so far over all starts/);
         await saveScreenshot(page, `run-identity-progress-${widths[k]}`);
       }
