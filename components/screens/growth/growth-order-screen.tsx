@@ -54,7 +54,9 @@ function OrderPage({ detail }: { detail: GrowthOrderDetail }) {
       title={`Batch ${order.batch}`}
       // Browsers name the tab, and a PDF printed from it, after the order.
       tabTitle={`Growth order ${order.batch}`}
-      subtitle={`${order.designName} · ${dueText(order)} · released by ${order.releasedBy}`} back={back}>
+      subtitle={`${order.designName} · ${dueText(order)} · released by ${order.releasedBy}`}
+      back={back}
+    >
       <OrderOverview order={order} />
       <AdvanceOrder orderId={order.id} state={order.state} measured={measured} />
       {reportFirst ? measurements : null}
