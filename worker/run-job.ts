@@ -1,7 +1,8 @@
 import { join } from 'node:path';
 import { Worker } from 'node:worker_threads';
 import type { RunProgress } from '../shared/api';
-import type { SearchCheckpoint, SearchProgress } from '../shared/runs/global-search';
+import type { SearchCheckpoint } from '../shared/runs/global-search';
+import { runProgressOf } from '../shared/runs/run-progress';
 import type { FairShare } from '../server/config/env';
 import { isDatabaseUnavailable, outageLog } from '../server/db/db-errors';
 import type { Mailer } from '../server/mail/mailer';
@@ -19,15 +20,6 @@ const CHECKPOINT_MS = 2000;
 const YIELD_CHECK_MS = 5000;
 /** A run whose worker vanished this many times is failed rather than retried for ever. */
 export const MAX_ATTEMPTS = 4;
-
-function toProgress(runId: string, p: SearchProgress, startedAt: number): RunProgress {
-  const doping = p.state?.kind === 'doping' ? { x: p.state.perCm3.map((_, i, a) => i / (a.length - 1)), perCm3: p.state.perCm3 } : null;
-  return {
-    runId, phase: `${p.phase} · start ${p.start + 1} of ${p.starts}`, iteration: p.iteration, objective: p.objective, best: p.best,
-    doping, current: p.state?.current ?? null, fractionDone: p.fractionDone, evaluations: p.evaluations,
-    elapsedSeconds: (Date.now() - startedAt) / 1000, at: new Date().toISOString(),
-  };
-}
 
 /**
  * A write that must not be lost to a database restart (the final state, the
@@ -108,7 +100,7 @@ export async function runJob(d: RunJobDeps, runId: string, jobId: string): Promi
 
   const outcome = await new Promise<ThreadMessage & { type: 'done' | 'error' }>((resolve) => {
     thread.on('message', (m: ThreadMessage) => {
-      if (m.type === 'progress') latest = toProgress(runId, m.progress, t0);
+      if (m.type === 'progress') latest = runProgressOf(runId, m.progress, (Date.now() - t0) / 1000, new Date());
       else if (m.type === 'checkpoint') {
         checkpoint = m.checkpoint;
         // Yield only at a start boundary, so the hand-over loses at most the start just begun.

@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import { ScrollView, StyleSheet, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 import { BrandMark } from '@/components/shell/brand-mark';
+import { useDocumentTitle } from '@/components/shell/document-title';
 import { useIsWide } from '@/components/shell/use-is-wide';
 import { colors, radii, spacing } from '@/components/theme';
 import { GradedStrip } from '@/components/ui/graded-strip';
@@ -55,6 +56,8 @@ function Story() {
  * panel with a graded leg beside the form, on a phone a slim brand bar.
  */
 export function AuthFrame({ title, subtitle, children, footer }: AuthFrameProps) {
+  // Signed-out pages stand outside the app's sections: "Sign in · Frostgrade".
+  useDocumentTitle(title, null);
   const wide = useIsWide();
   const insets = useSafeAreaInsets();
   return (

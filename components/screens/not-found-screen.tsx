@@ -1,5 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 import { Link, usePathname } from 'expo-router';
+import { useDocumentTitle } from '@/components/shell/document-title';
 import { colors, spacing, type as typeScale } from '@/components/theme';
 import { GradedStrip } from '@/components/ui/graded-strip';
 import { AppText } from '@/components/ui/text';
@@ -7,6 +8,7 @@ import { AppText } from '@/components/ui/text';
 /** Any address the app does not know. */
 export function NotFoundScreen() {
   const pathname = usePathname();
+  useDocumentTitle('Nothing here', null);
   return (
     <View style={styles.root}>
       <View style={styles.box}>

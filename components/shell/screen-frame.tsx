@@ -5,6 +5,7 @@ import { AccountMenu } from '@/components/auth/account-menu';
 import { colors, layout, spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';
 import { BackLink, type BackTarget } from './back-link';
+import { useDocumentTitle } from './document-title';
 import { BrandMark } from './brand-mark';
 import { useIsWide } from './use-is-wide';
 
@@ -13,6 +14,8 @@ export type ScreenFrameProps = {
   subtitle?: string;
   /** Shown at the right of the title, e.g. a refresh button. */
   accessory?: ReactNode;
+  /** The page's name in the browser tab when the title is too long or too vague for it ("Run 12"); defaults to `title`. */
+  tabTitle?: string;
   /** A link up to the parent page, above the title. */
   back?: BackTarget;
   refreshing?: boolean;
@@ -25,7 +28,8 @@ export type ScreenFrameProps = {
  * with the title; on a wide screen the rail carries the brand instead.
  */
 export function ScreenFrame(props: ScreenFrameProps) {
-  const { title, subtitle, accessory, back, refreshing = false, onRefresh, children } = props;
+  const { title, subtitle, accessory, back, refreshing = false, onRefresh, children, tabTitle } = props;
+  useDocumentTitle(tabTitle ?? title);
   const wide = useIsWide();
   const insets = useSafeAreaInsets();
   return (

@@ -14,6 +14,8 @@ export const uniqueFields: Record<string, FieldError> = {
   app_user_email_active: { field: 'email', message: 'this address already has a Frostgrade account (one team per account)' },
   invitation_token_hash_key: { field: 'token', message: 'a link collided with an existing one: try again' },
   password_reset_token_hash_key: { field: 'token', message: 'a link collided with an existing one: try again' },
+  // Numbers come from the team's counter under its row lock; a clash would be a bug, but answers like one.
+  run_team_number_unique: { field: 'run', message: 'another run took this number at the same moment: launch again' },
   sign_up_request_token_hash_key: { field: 'token', message: 'a link collided with an existing one: try again' },
 };
 

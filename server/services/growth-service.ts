@@ -49,8 +49,11 @@ function yieldStatus(o: GrowthOrder): GrowthOrderDto['yieldStatus'] {
   return scatter === o.dopingScatter ? 'ready' : 'computing';
 }
 
-function dto(o: GrowthOrder, designName: string, releasedBy: string): GrowthOrderDto {
+type RunNamed = { designName: string; runNumber: number };
+
+function dto(o: GrowthOrder, { designName, runNumber }: RunNamed, releasedBy: string): GrowthOrderDto {
   return {
+    runNumber,
     dopingScatter: o.dopingScatter, yieldStatus: yieldStatus(o), sheetProgress: o.sheetProgress,
     id: o.id, runId: o.runId, designName, batch: o.batch, dueDate: o.dueDate, notes: o.notes, state: o.state, closeReason: o.closeReason,
     zones: o.zones, lossBudget: o.lossBudget, measureTemperature: o.measureTemperature, sheetStatus: o.sheetStatus, sheetError: o.sheetError,
@@ -82,7 +85,7 @@ export async function releaseRun(d: GrowthDeps, team: Team, actor: Actor, who: A
     await event(m, o.id, actor.displayName, 'released', null, 'requested', input.notes);
     await sendSheetJob(d.boss, m, o.id);
     await recordAudit(m, who, { action: 'order-released', summary: `released run ${run.id.slice(0, 8)} of ${String(run.designSnapshot.name)} to growth as batch ${o.batch}`, subjectId: o.id });
-    return { o, designName: String(run.designSnapshot.name) };
+    return { o, designName: String(run.designSnapshot.name), runNumber: run.number };
   });
   const growers = await mailRoles(d.ds, team, ['grower']);
   if (growers.length > 0) {
@@ -95,17 +98,17 @@ export async function releaseRun(d: GrowthDeps, team: Team, actor: Actor, who: A
     }).catch((err: Error) => console.error(`[api] release mail failed: ${err.message}`));
   }
   await publishEvent(d.ds, { teamId: team.id, event: 'growth:changed', payload: { orderId: order.o.id } });
-  return dto(order.o, order.designName, actor.displayName);
+  return dto(order.o, order, actor.displayName);
 }
 
 /** Who released each order: history, so a member since removed keeps their name. */
 async function withNames(m: EntityManager, orders: GrowthOrder[]): Promise<GrowthOrderDto[]> {
   if (orders.length === 0) return [];
-  const runs: Array<{ id: string; name: string }> = await m.query(`SELECT id, design_snapshot->>'name' AS name FROM run WHERE id = ANY($1)`, [orders.map((o) => o.runId)]);
+  const runs: Array<{ id: string; name: string; number: number }> = await m.query(`SELECT id, design_snapshot->>'name' AS name, number FROM run WHERE id = ANY($1)`, [orders.map((o) => o.runId)]);
   const users: Array<{ id: string; display_name: string }> = await m.query('SELECT id, display_name FROM app_user WHERE id = ANY($1)', [orders.map((o) => o.releasedBy)]);
-  const runName = new Map(runs.map((r) => [r.id, r.name]));
+  const runName = new Map(runs.map((r): [string, RunNamed] => [r.id, { designName: r.name, runNumber: r.number }]));
   const userName = new Map(users.map((u) => [u.id, u.display_name]));
-  return orders.map((o) => dto(o, runName.get(o.runId) ?? '', userName.get(o.releasedBy) ?? 'a former member'));
+  return orders.map((o) => dto(o, runName.get(o.runId) ?? { designName: '', runNumber: 0 }, userName.get(o.releasedBy) ?? 'a former member'));
 }
 
 export async function listOrders(ds: DataSource, team: Team): Promise<GrowthOrderDto[]> {

@@ -71,14 +71,15 @@ const toDto = (r: ModuleDesign): ModuleDto => ({
   createdBy: r.createdBy, createdAt: r.createdAt.toISOString(), updatedAt: r.updatedAt.toISOString(),
 });
 
-/** The name of each leg's source (run → its design, family → the family); null for one deleted since. */
+/** The name of each leg's source (run → its number and design, family → the family); null for one deleted since. */
 async function sourceNamer(ds: DataSource, team: Team, inputs: ModuleInput[]): Promise<(s: LegSource) => string | null> {
   const sources = inputs.flatMap((i) => [i.p, i.n]);
   const runIds = [...new Set(sources.flatMap((s) => (s.kind === 'run' ? [s.runId] : [])))];
   const familyIds = [...new Set(sources.flatMap((s) => (s.kind === 'family' ? [s.familyId] : [])))];
   const runs = runIds.length ? await ds.getRepository(Run).findBy({ teamId: team.id, id: In(runIds) }) : [];
   const families = familyIds.length ? await ds.getRepository(MaterialFamily).findBy({ teamId: team.id, id: In(familyIds) }) : [];
-  const runName = new Map(runs.map((r) => [r.id, String(r.designSnapshot.name)]));
+  // "Run 12 · Stage-2 leg": two runs of one design are two different legs.
+  const runName = new Map(runs.map((r) => [r.id, `Run ${r.number} · ${String(r.designSnapshot.name)}`]));
   const familyName = new Map(families.map((f) => [f.id, f.name]));
   return (s) => (s.kind === 'run' ? runName.get(s.runId) : familyName.get(s.familyId)) ?? null;
 }

@@ -29,9 +29,10 @@ export function summarise(r: Run, designName: string, launchedBy: string, waitin
   const p = r.progress as Partial<RunProgress> | null;
   const res = r.result as { objective?: { value: number }; deltaT?: number; profile?: ProfileLike } | null;
   return {
-    id: r.id, designId: r.designId, designName, sweepId: r.sweepId, sweepValue: r.sweepValue, state: r.state, objective: r.objective,
+    id: r.id, number: r.number, designId: r.designId, designName, sweepId: r.sweepId, sweepValue: r.sweepValue, state: r.state, objective: r.objective,
     best: res?.objective?.value ?? p?.best ?? null, deltaT: res?.deltaT ?? null,
     fractionDone: r.state === 'succeeded' ? 1 : p?.fractionDone ?? 0,
+    starts: startsOf(r),
     launchedBy, createdAt: r.createdAt.toISOString(), startedAt: r.startedAt?.toISOString() ?? null, finishedAt: r.finishedAt?.toISOString() ?? null,
     error: r.error, attempts: r.attempts, waiting: r.state === 'queued' ? waiting : null,
     // One neutrality solve per profile point, and only for two-band families: cheap enough for every list.
@@ -39,11 +40,27 @@ export function summarise(r: Run, designName: string, launchedBy: string, waitin
   };
 }
 
+/** The search starts the run was launched with (frozen in its design snapshot; runs from before starts were a setting made one). */
+function startsOf(r: Run): number {
+  const n = Number(r.designSnapshot.starts ?? 1);
+  return Number.isInteger(n) && n >= 1 ? n : 1;
+}
+
+/**
+ * The team's next run number. The UPDATE locks the team's row until the
+ * launch commits, so launches at the same moment queue here and each gets its
+ * own number; a rolled-back launch gives its number back with it.
+ */
+async function nextRunNumber(m: EntityManager, teamId: string): Promise<number> {
+  const rows = (await m.query('UPDATE team SET last_run_number = last_run_number + 1 WHERE id = $1 RETURNING last_run_number AS n', [teamId])) as [Array<{ n: number }>, number];
+  return rows[0][0].n;
+}
+
 async function insertRun(m: EntityManager, d: Design, params: DesignParameters, userId: string, queue: string, sweep?: { id: string; value: number }): Promise<Run> {
   const version = await m.getRepository(MaterialFamilyVersion).findOneByOrFail({ familyId: d.familyId, version: d.familyVersion });
   const snapshot = { ...d, ...params };
   const run = m.getRepository(Run).create({
-    teamId: d.teamId, designId: d.id, designSnapshot: JSON.parse(JSON.stringify(snapshot)) as Record<string, unknown>, familyVersionId: version.id,
+    teamId: d.teamId, number: await nextRunNumber(m, d.teamId), designId: d.id, designSnapshot: JSON.parse(JSON.stringify(snapshot)) as Record<string, unknown>, familyVersionId: version.id,
     sweepId: sweep?.id ?? null, sweepValue: sweep?.value ?? null,
     caseJson: designToCase(params, version.definition as MaterialInput) as Record<string, unknown>,
     objective: d.objective, state: 'queued', queue, launchedBy: userId, engineVersion: appVersion,
@@ -70,7 +87,7 @@ async function admitLaunch(m: EntityManager, team: Team, count: number, fair: Fa
   }
 }
 
-export async function launchRun(d: RunDeps, team: Team, user: { id: string }, designId: unknown): Promise<RunSummary> {
+export async function launchRun(d: RunDeps, team: Team, user: { id: string; displayName: string }, designId: unknown): Promise<RunSummary> {
   const out = await d.ds.transaction(async (m) => {
     const design = await findDesign(m, team, designId);
     await admitLaunch(m, team, 1, d.fair);
@@ -80,7 +97,7 @@ export async function launchRun(d: RunDeps, team: Team, user: { id: string }, de
   });
   await publishEvent(d.ds, { teamId: team.id, event: 'run:state', payload: { runId: out.run.id, state: 'queued' } });
   const waiting = await waitingOf(d.ds.manager, [out.run.id], waitContext(d));
-  return summarise(out.run, out.design.name, user.id, waiting.get(out.run.id) ?? null);
+  return summarise(out.run, out.design.name, user.displayName, waiting.get(out.run.id) ?? null);
 }
 
 export async function launchSweep(d: RunDeps, team: Team, user: { id: string; displayName: string }, designId: unknown, req: SweepRequest): Promise<SweepDto> {
@@ -99,7 +116,7 @@ export async function launchSweep(d: RunDeps, team: Team, user: { id: string; di
   });
   await publishEvent(d.ds, { teamId: team.id, event: 'run:state', payload: { sweepId: sweep.id, state: 'queued' } });
   const waiting = await waitingOf(d.ds.manager, runs.map((r) => r.id), waitContext(d));
-  return { id: sweep.id, designId: design.id, parameter: req.parameter as SweepDto['parameter'], values: sweep.values, createdAt: sweep.createdAt.toISOString(), runs: runs.map((r) => summarise(r, design.name, user.id, waiting.get(r.id) ?? null)) };
+  return { id: sweep.id, designId: design.id, parameter: req.parameter as SweepDto['parameter'], values: sweep.values, createdAt: sweep.createdAt.toISOString(), runs: runs.map((r) => summarise(r, design.name, user.displayName, waiting.get(r.id) ?? null)) };
 }
 
 /**

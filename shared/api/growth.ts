@@ -46,6 +46,8 @@ export const closeOrderSchema = z.strictObject({
 export const growthOrderSchema = z.object({
   id: idSchema,
   runId: idSchema,
+  /** The released run's number in its team ("Run 12"). */
+  runNumber: z.number().int(),
   designName: z.string(),
   batch: z.string(),
   dueDate: z.string().nullable(),

@@ -4,17 +4,34 @@ import { designSchema } from './designs';
 
 export const runStateSchema = z.enum(['queued', 'running', 'succeeded', 'failed', 'cancelled']);
 
+/**
+ * The start a multi-start search is working on: its place in the search and
+ * its own best point so far (not the run's best, which may come from an
+ * earlier start).
+ */
+export const runStartProgressSchema = z.object({
+  /** 1 = the first start. */
+  number: z.number().int().min(1),
+  of: z.number().int().min(1),
+  /** Best objective of this start so far, and the current it is at. */
+  best: z.number(),
+  current: z.number().nullable(),
+});
+
 /** Latest progress of a running optimisation (also the socket event `run:progress`). */
 export const runProgressSchema = z.object({
   runId: idSchema,
   phase: z.string(),
   iteration: z.number().int(),
-  /** Objective at the latest point and best so far: ΔT [K], heat load [W] or COP. */
+  /** Objective at the latest point and best so far over every start: ΔT [K], heat load [W] or COP. */
   objective: z.number(),
   best: z.number(),
-  /** Best doping profile so far: fractions from the cold end, cm⁻³. */
+  /** The current [A] of the design that holds `best`; null when unknown (progress stored before it was reported). */
+  bestCurrent: z.number().nullable().default(null),
+  /** The start being searched; null when unknown (progress stored before starts were reported). */
+  start: runStartProgressSchema.nullable().default(null),
+  /** Best doping profile of the start being searched: fractions from the cold end, cm⁻³. */
   doping: z.object({ x: z.array(z.number()), perCm3: z.array(z.number()) }).nullable(),
-  current: z.number().nullable(),
   /** Estimated fraction of the work done, 0–1 (an estimate: optimisers stop when converged). */
   fractionDone: z.number().min(0).max(1),
   evaluations: z.number().int(),
@@ -46,6 +63,8 @@ export const runBipolarSchema = z.object({
 
 export const runSummarySchema = z.object({
   id: idSchema,
+  /** The team's short number for the run ("Run 12"): 1, 2, 3 … in launch order, never reused. */
+  number: z.number().int().min(1),
   designId: idSchema,
   designName: z.string(),
   sweepId: idSchema.nullable(),
@@ -56,6 +75,9 @@ export const runSummarySchema = z.object({
   best: z.number().nullable(),
   deltaT: z.number().nullable(),
   fractionDone: z.number(),
+  /** Search starts the run was launched with (the multi-start search's size). */
+  starts: z.number().int().min(1),
+  /** Display name of who launched it. */
   launchedBy: z.string(),
   createdAt: isoDateTimeSchema,
   startedAt: isoDateTimeSchema.nullable(),
@@ -115,6 +137,7 @@ export const sweepSchema = z.object({
 
 export type RunState = z.infer<typeof runStateSchema>;
 export type RunProgress = z.infer<typeof runProgressSchema>;
+export type RunStartProgress = z.infer<typeof runStartProgressSchema>;
 export type RunSummary = z.infer<typeof runSummarySchema>;
 export type RunWaiting = z.infer<typeof runWaitingSchema>;
 export type RunBipolar = z.infer<typeof runBipolarSchema>;

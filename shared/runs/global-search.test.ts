@@ -1,5 +1,7 @@
 import { dopingBaselines, optimizeLeg, parseCase } from '../engine';
-import { globalSearch, type SearchCheckpoint } from './global-search';
+import { runProgressSchema } from '../api/runs';
+import { globalSearch, type SearchCheckpoint, type SearchProgress } from './global-search';
+import { runProgressOf } from './run-progress';
 
 /** The benchmark family (p-type, m* = 1, μ300 = 350 cm²/(V·s), κL300 = 1 W/(m·K)); invented leg geometry. */
 const caseJson = {
@@ -45,6 +47,39 @@ describe('globalSearch', () => {
     expect(seen.length).toBeGreaterThan(3);
     expect(Math.max(...seen)).toBeLessThanOrEqual(1);
     expect(seen[seen.length - 1]!).toBeGreaterThan(0.5);
+  });
+
+  it('reports the best with its own current, and the start being searched with its own', () => {
+    const c = parseCase(caseJson, 'optimize');
+    const reports: SearchProgress[] = [];
+    const bestBefore: Array<{ value: number; current: number } | null> = [null];
+    globalSearch(c, {
+      starts: 4, seed: 'pairs',
+      onProgress: (p) => reports.push({ ...p, state: p.state && { ...p.state } }),
+      onCheckpoint: (cp) => bestBefore.push(cp.best && { value: cp.best.objective.value, current: cp.best.current }),
+    });
+    let earlierHeldBest = 0;
+    for (const p of reports) {
+      const earlier = bestBefore[p.start];
+      if (earlier && earlier.value > p.startBest) {
+        // An earlier start holds the best: its value and its current, not the current this start tries.
+        earlierHeldBest += 1;
+        expect(p.best).toBe(earlier.value);
+        expect(p.bestCurrent).toBe(earlier.current);
+      } else {
+        expect(p.best).toBe(p.startBest);
+        expect(p.bestCurrent).toBe(p.state?.current ?? null);
+      }
+    }
+    // The case the pairing exists for happened: random starts begin below the best found.
+    expect(earlierHeldBest).toBeGreaterThan(0);
+    const mixed = reports.find((p) => p.start > 0 && p.best > p.startBest && p.state && Math.abs(p.state.current - (p.bestCurrent ?? 0)) > 1e-3);
+    expect(mixed).toBeDefined();
+    // The payload keeps them apart too.
+    const payload = runProgressSchema.parse(runProgressOf('3f1c2a8e-0d4b-4a51-9a43-5c1f6a0b7e21', mixed!, 12.5, new Date('2026-02-01T10:00:00Z')));
+    expect(payload.bestCurrent).toBe(mixed!.bestCurrent);
+    expect(payload.start).toEqual({ number: mixed!.start + 1, of: 4, best: mixed!.startBest, current: mixed!.state!.current });
+    expect(payload.best).toBeGreaterThan(payload.start!.best);
   });
 
   it('computes the baselines once: reusing them changes nothing but the work done', () => {

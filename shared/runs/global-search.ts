@@ -17,8 +17,11 @@ export type SearchProgress = {
   phase: string;
   iteration: number;
   objective: number;
-  /** Best objective of the whole search so far. */
+  /** Best objective of the whole search so far, and the current [A] of the design that holds it. */
   best: number;
+  bestCurrent: number | null;
+  /** Best objective of this start so far, and its point (doping, current). */
+  startBest: number;
   state: OptimizerState | null;
   evaluations: number;
   /** Estimated fraction of the search done (0–1). */
@@ -88,11 +91,17 @@ export function globalSearch(c: CheckedCase, o: SearchOptions): SearchResult {
       // Start 0 also searches from both baselines; the later ones from their random profile alone.
       startOnly: k > 0,
       shouldStop: o.shouldStop,
-      onProgress: (p) => o.onProgress?.({
-        start: k, starts, phase: p.phase, iteration: p.iteration, objective: p.objective,
-        best: Math.max(p.best, current?.objective.value ?? -Infinity), state: p.state, evaluations: evaluations,
-        fractionDone: Math.min(1, (k + withinStart(p.phase, p.iteration)) / starts),
-      }),
+      onProgress: (p) => {
+        // The run's best is this start's only when it beats every earlier start; else it is the
+        // earlier best, at its own current, not the current this start is trying.
+        const earlier = current && current.objective.value > p.best ? current : null;
+        o.onProgress?.({
+          start: k, starts, phase: p.phase, iteration: p.iteration, objective: p.objective,
+          best: earlier ? earlier.objective.value : p.best, bestCurrent: earlier ? earlier.current : (p.state?.current ?? null),
+          startBest: p.best, state: p.state, evaluations: evaluations,
+          fractionDone: Math.min(1, (k + withinStart(p.phase, p.iteration)) / starts),
+        });
+      },
     });
     evaluations += r.evaluations;
     if (!best || r.objective.value > best.objective.value) {

@@ -189,7 +189,7 @@ describe('growth hand-off in a real browser: release, print, grow, measure, judg
       // Navigation and buttons stay off paper.
       expect(text).not.toMatch(/Print sheet|Sign out|Accept the order/);
       // The document's title names the batch too (what a print queue shows).
-      expect(pdfTitle(pdf)).toContain(`Growth sheet ${batch}`);
+      expect(pdfTitle(pdf)).toContain(`Growth order ${batch} · Growth · Frostgrade`);
       if (format === 'A4') pdfToPng(pdf, 'growth-sheet-print');
     }
     await page.close();

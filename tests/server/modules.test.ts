@@ -13,7 +13,8 @@ it('saves a module from a run and a family, resolves it to an engine case, and e
   const p = families.find((f) => f.name.startsWith('NL-P7 (Bi,Sb)'))!;
   const n = families.find((f) => f.carrier === 'n' && f.kind === 'band')!;
   const design = await api.post('/api/designs').send({ name: `Module leg ${Date.now()}`, familyId: p.id, lengthMm: 1.5, areaMm2: 1, hotSide: 300, minPerCm3: 1e18, maxPerCm3: 1e20, controlPoints: 5, starts: 1 });
-  const runId = (await api.post(`/api/designs/${design.body.design.id}/runs`)).body.run.id as string;
+  const launched = (await api.post(`/api/designs/${design.body.design.id}/runs`)).body.run as { id: string; number: number };
+  const runId = launched.id;
   await eventually(async () => ((await api.get(`/api/runs/${runId}`)).body.run.state === 'succeeded' ? true : undefined), 60);
 
   const input = { name: `Detector stage ${Date.now()}`, p: { kind: 'run', runId }, n: { kind: 'family', familyId: n.id, perCm3: 2e19, lengthMm: 1.5, areaMm2: 1 }, hotSide: 300, deltaT: 30, couples: 31, currentLimit: 3 };
@@ -29,9 +30,9 @@ it('saves a module from a run and a family, resolves it to an engine case, and e
   expect(csv.text).toMatch(/maximum heat load .* W at .* A/);
   expect(csv.text).toMatch(/,yes$/m); // currents above the 3 A limit are flagged
 
-  // The list names each leg's source: the run's design, the family.
+  // The list names each leg's source: the run by its number and design, the family.
   const listed = modulesResponseSchema.parse((await api.get('/api/modules')).body).modules.find((x) => x.id === m.id)!;
-  expect(listed.sourceNames).toEqual({ p: design.body.design.name, n: n.name });
+  expect(listed.sourceNames).toEqual({ p: `Run ${launched.number} · ${design.body.design.name}`, n: n.name });
   expect(listed).not.toHaveProperty('case');
 
   const wrongLeg = await api.post('/api/modules').send({ ...input, p: { kind: 'run', runId: '00000000-0000-4000-8000-000000000000' } });

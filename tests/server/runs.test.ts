@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { io as connect, type Socket } from 'socket.io-client';
-import { runDetailSchema, type RunProgress } from '../../shared/api';
+import { runDetailSchema, runProgressSchema, type RunProgress } from '../../shared/api';
 import { parseCase } from '../../shared/engine';
 import { globalSearch } from '../../shared/runs/global-search';
 import { attachRealtime } from '../../server/realtime/socket-server';
@@ -73,6 +73,9 @@ it('launch → live progress on a socket → stored result equal to the engine\'
   expect(done.run.state).toBe('succeeded');
   expect(events.length).toBeGreaterThan(0);
   expect(events.every((e) => e.runId === runId)).toBe(true);
+  // Every event is the shared contract, and carries the best's own current apart from the start being searched.
+  const parsed = events.map((e) => runProgressSchema.parse(e));
+  expect(parsed.every((e) => e.bestCurrent !== null && e.start !== null && e.start.of === 3 && e.best >= e.start.best)).toBe(true);
   // The same search, run here with the run's seed, gives the same optimum.
   const local = globalSearch(parseCase(done.case, 'optimize'), { starts: 3, seed: runId });
   const stored = done.result as { objective: { value: number }; deltaT: number; baselines: { uniform: { deltaT: number } } };

@@ -1,6 +1,7 @@
 import { useLocalSearchParams } from 'expo-router';
 import { ApiError } from '@/components/api/client';
 import { useRunDetail } from '@/components/api/runs';
+import { runName, runTitle } from '@/components/screens/runs/run-format';
 import { parseRunResult } from '@/components/screens/runs/run-result';
 import { ScreenFrame } from '@/components/shell/screen-frame';
 import { Notice } from '@/components/ui/notice';
@@ -12,8 +13,9 @@ import { CurvesBody } from './curves-body';
 /** `/runs/[id]/curves`: operating curves of a finished run's leg and its baselines, computed in the browser. */
 export function RunCurvesScreen() {
   const id = useLocalSearchParams<{ id: string }>().id ?? '';
-  const back = { label: 'Run', href: `/runs/${id}` } as const;
   const query = useRunDetail(id);
+  // Named once the run is in: "Run 12 · Detector p-leg", never a bare "Run".
+  const back = { label: query.data ? runTitle(query.data.run) : 'The run', href: `/runs/${id}` } as const;
   if (!query.data) {
     const notFound = query.error instanceof ApiError && query.error.isNotFound;
     return (
@@ -29,7 +31,12 @@ export function RunCurvesScreen() {
   const detail = query.data;
   const parsed = parseRunResult(detail.result);
   return (
-    <ScreenFrame title="Operating curves" subtitle={`${detail.run.designName}: Qc, COP, voltage and power versus current`} back={back}>
+    <ScreenFrame
+      title={`Operating curves of ${runName(detail.run)}`}
+      tabTitle={`${runName(detail.run)} operating curves`}
+      subtitle={`${runTitle(detail.run)}: Qc, COP, voltage and power versus current`}
+      back={back}
+    >
       {parsed?.ok ? (
         <>
           <LinkButton variant="quiet" label="Build a module with this leg" href={`/modules/new?p=${detail.run.id}`} testID="curves-build-module" />

@@ -1,4 +1,3 @@
-import { useEffect } from 'react';
 import { useLocalSearchParams } from 'expo-router';
 import type { GrowthOrderDetail } from '@/shared/api/growth';
 import { ApiError } from '@/components/api/client';
@@ -50,17 +49,14 @@ function OrderPage({ detail }: { detail: GrowthOrderDetail }) {
   // first; a grower keeps the sheet on top (the page does not jump under them after an upload).
   const reportFirst = measured && (can('profiles.release') || !can('measurements.upload'));
   const measurements = <MeasurementsSection detail={detail} sheet={sheet} />;
-  // Browsers name the tab, and a PDF printed from it, after the batch.
-  useEffect(() => {
-    if (typeof document === 'undefined') return undefined;
-    const before = document.title;
-    document.title = `Growth sheet ${order.batch} · Frostgrade`;
-    return () => {
-      document.title = before;
-    };
-  }, [order.batch]);
   return (
-    <ScreenFrame title={`Batch ${order.batch}`} subtitle={`${order.designName} · ${dueText(order)} · released by ${order.releasedBy}`} back={back}>
+    <ScreenFrame
+      title={`Batch ${order.batch}`}
+      // Browsers name the tab, and a PDF printed from it, after the order.
+      tabTitle={`Growth order ${order.batch}`}
+      subtitle={`${order.designName} · ${dueText(order)} · released by ${order.releasedBy}`}
+      back={back}
+    >
       <OrderOverview order={order} />
       <AdvanceOrder orderId={order.id} state={order.state} sheetStatus={order.sheetStatus} measured={measured} />
       {reportFirst ? measurements : null}

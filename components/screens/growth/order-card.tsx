@@ -40,7 +40,7 @@ function CardBody({ order, highlighted }: { order: GrowthOrderDto; highlighted: 
         <Glyph name="chevron-right" color={colors.textFaint} />
       </View>
       <AppText tone="muted" numberOfLines={1}>
-        {order.designName}
+        {`Run ${order.runNumber} · ${order.designName}`}
       </AppText>
       <View style={styles.pills}>
         <StateBadge look={growthStateLook[order.state]} testID="order-state" />

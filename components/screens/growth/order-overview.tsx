@@ -18,7 +18,7 @@ export function OrderOverview({ order }: { order: GrowthOrderDto }) {
           <StateBadge look={growthStateLook[order.state]} size="large" testID="order-state" />
           {closed ? null : <StateBadge look={sheetStatusLook[order.sheetStatus]} testID="order-sheet-status" />}
         </View>
-        <LinkButton variant="quiet" label="Run" href={`/runs/${order.runId}`} />
+        <LinkButton variant="quiet" label={`Run ${order.runNumber}`} href={`/runs/${order.runId}`} testID="order-run-link" />
       </View>
       <StateStepper state={order.state} />
       {order.notes ? (

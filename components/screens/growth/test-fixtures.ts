@@ -47,7 +47,7 @@ export function sheet(overrides: Partial<SheetView> = {}): SheetView {
 
 export function order(overrides: Partial<GrowthOrderDto> = {}): GrowthOrderDto {
   return {
-    id: ids.order, runId: ids.run, designName: 'Detector p-leg', batch: 'NL-TEST-007', dueDate: '2027-05-14', notes: 'Seed end is the cold end.',
+    id: ids.order, runId: ids.run, runNumber: 7, designName: 'Detector p-leg', batch: 'NL-TEST-007', dueDate: '2027-05-14', notes: 'Seed end is the cold end.',
     state: 'requested', closeReason: null, zones: 3, lossBudget: 1, measureTemperature: 300, sheetStatus: 'ready', sheetError: null,
     dopingScatter: 0.05, yieldStatus: 'ready', sheetProgress: null, releasedBy: 'Piet Okafor', createdAt: '2026-11-20T09:30:00.000Z', updatedAt: '2026-11-20T09:31:00.000Z',
     ...overrides,

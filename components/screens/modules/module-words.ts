@@ -4,7 +4,7 @@ import { doping, quantity } from '@/components/screens/runs/run-format';
 
 const legNames = { optimum: 'optimum', uniform: 'best uniform', localBestZt: 'local-best-zT' } as const;
 
-/** "Stage-2 leg, optimum leg of a run" or "NL-N3 … at 2 × 10¹⁹ cm⁻³, 1.5 mm × 1 mm²". */
+/** "Run 12 · Stage-2 leg, optimum leg of a run" or "NL-N3 … at 2 × 10¹⁹ cm⁻³, 1.5 mm × 1 mm²". */
 export function legSourceWords(s: LegSource, name: string | null): string {
   if (s.kind === 'run') return `${name ?? 'a deleted run'}, ${legNames[s.leg]} leg of a run`;
   return `${name ?? 'a deleted family'} at ${doping(s.perCm3)}, ${quantity(s.lengthMm, 'mm')} × ${quantity(s.areaMm2, 'mm²')}`;

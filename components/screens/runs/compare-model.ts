@@ -1,7 +1,8 @@
 import type { RunDetail } from '@/shared/api/runs';
 import type { PlotSeries } from '@/components/charts/series-plot-types';
 import { chartMarks } from '@/components/theme';
-import { doping, formatObjective, objectiveInfo, quantity, sweepNote } from './run-format';
+import { formatDateTime } from '@/components/format/date';
+import { doping, formatObjective, objectiveInfo, quantity, runName, sweepNote } from './run-format';
 import { runStateLook } from './run-state-badge';
 import { parseRunResult, type RunResult } from './run-result';
 
@@ -30,14 +31,49 @@ export function compareHref(runIds: readonly string[], moduleIds: readonly strin
 export type Compared = { detail: RunDetail; result: RunResult | null; label: string; note: string };
 
 export function compared(details: RunDetail[]): Compared[] {
-  return details.map((detail, i) => {
+  return details.map((detail) => {
     const parsed = parseRunResult(detail.result);
     const swept = sweepNote(detail);
-    return { detail, result: parsed?.ok ? parsed.result : null, label: `Run ${i + 1}`, note: swept ? `${detail.run.designName}, ${swept}` : detail.run.designName };
+    return { detail, result: parsed?.ok ? parsed.result : null, label: runName(detail.run), note: swept ? `${detail.run.designName}, ${swept}` : detail.run.designName };
   });
 }
 
 type Row = { key: string; label: string; cells: string[] };
+type RowDef = { key: string; label: string; cell: (c: Compared) => string };
+
+const yesNo = (on: boolean) => (on ? 'yes' : 'no');
+
+/** "Th 300 K, ΔT maximised" / "Th 300 K, Tc 270 K": the conditions the run was searched at. */
+function conditions(c: Compared): string {
+  const d = c.detail.design;
+  const parts = [`Th ${quantity(d.hotSide, 'K')}`];
+  if (d.objective !== 'maxDeltaT' && d.coldSide !== null) parts.push(`Tc ${quantity(d.coldSide, 'K')}`);
+  if (d.objective !== 'maxHeatLoad') parts.push(`Qc ${quantity(d.heatLoad, 'W')}`);
+  return parts.join(', ');
+}
+
+function ends(c: Compared): string {
+  const d = c.detail.design;
+  const contacts = d.coldContactMicroOhmCm2 > 0 || d.hotContactMicroOhmCm2 > 0 ? `contacts ${quantity(d.coldContactMicroOhmCm2, 'µΩ·cm²')} cold, ${quantity(d.hotContactMicroOhmCm2, 'µΩ·cm²')} hot` : 'ideal contacts';
+  const parasitic = d.parasitic === 'fixed' ? `parasitic ${quantity(d.parasiticLoadW, 'W')}` : d.parasitic === 'radiation' ? `radiation, ε ${quantity(d.emissivity, '')}` : 'no parasitic heat';
+  return `${contacts}; ${parasitic}`;
+}
+
+/** The search each run froze when it was launched: what makes a 3-start and a 150-start run differ. */
+const settingRows: RowDef[] = [
+  { key: 'launched', label: 'Launched', cell: (c) => `${formatDateTime(c.detail.run.createdAt)} by ${c.detail.run.launchedBy}` },
+  { key: 'starts', label: 'Search starts', cell: (c) => String(c.detail.run.starts) },
+  { key: 'objective', label: 'Objective', cell: (c) => objectiveInfo[c.detail.design.objective].goal },
+  { key: 'conditions', label: 'Searched at', cell: conditions },
+  { key: 'bounds', label: 'Doping bounds', cell: (c) => `${doping(c.detail.design.minPerCm3)} – ${doping(c.detail.design.maxPerCm3)}` },
+  { key: 'nodes', label: 'Control points', cell: (c) => String(c.detail.design.controlPoints) },
+  { key: 'monotone', label: 'Monotone profile', cell: (c) => yesNo(c.detail.design.monotone) },
+  { key: 'minZone', label: 'Minimum zone', cell: (c) => (c.detail.design.minZoneMm > 0 ? quantity(c.detail.design.minZoneMm, 'mm') : 'none') },
+  { key: 'geometry', label: 'L × A', cell: (c) => `${quantity(c.detail.design.lengthMm, 'mm')} × ${quantity(c.detail.design.areaMm2, 'mm²')}` },
+  { key: 'ends', label: 'Leg ends', cell: ends },
+  { key: 'family', label: 'Family', cell: (c) => `${c.detail.design.familyName} v${c.detail.familyVersion}` },
+  { key: 'engine', label: 'Engine version', cell: (c) => c.detail.engineVersion },
+];
 
 function gainOverUniform(c: Compared): string {
   const r = c.result;
@@ -54,7 +90,6 @@ export function compareRows(list: Compared[]): Row[] {
   return [
     row('design', 'Design', (c) => c.detail.run.designName),
     row('state', 'State', (c) => runStateLook[c.detail.run.state].label),
-    row('objective', 'Objective', (c) => objectiveInfo[c.detail.design.objective].goal),
     row('value', 'Optimum', (c) => (c.result ? `${objectiveInfo[c.detail.design.objective].symbol} ${formatObjective(c.detail.design.objective, c.result.objective.value)}` : '–')),
     row('gain', 'Gain over best uniform', gainOverUniform),
     row('deltaT', 'ΔT', res((r) => quantity(r.deltaT, 'K'))),
@@ -65,10 +100,7 @@ export function compareRows(list: Compared[]): Row[] {
     row('power', 'Input power', res((r) => quantity(r.power, 'W'))),
     row('heatLoad', 'Heat load Qc', res((r) => quantity(r.heatLoad, 'W'))),
     row('cop', 'COP', res((r) => (r.cop === null ? '–' : r.heatLoad === 0 ? '0 (no heat load)' : quantity(r.cop, '')))),
-    row('geometry', 'L × A', (c) => `${quantity(c.detail.design.lengthMm, 'mm')} × ${quantity(c.detail.design.areaMm2, 'mm²')}`),
-    row('bounds', 'Doping bounds', (c) => `${doping(c.detail.design.minPerCm3)} – ${doping(c.detail.design.maxPerCm3)}`),
-    row('nodes', 'Control points', (c) => `${c.detail.design.controlPoints}${c.detail.design.monotone ? ', monotone' : ''}`),
-    row('family', 'Family', (c) => `${c.detail.design.familyName} v${c.detail.familyVersion}`),
+    ...settingRows.map((d) => row(d.key, d.label, d.cell)),
   ];
 }
 

@@ -36,6 +36,27 @@ describe('CompareScreen', () => {
     expect(screen.getByTestId('compare-module-heat-load')).toBeOnTheScreen();
   });
 
+  it('tells two runs of one design apart: number, launch time, starts and launcher in the picker, search settings in the table', async () => {
+    const idC = 'cccccccc-cccc-4ccc-8ccc-cccccccccccc';
+    const few = { ...run, run: { ...run.run, number: 7, starts: 3 } };
+    const many = { ...run, run: { ...run.run, id: idC, number: 8, starts: 150, createdAt: '2026-02-01T16:45:00.000Z', launchedBy: 'Greta' }, design: { ...run.design, starts: 150, minZoneMm: 0.2 } };
+    routeFetch({
+      'GET /api/runs': { status: 200, body: { runs: [many.run, few.run] } },
+      [`GET /api/runs/${ids.run}`]: { status: 200, body: few },
+      [`GET /api/runs/${idC}`]: { status: 200, body: many },
+      'GET /api/modules': { status: 200, body: { modules: [] } },
+    });
+    renderRoutes(routes, `/runs/compare?ids=${ids.run},${idC}`, sessionAs('viewer'));
+    const table = await screen.findByTestId('compare-table');
+    expect(screen.getByTestId(`pick-run-${ids.run}`)).toHaveTextContent(/^Run 7 · Detector p-leg · ΔT [\d.]+\sK · 1 Feb 2026, 10:00 UTC · 3 starts · Piet$/);
+    expect(screen.getByTestId(`pick-run-${idC}`)).toHaveTextContent(/^Run 8 · Detector p-leg · ΔT [\d.]+\sK · 1 Feb 2026, 16:45 UTC · 150 starts · Greta$/);
+    expect(table).toHaveTextContent(/Run 7.*Run 8/);
+    expect(within(table).getByTestId('compare-table-row-starts')).toHaveTextContent(/Search starts\s*3\s*150/);
+    expect(within(table).getByTestId('compare-table-row-launched')).toHaveTextContent(/1 Feb 2026, 10:00 UTC by Piet.*1 Feb 2026, 16:45 UTC by Greta/);
+    expect(within(table).getByTestId('compare-table-row-minZone')).toHaveTextContent(/Minimum zone\s*none\s*0\.2\smm/);
+    for (const key of ['objective', 'conditions', 'bounds', 'nodes', 'monotone', 'ends', 'family', 'engine']) expect(within(table).getByTestId(`compare-table-row-${key}`)).toBeOnTheScreen();
+  });
+
   it('adds a module from the picker and keeps the choice in the address', async () => {
     serve();
     const result = renderRoutes(routes, `/runs/compare?modules=${idA}`, sessionAs('viewer'));

@@ -1,6 +1,6 @@
 import type { Objective } from '@/shared/api/designs';
 import type { RunDetail, RunSummary, Sweep } from '@/shared/api/runs';
-import { formatDay } from '@/components/format/date';
+import { formatDateTime } from '@/components/format/date';
 import { formatNumber, formatScientific, withUnit } from '@/components/format/number';
 
 export type ObjectiveInfo = {
@@ -86,10 +86,30 @@ export function sweepNote(detail: Pick<RunDetail, 'run' | 'design'>): string | n
   return parameter ? `${sweepParameterInfo[parameter].symbol} = ${formatSweepValue(parameter, run.sweepValue)}` : 'a sweep run';
 }
 
-/** A finished run in a picker: "Detector p-leg · ΔT 87.3 K · 1 Dec 2026". */
+/** "Run 12": the team's short number for a run. */
+export function runName(r: Pick<RunSummary, 'number'>): string {
+  return `Run ${r.number}`;
+}
+
+/** "16 starts", "1 start". */
+export function startsText(starts: number): string {
+  return `${starts} ${starts === 1 ? 'start' : 'starts'}`;
+}
+
+/** What tells two runs of one design apart: "4 Dec 2026, 14:05 UTC · 150 starts · Piet Okafor". */
+export function runProvenance(r: Pick<RunSummary, 'createdAt' | 'starts' | 'launchedBy'>): string {
+  return `${formatDateTime(r.createdAt)} · ${startsText(r.starts)} · ${r.launchedBy}`;
+}
+
+/** "Run 12 · Detector p-leg": a run named in a heading, link or legend. */
+export function runTitle(r: Pick<RunSummary, 'number' | 'designName'>): string {
+  return `${runName(r)} · ${r.designName}`;
+}
+
+/** A finished run in a picker: "Run 12 · Detector p-leg · ΔT 87.3 K · 1 Dec 2026, 14:05 UTC · 150 starts · Piet Okafor". */
 export function runChoiceLabel(r: RunSummary): string {
   const o = asObjective(r.objective);
-  return `${r.designName} · ${objectiveInfo[o].symbol} ${formatObjective(o, r.best, 3)} · ${formatDay(r.createdAt)}`;
+  return `${runTitle(r)} · ${objectiveInfo[o].symbol} ${formatObjective(o, r.best, 3)} · ${runProvenance(r)}`;
 }
 
 /** "next in line" or "number 4 in line", for a queued run. */

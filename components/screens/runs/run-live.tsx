@@ -12,7 +12,8 @@ import { ChartCard } from '@/components/charts/chart-card';
 import { ConnectionLine } from './connection-line';
 import { liveDopingSeries, mergeTrace, objectiveSeries } from './live-series';
 import { ProgressBar } from './progress-bar';
-import { asObjective, formatDuration, formatObjective, objectiveInfo, placeInLine, quantity } from './run-format';
+import { progressWords } from './progress-words';
+import { asObjective, formatDuration, formatObjective, objectiveInfo, placeInLine } from './run-format';
 
 function caption(detail: RunDetail, p: RunProgress | null): string {
   const w = detail.run.waiting;
@@ -25,11 +26,13 @@ function BestSoFar({ detail, p }: { detail: RunDetail; p: RunProgress | null }) 
   const objective = asObjective(detail.run.objective);
   const info = objectiveInfo[objective];
   if (!p) return null;
+  const words = progressWords(objective, p);
   return (
     <View style={styles.best} testID="best-so-far">
-      <AppText variant="caption" tone="muted">{`Best ${info.symbol} so far (model prediction)`}</AppText>
+      <AppText variant="caption" tone="muted">{`Best ${info.symbol} so far over all starts (model prediction)`}</AppText>
       <AppText variant="title">{formatObjective(objective, p.best)}</AppText>
-      {p.current !== null ? <AppText variant="mono" tone="muted">{`at ${quantity(p.current, 'A', 3)} in the current start`}</AppText> : null}
+      {words.bestAt ? <AppText variant="mono" tone="muted" testID="best-current">{words.bestAt}</AppText> : null}
+      {words.start ? <AppText variant="caption" tone="muted" testID="start-progress">{words.start}</AppText> : null}
     </View>
   );
 }

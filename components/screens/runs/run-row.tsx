@@ -2,14 +2,13 @@ import { Pressable, StyleSheet, View } from 'react-native';
 import { Link } from 'expo-router';
 import type { RunProgress, RunSummary } from '@/shared/api/runs';
 import { isFinished } from '@/components/api/runs';
-import { formatDateTime } from '@/components/format/date';
 import { colors, spacing } from '@/components/theme';
 import { Chip } from '@/components/ui/chip';
 import { Glyph } from '@/components/ui/glyph';
 import { AppText } from '@/components/ui/text';
 import { BipolarLine } from './bipolar-note';
 import { ProgressBar } from './progress-bar';
-import { asObjective, formatObjective, objectiveInfo, placeInLine } from './run-format';
+import { asObjective, formatObjective, objectiveInfo, placeInLine, runName, runProvenance, runTitle } from './run-format';
 import { RunStateBadge } from './run-state-badge';
 
 export type RunRowProps = {
@@ -36,17 +35,9 @@ function RowBody({ run, live, showDesign, sweepLabel }: Omit<RunRowProps, 'selec
   return (
     <View style={styles.body}>
       <View style={styles.top}>
-        {showDesign ? (
-          <AppText variant="bodyStrong" style={styles.grow} numberOfLines={2}>
-            {run.designName}
-          </AppText>
-        ) : null}
-        {sweepLabel ? (
-          <AppText variant="bodyStrong" style={styles.grow}>
-            {sweepLabel}
-          </AppText>
-        ) : null}
-        {!showDesign && !sweepLabel ? <View style={styles.grow} /> : null}
+        <AppText variant="bodyStrong" style={styles.grow} numberOfLines={2} testID="run-row-name">
+          {[runName(run), showDesign ? run.designName : null, sweepLabel ?? null].filter(Boolean).join(' · ')}
+        </AppText>
         <Glyph name="chevron-right" color={colors.textFaint} />
       </View>
       <View style={styles.facts}>
@@ -57,7 +48,7 @@ function RowBody({ run, live, showDesign, sweepLabel }: Omit<RunRowProps, 'selec
         <ProgressBar
           compact
           fraction={live?.fractionDone ?? run.fractionDone}
-          label={`Progress of the run of ${run.designName}`}
+          label={`Progress of ${runTitle(run)}`}
           caption={live?.phase ?? (run.state === 'queued' ? `waiting: ${run.waiting ? placeInLine(run.waiting.position) : 'for a worker'}` : 'running')}
         />
       ) : null}
@@ -72,7 +63,7 @@ function RowBody({ run, live, showDesign, sweepLabel }: Omit<RunRowProps, 'selec
           {run.error}
         </AppText>
       ) : null}
-      <AppText variant="caption" tone="muted">{`${formatDateTime(run.createdAt)} · ${run.launchedBy}`}</AppText>
+      <AppText variant="caption" tone="muted" testID="run-row-provenance">{runProvenance(run)}</AppText>
     </View>
   );
 }
@@ -83,7 +74,7 @@ export function RunRow({ selection, ...row }: RunRowProps) {
   return (
     <View style={styles.row} testID={`run-row-${run.id}`}>
       <Link href={`/runs/${run.id}`} asChild>
-        <Pressable style={styles.link} aria-label={`Run of ${run.designName}, ${run.state}`}>
+        <Pressable style={styles.link} aria-label={`${runTitle(run)}, ${run.state}`}>
           <RowBody {...row} />
         </Pressable>
       </Link>

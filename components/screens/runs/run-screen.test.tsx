@@ -83,6 +83,27 @@ describe('RunScreen', () => {
     expect(screen.getByTestId('run-progress').props['aria-valuenow']).toBe(60);
   });
 
+  it('puts the best beside its own current and the start being searched beside its own', async () => {
+    show(runDetail('running', { progress: progress() }));
+    const best = await screen.findByTestId('best-so-far');
+    // The fixture's best (84.25 K) was found at 3.86 A in an earlier start; start 3 is at 2.79 A with 80.5 K.
+    expect(best).toHaveTextContent(/Best ΔT so far over all starts.*84\.25\sK/);
+    expect(screen.getByTestId('best-current')).toHaveTextContent(/^at 3\.86\sA$/);
+    expect(screen.getByTestId('start-progress')).toHaveTextContent(/^Start 3 of 16, searching: best ΔT of this start 80\.5\sK at 2\.79\sA$/);
+    expect(best).not.toHaveTextContent(/84\.25\sK\s*at 2\.79/);
+    // Progress stored before the current was reported names no current rather than a wrong one.
+    act(() => lastSocket().serverConnect());
+    act(() => lastSocket().serverEmit('run:progress', { ...progress(), bestCurrent: undefined, start: undefined }));
+    expect(screen.queryByTestId('best-current')).toBeNull();
+    expect(screen.queryByTestId('start-progress')).toBeNull();
+  });
+
+  it('names the run by its team number, with its starts, in the heading (the tab title is checked in the browser, tests/e2e/titles.e2e.ts)', async () => {
+    show(runDetail('succeeded', { result: true }));
+    expect(await screen.findByRole('heading', { name: 'Run 7 · Detector p-leg' })).toBeOnTheScreen();
+    expect(screen.getByText(/16 starts · launched 1 Feb 2026, 10:00 UTC by Piet/)).toBeOnTheScreen();
+  });
+
   it('loads the stored result when the worker reports the run finished', async () => {
     let detail = runDetail('running', { progress: progress() });
     show(() => detail);

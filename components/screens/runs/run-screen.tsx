@@ -12,7 +12,7 @@ import { LinkButton } from '@/components/ui/link-button';
 import { ErrorState, LoadingState } from '@/components/ui/state-views';
 import { DesignFacts } from '../designs/design-facts';
 import { ReleaseButton } from '../growth/release-button';
-import { objectiveInfo, sweepNote } from './run-format';
+import { objectiveInfo, runName, runTitle, startsText, sweepNote } from './run-format';
 import { RunLive } from './run-live';
 import { RunOutcome } from './run-outcome';
 import { RunStateBadge } from './run-state-badge';
@@ -26,8 +26,9 @@ function RunPage({ detail }: { detail: RunDetail }) {
   const sweep = sweepNote(detail);
   return (
     <ScreenFrame
-      title={run.designName}
-      subtitle={`${objectiveInfo[design.objective].goal} · launched ${formatDateTime(run.createdAt)} by ${run.launchedBy}`}
+      title={runTitle(run)}
+      tabTitle={runName(run)}
+      subtitle={`${objectiveInfo[design.objective].goal} · ${startsText(run.starts)} · launched ${formatDateTime(run.createdAt)} by ${run.launchedBy}`}
       back={back}
     >
       <View style={styles.status}>

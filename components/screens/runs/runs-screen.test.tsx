@@ -1,5 +1,5 @@
 import { Text } from 'react-native';
-import { act, fireEvent, screen, waitFor } from 'expo-router/testing-library';
+import { act, within, fireEvent, screen, waitFor } from 'expo-router/testing-library';
 import { lastSocket, sockets } from '@/components/realtime/test-socket';
 import { renderRoutes } from '@/components/test-router';
 import { sessionAs } from '@/components/test-utils';
@@ -13,8 +13,8 @@ const routes = { 'runs/index': RunsScreen, 'runs/compare': () => <Text>Compare p
 const id = (n: number) => `3333333${n}-3333-4333-8333-333333333333`;
 const runs = [
   runSummary('running', { id: id(1), fractionDone: 0.2 }),
-  runSummary('succeeded', { id: id(2), best: 87.27 }),
-  runSummary('cancelled', { id: id(3), best: 85.1 }),
+  runSummary('succeeded', { id: id(2), number: 12, best: 87.27, starts: 150, createdAt: '2026-12-04T14:05:00.000Z', launchedBy: 'Greta' }),
+  runSummary('cancelled', { id: id(3), number: 11, best: 85.1, starts: 3, createdAt: '2026-12-04T09:30:00.000Z' }),
   runSummary('failed', { id: id(4) }),
   runSummary('queued', { id: id(5), waiting: { position: 1, reason: 'Your team already has 4 runs running, the most one team may run at once (4); it starts when one of them ends.' } }),
 ];
@@ -29,6 +29,10 @@ describe('RunsScreen', () => {
     renderRoutes(routes, '/runs', sessionAs('viewer'));
     expect(await screen.findByTestId(`run-row-${id(2)}`)).toHaveTextContent(/Succeeded.*Best ΔT 87\.27\sK/);
     expect(screen.getByTestId(`run-row-${id(4)}`)).toHaveTextContent(/Failed.*no current gives a steady state/);
+    // Two runs of one design read apart: number, launch date and time, starts, who launched it.
+    expect(within(screen.getByTestId(`run-row-${id(2)}`)).getByTestId('run-row-name')).toHaveTextContent('Run 12 · Detector p-leg');
+    expect(within(screen.getByTestId(`run-row-${id(2)}`)).getByTestId('run-row-provenance')).toHaveTextContent('4 Dec 2026, 14:05 UTC · 150 starts · Greta');
+    expect(within(screen.getByTestId(`run-row-${id(3)}`)).getByTestId('run-row-provenance')).toHaveTextContent('4 Dec 2026, 09:30 UTC · 3 starts · Piet');
     // A waiting run says where it stands and why, as the server worked it out.
     expect(screen.getByTestId(`run-row-${id(5)}`)).toHaveTextContent(/Queued.*waiting: next in line.*the most one team may run at once \(4\)/);
     act(() => lastSocket().serverConnect());

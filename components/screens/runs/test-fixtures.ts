@@ -80,6 +80,7 @@ export function runSummary(state: RunState, overrides: Partial<RunSummary> = {})
   const finished = state === 'succeeded' || state === 'failed' || state === 'cancelled';
   return {
     id: ids.run,
+    number: 7,
     designId: ids.design,
     designName: 'Detector p-leg',
     sweepId: null,
@@ -89,6 +90,7 @@ export function runSummary(state: RunState, overrides: Partial<RunSummary> = {})
     best: null,
     deltaT: null,
     fractionDone: state === 'succeeded' ? 1 : 0,
+    starts: 16,
     launchedBy: 'Piet',
     createdAt: '2026-02-01T10:00:00.000Z',
     startedAt: state === 'queued' ? null : '2026-02-01T10:00:02.000Z',
@@ -136,8 +138,10 @@ export function progress(overrides: Partial<RunProgress> = {}): RunProgress {
     iteration: 12,
     objective: 80.5,
     best: 84.25,
+    // The run's best came from an earlier start, at another current than the start being searched.
+    bestCurrent: 3.86,
+    start: { number: 3, of: 16, best: 80.5, current: 2.79 },
     doping: { x: [0, 1 / 3, 2 / 3, 1], perCm3: [4e19, 2e19, 6e18, 1e18] },
-    current: 3.4,
     fractionDone: 0.4,
     evaluations: 900,
     elapsedSeconds: 5.5,

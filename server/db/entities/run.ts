@@ -13,6 +13,8 @@ export type WaitReason = 'team-limit' | 'yielded' | 'resumed';
 export class Run {
   @PrimaryGeneratedColumn('uuid') id!: string;
   @Column({ type: 'uuid' }) teamId!: string;
+  /** The team's own short number for the run ("Run 12"): 1, 2, 3 … in launch order, never reused. */
+  @Column({ type: 'integer' }) number!: number;
   @Column({ type: 'uuid' }) designId!: string;
   @Column({ type: 'jsonb' }) designSnapshot!: Record<string, unknown>;
   @Column({ type: 'uuid' }) familyVersionId!: string;

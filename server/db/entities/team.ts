@@ -12,6 +12,10 @@ export class Team {
   @Column({ type: 'text', unique: true })
   slug!: string;
 
+  /** The last run number given out (server/services/run-service.ts takes the next under this row's lock). */
+  @Column({ type: 'integer', default: 0 })
+  lastRunNumber!: number;
+
   @CreateDateColumn({ type: 'timestamptz' })
   createdAt!: Date;
 }
