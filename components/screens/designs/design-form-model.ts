@@ -3,6 +3,7 @@ import { designInputSchema, type Design, type Objective, type ParasiticKind } fr
 import type { FieldError } from '@/shared/api/errors';
 import { splitFieldErrors, type FieldErrors, type SplitErrors } from '@/components/ui/save-errors';
 import { designFieldInfo, type DesignNumberKey } from './design-fields';
+import { formatForInput } from '@/components/format/number';
 
 /** What the form holds: numbers as typed, so a half-typed "1e" is not lost. */
 export type DesignFormValues = {
@@ -50,7 +51,7 @@ export function emptyDesignValues(familyId = ''): DesignFormValues {
   };
 }
 
-const text = (v: number | null) => (v === null ? '' : String(v));
+const text = formatForInput;
 
 /** The form filled from a stored design (editing keeps its family version). */
 export function valuesFromDesign(d: Design): DesignFormValues {

@@ -3,9 +3,10 @@ import { spacing } from '@/components/theme';
 import { TextField } from '@/components/ui/text-field';
 import type { FieldErrors, ModuleText } from './module-form-model';
 
-type Key = Exclude<keyof ModuleText, 'p' | 'n' | 'name'>;
+export type ModuleFieldKey = Exclude<keyof ModuleText, 'p' | 'n' | 'name'>;
 
-const fields: [Key, string, string, string?][] = [
+/** Each module setting's label, unit and help: the form and the read-only view show the same words. */
+export const moduleFieldInfo: [ModuleFieldKey, string, string, string?][] = [
   ['hotSide', 'Hot side Th', 'K'],
   ['deltaT', 'ΔT', 'K'],
   ['couples', 'Couples N', 'couples'],
@@ -20,7 +21,7 @@ const fields: [Key, string, string, string?][] = [
 export function ModuleFields({ value, onChange, errors }: { value: ModuleText; onChange: (v: ModuleText) => void; errors: FieldErrors }) {
   return (
     <View style={styles.grid}>
-      {fields.map(([key, label, unit, help]) => (
+      {moduleFieldInfo.map(([key, label, unit, help]) => (
         <View key={key} style={styles.field}>
           <TextField id={`module-${key}`} label={label} unit={unit} help={help} mono value={value[key]} onChangeText={(t) => onChange({ ...value, [key]: t })} error={errors[key]} />
         </View>

@@ -4,6 +4,7 @@ import type { FieldError } from '@/shared/api/errors';
 import type { MaterialInput } from '@/shared/engine';
 import { splitFieldErrors, type FieldErrors, type SplitErrors } from '@/components/ui/save-errors';
 import { bandParameters, minorityParameters, type BandNumberKey, type MinorityKey } from '../band-parameters';
+import { formatForInput } from '@/components/format/number';
 
 /** What the form holds: text as typed, so a half-typed "1e" is not lost. */
 export type FamilyFormValues = {
@@ -46,11 +47,11 @@ export function valuesFromVersion(name: string, version: Pick<FamilyVersion, 'de
   const definition = version.definition;
   if (definition.kind !== 'band') return values;
   const numbers = { ...values.numbers };
-  for (const p of bandParameters) numbers[p.key] = String(definition[p.key]);
+  for (const p of bandParameters) numbers[p.key] = formatForInput(definition[p.key]);
   const stored = definition.minority;
   if (!stored) return { ...values, carrier: definition.carrier, numbers };
   const minority = { ...values.minority };
-  for (const p of minorityParameters) minority[p.key] = String(stored[p.key]);
+  for (const p of minorityParameters) minority[p.key] = formatForInput(stored[p.key]);
   return { ...values, carrier: definition.carrier, numbers, twoBands: true, minority };
 }
 
