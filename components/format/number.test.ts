@@ -50,6 +50,7 @@ describe('number formatting', () => {
     expect(formatForInput(1.5)).toBe('1.5');
     expect(formatForInput(0)).toBe('0');
     expect(formatForInput(0.001)).toBe('0.001');
+    expect(formatForInput(0.0001)).toBe('0.0001');
     expect(formatForInput(null)).toBe('');
     expect(formatForInput(Number.NaN)).toBe('');
     for (const v of [2e19, 1.234567891e-9, 12345678, 0.30000000000000004]) expect(Number(formatForInput(v))).toBe(v);

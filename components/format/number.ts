@@ -77,7 +77,7 @@ export function formatLogTick(v: number): string {
 export function formatForInput(value: number | null | undefined): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return '';
   const size = Math.abs(value);
-  if (value !== 0 && (size < 1e-3 || size >= 1e5)) return value.toExponential().replace('e+', 'e');
+  if (value !== 0 && (size < 1e-4 || size >= 1e5)) return value.toExponential().replace('e+', 'e');
   return String(value);
 }
 

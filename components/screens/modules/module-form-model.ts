@@ -62,7 +62,7 @@ export function moduleInputFrom(t: ModuleText): { input: ModuleInput | null; err
   if (t.name.trim() === '') errors.name = 'Name is required';
   const p = leg('p', t.p);
   const n = leg('n', t.n);
-  const hotSide = num('hotSide', t.hotSide, 'Hot side Th (K)');
+  const hotSide = num('hotSide', t.hotSide, 'Hot-side temperature Th (K)');
   const deltaT = num('deltaT', t.deltaT, 'ΔT (K)');
   const couples = num('couples', t.couples, 'Couples N');
   const optional = {
