@@ -28,7 +28,8 @@ export function moduleFacts(m: ModuleDesign, names: { p: string | null; n: strin
 /** The module read, not edited, with a short notice why there is no form. */
 export function ModuleReadOnly({ module: m }: { module: ModuleDesign }) {
   const list = useModules();
-  const names = list.data?.modules.find((s) => s.id === m.id)?.sourceNames;
+  // Until the list answers, the sources are "…", not "a deleted run".
+  const names = list.isPending ? { p: '…', n: '…' } : list.data?.modules.find((s) => s.id === m.id)?.sourceNames;
   return (
     <View style={styles.wrap}>
       <ReadOnlyNotice what="Saving modules" />
