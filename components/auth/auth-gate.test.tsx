@@ -5,6 +5,7 @@ import { Slot } from 'expo-router';
 import { fireEvent, renderRouter, screen } from 'expo-router/testing-library';
 import { SafeAreaProvider } from 'react-native-safe-area-context';
 import { MaterialsScreen } from '@/components/screens/materials/materials-screen';
+import { SectionStack } from '@/components/screens/runs/section-stack';
 import { ScreenFrame } from '@/components/shell/screen-frame';
 import { tabs } from '@/components/shell/tabs';
 import { createTestQueryClient, mockFetch, sessionAs } from '@/components/test-utils';
@@ -66,6 +67,8 @@ const routes = {
   '(tabs)/_layout': SignedInShell,
   ...tabRoutes(),
   '(tabs)/(materials)/index': MaterialsScreen,
+  // The real stack of the Runs tab: it explains the pages of its own that a role may not use.
+  '(tabs)/(runs)/_layout': SectionStack,
   '(tabs)/(team)/_layout': () => <Slot />,
   '(tabs)/(team)/team/index': () => (
     <ScreenFrame title="Team page">
@@ -120,6 +123,14 @@ describe('the auth gate', () => {
     );
     expect(screen.queryByText('Outbox page')).toBeNull();
     expect(screen.queryByText(/Try again/)).toBeNull();
+  });
+
+  it('explains a page inside a tab’s stack the same way', async () => {
+    mockFetch({ status: 200, body: sessionAs('grower', 'Greta Hahn') });
+    renderRouter(routes, { initialUrl: '/runs' });
+
+    expect(await screen.findByTestId('role-refusal')).toHaveTextContent(/Your role, grower, cannot see designs, runs and modules/);
+    expect(screen.queryByText('Runs page')).toBeNull();
   });
 
   it('gives an admin the Outbox tab', async () => {

@@ -19,7 +19,7 @@ export function AppShell() {
       <View style={wide ? styles.wide : styles.phone}>
         {wide ? <SideRail /> : null}
         <View style={styles.content}>
-          <RoleGate>
+          <RoleGate layer="tabs">
             <TabSlot />
           </RoleGate>
         </View>

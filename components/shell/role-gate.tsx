@@ -19,11 +19,11 @@ export function refusalText(role: string, rule: PageRule, teamName: string): str
  * (typed or followed from a link), says why in words instead of letting
  * the page meet the API's "Forbidden" with a "Try again" that cannot help.
  */
-export function RoleGate({ children }: { children: ReactNode }) {
+export function RoleGate({ layer, children }: { layer: PageRule['layer']; children: ReactNode }) {
   const pathname = usePathname();
   const session = useSession();
   const { can, role } = useRole();
-  const rule = refusedRule(pathname, can);
+  const rule = refusedRule(pathname, can, layer);
   if (!rule || !role || !session) return <>{children}</>;
   return (
     <ScreenFrame title="Not for your role">
