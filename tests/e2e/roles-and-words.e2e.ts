@@ -3,6 +3,7 @@ import { familiesResponseSchema } from '../../shared/api/families';
 import { modulesResponseSchema } from '../../shared/api/modules';
 import {
   baseUrl,
+  convergedRun,
   demoPFamilyName,
   getJsonAs,
   openBrowser,
@@ -136,6 +137,7 @@ describe('a viewer on a module page', () => {
     expect(text).not.toMatch(/\d{10,}/);
     expect(await page.locator('input, textarea').filter({ visible: true }).count()).toBe(0);
     expect(await page.getByText('Save changes').filter({ visible: true }).count()).toBe(0);
+    await saveScreenshot(page, `module-viewer-facts-${width}`);
     await waitForVisibleText(page, 'Current of maximum Qc', 60_000);
     await visible(page.getByText('Current of maximum Qc', { exact: true })).scrollIntoViewIfNeeded();
     if (width === 'phone') await expectNoSidewaysScroll(page);
@@ -207,6 +209,23 @@ describe('a physicist meets messages in the form’s words', () => {
     await page.waitForTimeout(3000);
     await saveScreenshot(page, `family-axes-${width}`);
     await page.close();
+  });
+
+  it('tells the two baselines of a run apart by dash, marker and legend', async () => {
+    const runId = await convergedRun(session, { name: `Baselines ${Date.now().toString(36)}`, controlPoints: 5 });
+    for (const width of widths) {
+      const page = await session.newPage(width);
+      await page.goto(`${baseUrl}/runs/${runId}`);
+      const plot = visible(page.getByTestId('leg-plot-temperature'));
+      await plot.waitFor({ timeout: 60_000 });
+      await plot.scrollIntoViewIfNeeded();
+      const legend = await plot.getByRole('list', { name: 'Legend' }).innerText();
+      expect(legend).toMatch(/Best uniform\s*dashed, squares/);
+      expect(legend).toMatch(/Local-best zT\s*dotted, stars/);
+      await page.waitForTimeout(3000);
+      await saveScreenshot(page, `run-baselines-${width}`);
+      await page.close();
+    }
   });
 
   it('raised no uncaught errors in the page', () => {
