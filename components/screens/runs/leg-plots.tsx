@@ -38,7 +38,7 @@ export function LegPlots({ result, runCase, lengthMm }: LegPlotsProps) {
                   yLabel={info.axis}
                   yScale={info.scale}
                   description={`${info.title} from the cold end (0 mm) to the hot end (${quantity(lengthMm, 'mm')}): ${series.map((s) => s.label).join(', ')}`}
-                  note={q === 'doping' && result.doping ? 'Markers: the optimised control points.' : undefined}
+                  note={q === 'doping' && result.doping ? 'Circles: the optimised control points; squares and stars only mark the baselines.' : undefined}
                 />
               </ChartCard>
             );
