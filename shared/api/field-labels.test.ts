@@ -20,6 +20,8 @@ describe('field labels in messages', () => {
     expect(wordMessage('dueDate', 'dueDate must be a date like 2027-01-31')).toBe('Due date must be a date like 2027-01-31');
     expect(wordMessage('coldSide', 'coldSide must be below hotSide')).toBe('Cold-side target Tc must be below Hot-side temperature Th');
     expect(wordMessage('minPerCm3', 'bounds.minPerCm3: is below the lowest doping')).toBe('Lowest doping: is below the lowest doping');
+    // A quoted value to type stays as written.
+    expect(wordMessage('versus', 'versus must be "current" or "deltaT"')).toBe('versus must be "current" or "deltaT"');
     // Already in words: unchanged.
     expect(wordMessage('dueDate', 'Due date must be a date like 2027-01-31')).toBe('Due date must be a date like 2027-01-31');
   });

@@ -120,7 +120,11 @@ export function wordMessage(path: string, message: string): string {
   const engine = /^[\w.[\]]+: (.*)$/s.exec(text);
   if (label && engine) text = `${label}: ${engine[1]}`;
   else if (label && key && (text === key || text.startsWith(`${key} `))) text = `${label}${text.slice(key.length)}`;
-  return text.replace(keyPattern, (code) => labels[code] ?? code);
+  // A quoted word is a value to type ("current" or "deltaT"), not a field: it stays as written.
+  return text
+    .split(/("[^"]*"|“[^”]*”)/)
+    .map((part, i) => (i % 2 === 1 ? part : part.replace(keyPattern, (code) => labels[code] ?? code)))
+    .join('');
 }
 
 /**
