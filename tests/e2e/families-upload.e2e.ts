@@ -109,7 +109,7 @@ describe('uploading a measured family in a real browser', () => {
     await saveScreenshot(page, 'family-detail-desktop');
 
     await page.getByRole('link', { name: 'Back to Materials' }).filter({ visible: true }).click();
-    await page.waitForURL(`${baseUrl}/`);
+    await page.waitForURL(`${baseUrl}/materials`);
     await waitForVisibleText(page, familyName);
     await saveScreenshot(page, 'materials-after-upload-desktop');
 
