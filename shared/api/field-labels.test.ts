@@ -55,7 +55,8 @@ describe('field labels in messages', () => {
   it('makes a sentence for a summary, keeping the path of a field without a label', () => {
     expect(fieldSentence('p.runId', 'no such run in this team')).toBe('Run (p-type leg): no such run in this team');
     expect(fieldSentence('dueDate', 'dueDate must be a date like 2027-01-31')).toBe('Due date must be a date like 2027-01-31');
-    expect(fieldSentence('file', 'the file is empty')).toBe('File: the file is empty');
+    expect(fieldSentence('file', 'the file is empty')).toBe('The file is empty');
+    expect(fieldSentence('definition.rows[3].seebeck', 'must have the same sign')).toBe('definition.rows[3].seebeck: must have the same sign');
     expect(fieldSentence('', 'the team is read-only')).toBe('The team is read-only');
   });
 });

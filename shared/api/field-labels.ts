@@ -134,8 +134,11 @@ export function wordMessage(path: string, message: string): string {
 export function fieldSentence(path: string, message: string): string {
   const worded = wordMessage(path, message);
   const label = labelOf(path);
-  // A field without a label (an upload's "file", a table cell) keeps its path, so the message still says where.
-  const name = label ?? path;
+  // A field without a label (a table cell) keeps its path, so the message still says where —
+  // unless the message names it already ("the file has 2000 rows" about `file`).
+  const named = label === undefined && new RegExp(`\\b${path.replace(/[^\w]/g, '')}\\b`, 'i').test(worded);
+  const name = label ?? (named ? '' : path);
+  if (name && !label && !worded.startsWith(name)) return `${name}: ${worded}`;
   const text = name && !worded.startsWith(name) ? `${name}: ${worded}` : worded;
   return text.charAt(0).toUpperCase() + text.slice(1);
 }

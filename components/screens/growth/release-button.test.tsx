@@ -53,6 +53,6 @@ describe('ReleaseButton', () => {
     fireEvent.changeText(screen.getByTestId('field-release-batch'), 'NL-P7-25-003');
     await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Release to grower' })));
     expect(await screen.findByText('Only a converged run with a doping profile can be released.')).toBeOnTheScreen();
-    expect(screen.getByText('runId: the run is running')).toBeOnTheScreen();
+    expect(screen.getByText('Run: the run is running')).toBeOnTheScreen();
   });
 });
