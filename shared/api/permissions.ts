@@ -50,10 +50,3 @@ export function roleCan(role: Role | null | undefined, action: Action): boolean 
   if (!role) return false;
   return (actionRoles[action] as readonly Role[]).includes(role);
 }
-
-/** What each reading action lets a role see, in words, for "your role cannot see …". */
-export const readingWords: Partial<Record<Action, string>> = {
-  'designs.read': 'designs, runs and modules',
-  'outbox.read': 'the outbox',
-  'audit.read': 'the audit trail',
-};
