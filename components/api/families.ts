@@ -12,9 +12,10 @@ export const familyDetailKey = (id: string, version?: number) =>
   [...familiesQueryKey, 'detail', id, version ?? 'current'] as const;
 
 /** `GET /api/families` (active) or `?archived=1` (archived only). */
-export function useFamilies(filter: FamilyFilter = 'active') {
+export function useFamilies(filter: FamilyFilter = 'active', o: { enabled?: boolean } = {}) {
   const path = filter === 'archived' ? '/api/families?archived=1' : '/api/families';
   return useQuery({
+    enabled: o.enabled ?? true,
     queryKey: familyListKey(filter),
     queryFn: ({ signal }) => apiGet(path, familiesResponseSchema, { signal }),
   });

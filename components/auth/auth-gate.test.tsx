@@ -4,6 +4,8 @@ import { QueryClientProvider } from '@tanstack/react-query';
 import { Slot } from 'expo-router';
 import { fireEvent, renderRouter, screen } from 'expo-router/testing-library';
 import { SafeAreaProvider } from 'react-native-safe-area-context';
+import { MaterialsScreen } from '@/components/screens/materials/materials-screen';
+import { SectionStack } from '@/components/screens/runs/section-stack';
 import { ScreenFrame } from '@/components/shell/screen-frame';
 import { tabs } from '@/components/shell/tabs';
 import { createTestQueryClient, mockFetch, sessionAs } from '@/components/test-utils';
@@ -11,6 +13,12 @@ import { AuthGate } from './auth-gate';
 import { AuthLayout } from './auth-layout';
 import { SignInScreen } from './sign-in-screen';
 import { SignedInShell } from './signed-in-shell';
+
+// The materials list at "/" is a stand-in (the role decides whether "/" shows it at all).
+jest.mock('@/components/screens/materials/materials-screen', () => {
+  const { Text: MockText } = jest.requireActual<typeof import('react-native')>('react-native');
+  return { MaterialsScreen: () => <MockText>Materials home</MockText> };
+});
 
 const metrics = { frame: { x: 0, y: 0, width: 390, height: 844 }, insets: { top: 0, left: 0, right: 0, bottom: 0 } };
 
@@ -44,7 +52,7 @@ function tabRoutes(): Record<string, () => ReactNode> {
       continue;
     }
     found[`(tabs)/${tab.name}/_layout`] = () => <Slot />;
-    found[`(tabs)/${tab.name}${href === '/' ? '' : href}/index`] = page(tab.label === 'Materials' ? 'Materials home' : `${tab.label} page`);
+    found[`(tabs)/${tab.name}${href}/index`] = page(`${tab.label} page`);
   }
   return found;
 }
@@ -58,6 +66,9 @@ const routes = {
   '(auth)/forgot-password': page('Forgot page'),
   '(tabs)/_layout': SignedInShell,
   ...tabRoutes(),
+  '(tabs)/(materials)/index': MaterialsScreen,
+  // The real stack of the Runs tab: it explains the pages of its own that a role may not use.
+  '(tabs)/(runs)/_layout': SectionStack,
   '(tabs)/(team)/_layout': () => <Slot />,
   '(tabs)/(team)/team/index': () => (
     <ScreenFrame title="Team page">
@@ -82,14 +93,44 @@ describe('the auth gate', () => {
   });
 
   it('shows the shell to a signed-in member, with the tabs of their role', async () => {
-    mockFetch({ status: 200, body: sessionAs('grower', 'Greta Hahn') });
+    mockFetch({ status: 200, body: sessionAs('physicist', 'Piet Bos') });
     const router = renderRouter(routes, { initialUrl: '/' });
 
     expect(await screen.findByText('Materials home')).toBeOnTheScreen();
     expect(router.getPathname()).toBe('/');
     expect(screen.getByTestId('nav-bottom-tabs')).toBeOnTheScreen();
-    expect(screen.getByRole('tab', { name: 'Team' })).toBeOnTheScreen();
+    for (const name of ['Materials', 'Designs', 'Runs', 'Growth', 'Team']) expect(screen.getByRole('tab', { name })).toBeOnTheScreen();
     expect(screen.queryByRole('tab', { name: 'Outbox' })).toBeNull();
+  });
+
+  it('starts a grower on the growth orders, with no Designs or Runs tab', async () => {
+    mockFetch({ status: 200, body: sessionAs('grower', 'Greta Hahn') });
+    const router = renderRouter(routes, { initialUrl: '/' });
+
+    expect(await screen.findByText('Growth page')).toBeOnTheScreen();
+    expect(router.getPathname()).toBe('/growth');
+    expect(screen.getByRole('tab', { name: 'Materials' })).toBeOnTheScreen();
+    expect(screen.queryByRole('tab', { name: 'Designs' })).toBeNull();
+    expect(screen.queryByRole('tab', { name: 'Runs' })).toBeNull();
+  });
+
+  it('explains a page the role may not see, reached by address, instead of showing it', async () => {
+    mockFetch({ status: 200, body: sessionAs('viewer', 'Vera Lind') });
+    renderRouter(routes, { initialUrl: '/outbox' });
+
+    expect(await screen.findByTestId('role-refusal')).toHaveTextContent(
+      /Your role, viewer, cannot see the outbox; ask an admin of Northlight Sensors — detector cooling group if you need to\.$/,
+    );
+    expect(screen.queryByText('Outbox page')).toBeNull();
+    expect(screen.queryByText(/Try again/)).toBeNull();
+  });
+
+  it('explains a page inside a tab’s stack the same way', async () => {
+    mockFetch({ status: 200, body: sessionAs('grower', 'Greta Hahn') });
+    renderRouter(routes, { initialUrl: '/runs' });
+
+    expect(await screen.findByTestId('role-refusal')).toHaveTextContent(/Your role, grower, cannot see designs, runs and modules/);
+    expect(screen.queryByText('Runs page')).toBeNull();
   });
 
   it('gives an admin the Outbox tab', async () => {

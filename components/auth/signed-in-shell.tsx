@@ -1,6 +1,7 @@
 import { useEffect, useState } from 'react';
 import { Redirect, usePathname } from 'expo-router';
 import { AppShell } from '@/components/shell/app-shell';
+import { homeFor } from '@/components/shell/home';
 import { useSession } from './session';
 
 /**
@@ -18,7 +19,12 @@ export function SignedInShell() {
   useEffect(() => {
     if (session) setWasSignedIn(true);
   }, [session]);
-  if (session) return <AppShell />;
+  if (session) {
+    // "/" is each role's start page: a grower's is her growth orders.
+    const home = homeFor(session.user.role);
+    if (pathname === '/' && home !== '/') return <Redirect href={home} />;
+    return <AppShell />;
+  }
   const keepPath = !wasSignedIn && entryPath !== '/';
   return <Redirect href={keepPath ? { pathname: '/sign-in', params: { next: entryPath } } : '/sign-in'} />;
 }

@@ -2,6 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import { IBMPlexMono_400Regular } from '@expo-google-fonts/ibm-plex-mono/400Regular';
 import { useFont } from '@shopify/react-native-skia';
 import { CartesianChart, Line } from 'victory-native';
+import { formatTick } from '@/components/format/number';
 import { colors } from '@/components/theme';
 import { defaultPlotHeight, type LinePlotProps } from './line-plot-types';
 
@@ -21,8 +22,8 @@ export default function LinePlotCanvas({ points, height = defaultPlotHeight }: L
         xKey="x"
         yKeys={['y']}
         domainPadding={{ top: 12, bottom: 4 }}
-        xAxis={{ font, labelColor: colors.textMuted, lineColor: colors.border, tickCount: 6 }}
-        yAxis={[{ font, labelColor: colors.textMuted, lineColor: colors.border, tickCount: 5 }]}
+        xAxis={{ font, labelColor: colors.textMuted, lineColor: colors.border, tickCount: 6, formatXLabel: (v) => formatTick(Number(v)) }}
+        yAxis={[{ font, labelColor: colors.textMuted, lineColor: colors.border, tickCount: 5, formatYLabel: (v) => formatTick(Number(v)) }]}
       >
         {({ points: drawn }) => (
           <Line points={drawn.y} color={colors.heat} strokeWidth={2.5} curveType="natural" />

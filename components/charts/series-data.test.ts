@@ -1,4 +1,5 @@
-import { formatLinear, formatLogTick, logTicks, mergeSeries } from './series-data';
+import { formatLogTick, formatTick } from '@/components/format/number';
+import { logTicks, mergeSeries } from './series-data';
 import type { PlotSeries } from './series-plot-types';
 
 const mark = { color: '#000000', dash: 'solid', marker: 'circle' } as const;
@@ -19,16 +20,18 @@ describe('series data', () => {
   });
 
   it('puts log ticks on 1-2-5 over short ranges and on decades over long ones', () => {
-    expect(logTicks([Math.log10(5e18), 20]).map(formatLogTick)).toEqual(['5e18', '1e19', '2e19', '5e19', '1e20']);
-    expect(logTicks([17, 21]).map(formatLogTick)).toEqual(['1e17', '1e18', '1e19', '1e20', '1e21']);
-    expect(logTicks([Math.log10(1.2e19), Math.log10(1.8e19)]).map(formatLogTick)).toEqual(['1.2e19', '1.8e19']);
+    expect(logTicks([Math.log10(5e18), 20]).map(formatLogTick)).toEqual(['5 × 10¹⁸', '10¹⁹', '2 × 10¹⁹', '5 × 10¹⁹', '10²⁰']);
+    expect(logTicks([17, 21]).map(formatLogTick)).toEqual(['10¹⁷', '10¹⁸', '10¹⁹', '10²⁰', '10²¹']);
+    expect(logTicks([Math.log10(1.2e19), Math.log10(1.8e19)]).map(formatLogTick)).toEqual(['1.2 × 10¹⁹', '1.8 × 10¹⁹']);
     expect(logTicks([])).toEqual([]);
   });
 
-  it('writes linear ticks without float noise', () => {
-    expect(formatLinear(0.30000000000000004)).toBe('0.3');
-    expect(formatLinear(1500)).toBe('1500');
-    expect(formatLinear(2.5e-5)).toBe('2.5e-5');
-    expect(formatLinear(0)).toBe('0');
+  it('writes linear ticks as the screens write numbers, without float noise', () => {
+    expect(formatTick(0.30000000000000004)).toBe('0.3');
+    expect(formatTick(1500)).toBe('1500');
+    // The chart font has no superscript minus: a plain one stands in.
+    expect(formatTick(2.5e-5)).toBe('2.5 × 10-⁵');
+    expect(formatTick(2e19)).toBe('2 × 10¹⁹');
+    expect(formatTick(0)).toBe('0');
   });
 });

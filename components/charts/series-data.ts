@@ -66,18 +66,3 @@ export function logTicks(values: number[]): number[] {
   }
   return ticks.length >= 2 ? ticks : [low, high];
 }
-
-/** Tick label of a log axis at log10 value `v`: "1e19", "2e19", "3.5e20". */
-export function formatLogTick(v: number): string {
-  const exponent = Math.floor(v + 1e-9);
-  const mantissa = Number(Math.pow(10, v - exponent).toPrecision(2));
-  return `${mantissa === 10 ? 1 : mantissa}e${mantissa === 10 ? exponent + 1 : exponent}`;
-}
-
-/** Tick label of a linear axis: short and without float noise. */
-export function formatLinear(value: number): string {
-  if (value === 0) return '0';
-  const size = Math.abs(value);
-  if (size >= 1e5 || size < 1e-3) return value.toExponential(1);
-  return String(Number(value.toPrecision(3)));
-}

@@ -5,7 +5,8 @@ import { DashPathEffect, useFont } from '@shopify/react-native-skia';
 import { CartesianChart, Line, Scatter } from 'victory-native';
 import { colors } from '@/components/theme';
 import { defaultPlotHeight } from './line-plot-types';
-import { formatLinear, formatLogTick, lineKey, logTicks, mergeSeries, pointKey } from './series-data';
+import { formatLogTick, formatTick } from '@/components/format/number';
+import { lineKey, logTicks, mergeSeries, pointKey } from './series-data';
 import type { AxisScale, LineDash, SeriesPlotProps } from './series-plot-types';
 
 const tickFontSize = 11;
@@ -28,7 +29,7 @@ type AxisSetup = {
 };
 
 function axisSetup(scale: AxisScale, values: number[]): AxisSetup {
-  if (scale === 'linear') return { tickCount: 5, format: formatLinear };
+  if (scale === 'linear') return { tickCount: 5, format: formatTick };
   const finite = values.filter(Number.isFinite);
   const ticks = logTicks(finite);
   // Victory thins tickValues down to tickCount: ask for all of them.

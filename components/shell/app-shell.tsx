@@ -2,6 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import { TabSlot, useTabsWithTriggers } from 'expo-router/ui';
 import { colors } from '@/components/theme';
 import { BottomTabs } from './bottom-tabs';
+import { RoleGate } from './role-gate';
 import { SideRail } from './side-rail';
 import { tabTriggers } from './tabs';
 import { useIsWide } from './use-is-wide';
@@ -18,7 +19,9 @@ export function AppShell() {
       <View style={wide ? styles.wide : styles.phone}>
         {wide ? <SideRail /> : null}
         <View style={styles.content}>
-          <TabSlot />
+          <RoleGate layer="tabs">
+            <TabSlot />
+          </RoleGate>
         </View>
         {wide ? null : <BottomTabs />}
       </View>

@@ -18,9 +18,9 @@ export type TabSpec = {
  * line here plus its one-line route file in `app/(tabs)/`.
  */
 export const tabs: readonly TabSpec[] = [
-  { name: '(materials)', href: '/', label: 'Materials', icon: 'materials' },
-  { name: '(designs)', href: '/designs', label: 'Designs', icon: 'designs' },
-  { name: '(runs)', href: '/runs', label: 'Runs', icon: 'runs' },
+  { name: '(materials)', href: '/materials', label: 'Materials', icon: 'materials' },
+  { name: '(designs)', href: '/designs', label: 'Designs', icon: 'designs', requires: 'designs.read' },
+  { name: '(runs)', href: '/runs', label: 'Runs', icon: 'runs', requires: 'designs.read' },
   { name: '(growth)', href: '/growth', label: 'Growth', icon: 'growth' },
   { name: '(team)', href: '/team', label: 'Team', icon: 'team' },
   { name: 'outbox', href: '/outbox', label: 'Outbox', icon: 'outbox', requires: 'outbox.read' },

@@ -14,7 +14,8 @@ describe('splitFieldErrors', () => {
       { field: '', message: 'the team is read-only' },
     ]);
     expect(result.byField).toEqual({ name: 'name → taken' });
-    expect(result.other).toEqual(['definition: unknown key "colour"', 'the team is read-only']);
+    // Fields are named by their labels, and each message reads as a sentence.
+    expect(result.other).toEqual(['Material definition: unknown key "colour"', 'The team is read-only']);
   });
 });
 

@@ -1,4 +1,5 @@
 import type { FieldError } from '@/shared/api/errors';
+import { fieldSentence } from '@/shared/api/field-labels';
 import { ApiError } from '@/components/api/client';
 
 /** Field path (as the API names it, e.g. `definition.effectiveMass`) → message beside that field. */
@@ -9,7 +10,7 @@ export type SplitErrors = { byField: FieldErrors; other: string[] };
 
 /**
  * A field the form shows gets the first message about it, in the form's
- * words (`humanize`); anything else is listed as "field: message".
+ * words (`humanize`); anything else is listed as a sentence naming its field by its label.
  */
 export function splitFieldErrors(
   fieldErrors: readonly FieldError[],
@@ -20,7 +21,7 @@ export function splitFieldErrors(
   const other: string[] = [];
   for (const e of fieldErrors) {
     if (shown.has(e.field)) byField[e.field] ??= humanize(e.field, e.message);
-    else other.push(e.field ? `${e.field}: ${e.message}` : e.message);
+    else other.push(fieldSentence(e.field, e.message));
   }
   return { byField, other };
 }

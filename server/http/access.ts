@@ -2,6 +2,7 @@ import type { Request, RequestHandler } from 'express';
 import type { Session, User } from 'lucia';
 import type { DataSource } from 'typeorm';
 import { roles, type Role } from '../../shared/api/auth';
+import { rolesFor } from '../../shared/api/permissions';
 import type { Auth } from '../auth/lucia';
 import { Team } from '../db/entities';
 import { HttpError, NotFoundError } from './errors';
@@ -10,8 +11,9 @@ import { HttpError, NotFoundError } from './errors';
 export type Access = 'public' | readonly Role[];
 
 export const anyMember: readonly Role[] = roles;
-export const designers: readonly Role[] = ['admin', 'physicist'];
-export const admins: readonly Role[] = ['admin'];
+/** Role lists come from the one permission table (shared/api/permissions.ts) the client uses too. */
+export const designers: readonly Role[] = rolesFor('designs.write');
+export const admins: readonly Role[] = rolesFor('team.manage');
 
 declare module 'express-serve-static-core' {
   interface Request {

@@ -2,6 +2,7 @@ import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { MulterError } from 'multer';
 import { isDatabaseUnavailable } from '../db/db-errors';
 import { logError } from '../ops/error-log';
+import { fieldSentence, wordMessage } from '../../shared/api/field-labels';
 import { uniqueConflict } from './unique-conflict';
 
 export type FieldError = { field: string; message: string };
@@ -25,9 +26,15 @@ export class NotFoundError extends HttpError {
   }
 }
 
+/**
+ * Refused input, field by field. Every message names its field as the form
+ * labels it (shared/api/field-labels.ts), whichever service wrote it; the
+ * field paths stay schema paths, for forms to put each message beside its input.
+ */
 export class ValidationError extends HttpError {
   constructor(errors: FieldError[]) {
-    super(400, errors.map((e) => `${e.field}: ${e.message}`).join('; '), errors, 'ValidationError');
+    const worded = errors.map((e) => ({ field: e.field, message: wordMessage(e.field, e.message) }));
+    super(400, worded.map((e) => fieldSentence(e.field, e.message)).join('; '), worded, 'ValidationError');
   }
 }
 

@@ -1,8 +1,8 @@
 import type { Role } from '../../shared/api/auth';
-import { anyMember } from './access';
+import { rolesFor } from '../../shared/api/permissions';
 
 /** Designs and runs are the physicists' work; growers see released profiles only (growth orders). */
-export const runReaders: readonly Role[] = ['admin', 'physicist', 'viewer'];
+export const runReaders: readonly Role[] = rolesFor('designs.read');
 
 /**
  * Who may read each kind of team object. The route table's reading routes
@@ -11,12 +11,12 @@ export const runReaders: readonly Role[] = ['admin', 'physicist', 'viewer'];
  * matrix test and tests/server/watch-access.test.ts hold them to it.
  */
 export const objectReaders = {
-  family: anyMember,
+  family: rolesFor('families.read'),
   design: runReaders,
   run: runReaders,
   sweep: runReaders,
   module: runReaders,
-  growth: anyMember,
+  growth: rolesFor('growth.read'),
 } as const satisfies Record<string, readonly Role[]>;
 
 export type ObjectKind = keyof typeof objectReaders;

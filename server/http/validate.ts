@@ -1,20 +1,17 @@
 import type { RequestHandler } from 'express';
 import type { z } from 'zod';
+import { issuePath, wordIssue } from '../../shared/api/field-labels';
 import { ValidationError } from './errors';
-
-/** Dotted path of a zod issue, e.g. `definition.rows[3].seebeck`. */
-export function issuePath(path: readonly PropertyKey[]): string {
-  return path.reduce<string>((acc, k) => (typeof k === 'number' ? `${acc}[${k}]` : acc ? `${acc}.${String(k)}` : String(k)), '');
-}
 
 /** Field errors listed per answer: a 2 MB body of bad table rows would otherwise answer with tens of thousands. */
 export const fieldErrorsListed = 50;
 
+/** Parses at the edge; each refused field is named by its label, as the form shows it (shared/api/field-labels.ts). */
 export function parseOrThrow<S extends z.ZodType>(schema: S, value: unknown, prefix = ''): z.output<S> {
   const r = schema.safeParse(value);
   if (r.success) return r.data;
   const issues = r.error.issues;
-  const errors = issues.slice(0, fieldErrorsListed).map((i) => ({ field: [prefix, issuePath(i.path)].filter(Boolean).join('.') || 'body', message: i.message }));
+  const errors = issues.slice(0, fieldErrorsListed).map((i) => ({ field: [prefix, issuePath(i.path)].filter(Boolean).join('.') || 'body', message: wordIssue(i, prefix) }));
   if (issues.length > fieldErrorsListed) errors.push({ field: prefix || 'body', message: `${issues.length - fieldErrorsListed} more problems not listed; fix the ones above first` });
   throw new ValidationError(errors);
 }

@@ -54,7 +54,8 @@ async function main(): Promise<void> {
     });
     console.log(`[admin] ${parsed.data.email} is the admin of the new team "${parsed.data.teamName}" (user ${made.userId}); sign in at ${env.appOrigin} and invite the others from Team.`);
   } catch (err) {
-    if (err instanceof ValidationError) throw new Error(err.message);
+    // The command line names fields as its own flags do, not as the web form labels them.
+    if (err instanceof ValidationError) throw new Error((err.errors ?? []).map((e) => `${e.field}: ${e.message}`).join('; '));
     throw err;
   } finally {
     await ds.destroy();

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import type { Role } from '../../shared/api';
 import { closeOrderSchema, growthStateChangeSchema, hallFactorSchema, releaseRequestSchema, sheetSettingsSchema, yieldSettingsSchema } from '../../shared/api';
+import { rolesFor } from '../../shared/api/permissions';
 import { designers, requireTeam, requireUser } from '../http/access';
 import { auditWho } from '../http/audit-who';
 import { objectReaders } from '../http/object-access';
@@ -12,9 +13,9 @@ import { exportReport, exportSheet } from '../services/growth-export';
 import { changeState, closeOrder, listOrders, orderDetail, releaseRun, updateScatter, updateSheetSettings, uploadMeasurements, type GrowthDeps } from '../services/growth-service';
 
 /** Growers move orders and upload measurements; admins may stand in for them. */
-export const growers: readonly Role[] = ['admin', 'grower'];
+export const growers: readonly Role[] = rolesFor('growth.update');
 /** Who may set the doping scatter behind the yield. */
-const scatterSetters: readonly Role[] = ['admin', 'physicist', 'grower'];
+const scatterSetters: readonly Role[] = rolesFor('growth.scatter');
 
 /** The upload's form fields beside the file; an empty hallFactor means "the band model's". */
 const uploadFields = z.object({

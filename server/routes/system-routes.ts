@@ -1,5 +1,6 @@
 import type { Request } from 'express';
-import { admins, requireTeam } from '../http/access';
+import { rolesFor } from '../../shared/api/permissions';
+import { requireTeam } from '../http/access';
 import { NotFoundError } from '../http/errors';
 import { isLocalOperator } from '../http/local-operator';
 import { route, type RouteSpec } from '../http/route-table';
@@ -28,7 +29,7 @@ export function systemRoutes(deps: HealthDeps & { mailCatcher: boolean }): Route
       res.status(health.status === 'ok' ? 200 : 503).json(healthFor(health, audience(req)));
     }),
     // The outbox exists only where the local catcher does (never in production).
-    route('get', '/outbox', admins, async (req, res) => {
+    route('get', '/outbox', rolesFor('outbox.read'), async (req, res) => {
       if (!deps.mailCatcher) throw new NotFoundError('outbox');
       res.json(await listOutbox(deps.ds, requireTeam(req)));
     }),

@@ -8,7 +8,7 @@ export const growerStates = ['requested', 'accepted', 'growing', 'grown', 'measu
 const zones = z.number({ error: 'zones must be a whole number' }).int({ error: 'zones must be a whole number' }).min(1, { error: 'zones must be 1–12' }).max(12, { error: 'zones must be 1–12' });
 const lossBudget = z.number({ error: 'lossBudget must be a number' }).gt(0, { error: 'lossBudget must be greater than 0' }).max(50, { error: 'lossBudget above 50 is not a tolerance' });
 /** Decades (1σ) of as-grown doping scatter per zone: 0 is a perfect grower, a decade is no control at all. */
-const dopingScatter = z.number({ error: 'dopingScatter must be a number (decades)' }).min(0, { error: 'dopingScatter must be 0–1 decade (1σ)' }).max(1, { error: 'dopingScatter must be 0–1 decade (1σ)' });
+const dopingScatter = z.number({ error: 'dopingScatter must be a number (decades)' }).min(0, { error: 'dopingScatter must be 0–1 decade' }).max(1, { error: 'dopingScatter must be 0–1 decade' });
 const measureTemperature = z.number({ error: 'measureTemperature must be a number' }).min(200, { error: 'measureTemperature is in kelvin (200–400 K)' }).max(400, { error: 'measureTemperature is in kelvin (200–400 K)' });
 
 /** `POST /api/runs/:id/release` — a converged run's profile goes to the grower for a batch. */

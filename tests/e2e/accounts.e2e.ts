@@ -88,7 +88,10 @@ describe('accounts in a real browser', () => {
       await visible(page, 'submit-join').click();
 
       await shellNav(page).waitFor({ state: 'visible', timeout: 30_000 });
-      await page.waitForURL(`${baseUrl}/`);
+      // A grower starts on her growth orders; Materials is one tab away.
+      await page.waitForURL(`${baseUrl}/growth`);
+      await page.getByRole('tab', { name: 'Materials' }).filter({ visible: true }).click();
+      await page.waitForURL(`${baseUrl}/materials`);
       const families = familiesResponseSchema.parse(await getJsonAs(newcomer, '/api/families'));
       await waitForVisibleText(page, families.families[0].name);
       expect(await page.getByRole('tab', { name: 'Team' }).filter({ visible: true }).count()).toBe(1);

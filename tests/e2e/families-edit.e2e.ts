@@ -86,7 +86,7 @@ describe('band-model families in a real browser', () => {
     await button(page, 'Archive').click();
     await button(page, 'Restore from archive').waitFor();
     await page.getByRole('link', { name: 'Back to Materials' }).filter({ visible: true }).click();
-    await page.waitForURL(`${baseUrl}/`);
+    await page.waitForURL(`${baseUrl}/materials`);
     await page.getByRole('tab', { name: 'Archived' }).filter({ visible: true }).click();
     await waitForVisibleText(page, name);
     await saveScreenshot(page, 'materials-archived-desktop');

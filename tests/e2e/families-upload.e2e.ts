@@ -109,7 +109,7 @@ describe('uploading a measured family in a real browser', () => {
     await saveScreenshot(page, 'family-detail-desktop');
 
     await page.getByRole('link', { name: 'Back to Materials' }).filter({ visible: true }).click();
-    await page.waitForURL(`${baseUrl}/`);
+    await page.waitForURL(`${baseUrl}/materials`);
     await waitForVisibleText(page, familyName);
     await saveScreenshot(page, 'materials-after-upload-desktop');
 
@@ -154,7 +154,7 @@ describe('uploading a measured family in a real browser', () => {
     // 2,000 such rows: refused whole, naming the cap and the count.
     await chooseFile(page, 'sparse-2000.csv', sparseGridCsv(2000));
     await waitForVisibleText(page, 'File refused');
-    await waitForVisibleText(page, 'file: the file has 2000 different carrier concentrations; a table holds at most 200 (a measurement campaign has tens)');
+    await waitForVisibleText(page, 'The file has 2000 different carrier concentrations; a table holds at most 200 (a measurement campaign has tens)');
     await expect(page.getByTestId('upload-preview').filter({ visible: true }).count()).resolves.toBe(0);
     await saveScreenshot(page, `upload-refused-${viewport}`);
     await page.close();

@@ -1,5 +1,6 @@
 import type { z } from 'zod';
 import { ApiError } from '@/components/api/client';
+import { labelOf, wordIssue } from '@/shared/api/field-labels';
 
 /** Messages beside fields, and one for the whole form (e.g. "too many attempts"). */
 export type FormErrors<F extends string> = {
@@ -16,13 +17,14 @@ export function hasErrors<F extends string>(errors: FormErrors<F>): boolean {
 }
 
 /**
- * The API and the shared schemas name the field first ("password must be
- * at least 10 characters", "email is not a valid address"); beside the
- * field that reads better without it: "Must be at least 10 characters.",
- * "Not a valid address."
+ * The API and the shared schemas name the field first, by its label or its
+ * key ("Password must be at least 10 characters", "email is not a valid
+ * address"); beside the field that reads better without it: "Must be at
+ * least 10 characters.", "Not a valid address."
  */
 export function fieldMessage(field: string, message: string): string {
-  let trimmed = message.startsWith(`${field} `) ? message.slice(field.length + 1) : message;
+  const name = [labelOf(field), field].find((n) => n !== undefined && message.startsWith(`${n} `));
+  let trimmed = name ? message.slice(name.length + 1) : message;
   if (trimmed !== message && trimmed.startsWith('is ')) trimmed = trimmed.slice(3);
   const sentence = trimmed.charAt(0).toUpperCase() + trimmed.slice(1);
   return /[.!?]$/.test(sentence) ? sentence : `${sentence}.`;
@@ -60,7 +62,7 @@ export function checkForm<F extends string>(
   if (result.success) return null;
   const problems = result.error.issues.map((issue) => ({
     field: String(issue.path[0] ?? ''),
-    message: issue.message,
+    message: wordIssue(issue),
   }));
   return collect(problems, fields, (elsewhere) => elsewhere.join(' ') || 'Check the form.');
 }

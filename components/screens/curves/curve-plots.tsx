@@ -1,5 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 import { SeriesPlot } from '@/components/charts/series-plot';
+import { quantity } from '@/components/screens/runs/run-format';
 import { spacing } from '@/components/theme';
 import { ChartCard } from '@/components/charts/chart-card';
 import type { LegCurve } from './curve-model';
@@ -18,7 +19,7 @@ export function CurvePlots({ legs, deltaT }: { legs: LegCurve[]; deltaT: number 
               series={series}
               xLabel={currentAxis}
               yLabel={info.axis}
-              description={`${info.title} against current at ΔT = ${deltaT} K over the pumping range: ${series.map((s) => s.label).join(', ')}`}
+              description={`${info.title} against current at ΔT = ${quantity(deltaT, 'K')} over the pumping range: ${series.map((s) => s.label).join(', ')}`}
               note="Markers: the currents of maximum Qc and of maximum COP."
             />
           </ChartCard>

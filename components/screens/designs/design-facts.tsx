@@ -1,13 +1,9 @@
-import { StyleSheet, View } from 'react-native';
 import type { Design } from '@/shared/api/designs';
 import { designEndsWords } from '@/components/format/leg-ends-words';
 import { withUnit } from '@/components/format/number';
-import { colors, spacing } from '@/components/theme';
-import { AppText } from '@/components/ui/text';
+import { FactList, type Fact } from '@/components/ui/fact-list';
 import { doping, objectiveInfo, quantity } from '../runs/run-format';
 import { designFieldInfo } from './design-fields';
-
-type Fact = { key: string; label: string; value: string };
 
 const carrierWords = { p: 'p-type', n: 'n-type' } as const;
 
@@ -34,25 +30,5 @@ function facts(d: Design): Fact[] {
 
 /** A design's numbers in trade units, one line each. */
 export function DesignFacts({ design, testID = 'design-facts' }: { design: Design; testID?: string }) {
-  return (
-    <View role="list" aria-label="Design" testID={testID}>
-      {facts(design).map((row, i) => (
-        <View key={row.key} role="listitem" style={[styles.row, i > 0 && styles.divided]} testID={`fact-${row.key}`}>
-          <AppText variant="label" tone="muted" style={styles.label}>
-            {row.label}
-          </AppText>
-          <AppText variant="mono" style={styles.value}>
-            {row.value}
-          </AppText>
-        </View>
-      ))}
-    </View>
-  );
+  return <FactList facts={facts(design)} label="Design" testID={testID} />;
 }
-
-const styles = StyleSheet.create({
-  row: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', gap: spacing.sm, paddingVertical: spacing.xs },
-  divided: { borderTopWidth: 1, borderTopColor: colors.border },
-  label: { minWidth: 140 },
-  value: { flexShrink: 1, textAlign: 'right' },
-});

@@ -3,6 +3,8 @@ import { designInputSchema, type Design, type Objective, type ParasiticKind } fr
 import type { FieldError } from '@/shared/api/errors';
 import { splitFieldErrors, type FieldErrors, type SplitErrors } from '@/components/ui/save-errors';
 import { designFieldInfo, type DesignNumberKey } from './design-fields';
+import { formatForInput } from '@/components/format/number';
+import { labelOf, wordIssue, wordMessage } from '@/shared/api/field-labels';
 
 /** What the form holds: numbers as typed, so a half-typed "1e" is not lost. */
 export type DesignFormValues = {
@@ -50,7 +52,7 @@ export function emptyDesignValues(familyId = ''): DesignFormValues {
   };
 }
 
-const text = (v: number | null) => (v === null ? '' : String(v));
+const text = formatForInput;
 
 /** The form filled from a stored design (editing keeps its family version). */
 export function valuesFromDesign(d: Design): DesignFormValues {
@@ -123,21 +125,12 @@ export function requestBody(values: DesignFormValues): Record<string, unknown> {
   };
 }
 
-const labelOf = (field: string): string | undefined => (designFieldInfo as Record<string, { label: string } | undefined>)[field]?.label;
-
 /**
- * Messages start with the field's code name ("lengthMm must…", or the
- * engine's "bounds.minPerCm3: is below…"); people read its label instead.
+ * Messages name fields by their labels, not their keys ("lengthMm must…",
+ * the engine's "bounds.minPerCm3: is below…"): the one wording of
+ * shared/api/field-labels.ts.
  */
-export function humanize(field: string, message: string): string {
-  const label = labelOf(field);
-  if (!label) return message;
-  const engine = /^[\w.[\]]+: (.*)$/s.exec(message);
-  if (engine) return `${label}: ${engine[1]}`;
-  const rest = message.startsWith(field) ? `${label}${message.slice(field.length)}` : message;
-  // Other fields named inside the message ("… must be below hotSide") by their labels too.
-  return rest.replace(/\b(hotSide|coldSide|minPerCm3|maxPerCm3|lengthMm)\b/g, (code) => labelOf(code) ?? code);
-}
+export const humanize = wordMessage;
 
 const familyMissing = 'Choose a material family';
 
@@ -152,7 +145,7 @@ export function validateDesign(values: DesignFormValues): DesignValidation {
     if (errors[field]) continue;
     if (field === 'familyId') errors[field] = familyMissing;
     else if (body[field] === undefined && issue.code === 'invalid_type') errors[field] = `${labelOf(field) ?? field} is required`;
-    else errors[field] = humanize(field, issue.message);
+    else errors[field] = wordIssue(issue);
   }
   return { ok: false, errors };
 }

@@ -6,6 +6,7 @@ import { Chip } from '@/components/ui/chip';
 import { ErrorLine } from '@/components/ui/field-parts';
 import { AppText } from '@/components/ui/text';
 import { designFieldInfo } from './design-fields';
+import { FamilyChoiceChips } from './family-choice-chips';
 
 export type FamilyPickerProps = {
   familyId: string;
@@ -36,8 +37,7 @@ function VersionLine({ family, familyVersion, onChange }: { family: FamilySummar
 /** One radio chip per gradable family of the team, with its carrier and version in words. */
 export function FamilyPicker({ familyId, familyVersion, error, onChange }: FamilyPickerProps) {
   const query = useFamilies('active');
-  const families = (query.data?.families ?? []).filter(gradable);
-  const chosen = families.find((f) => f.id === familyId);
+  const chosen = (query.data?.families ?? []).find((f) => f.id === familyId);
   const info = designFieldInfo.familyId;
   return (
     <View style={styles.field}>
@@ -52,10 +52,8 @@ export function FamilyPicker({ familyId, familyVersion, error, onChange }: Famil
       </AppText>
       {query.isPending ? <AppText tone="muted">Loading the team’s families…</AppText> : null}
       {query.isError ? <AppText tone="danger">{`Could not load families: ${query.error.message}`}</AppText> : null}
-      <View style={styles.chips} role="radiogroup" aria-labelledby="familyId-label" testID="family-picker">
-        {families.map((f) => (
-          <Chip key={f.id} role="radio" label={`${f.name} (${f.carrier ?? '–'})`} selected={f.id === familyId} onPress={() => onChange(f.id)} />
-        ))}
+      <View testID="family-picker">
+        <FamilyChoiceChips id="design-family" selectedId={familyId} onPick={(f) => onChange(f.id)} fits={gradable} chipLabel={(f) => `${f.name} (${f.carrier ?? '–'})`} ariaLabel={info.label} />
       </View>
       {chosen ? <VersionLine family={chosen} familyVersion={familyVersion} onChange={onChange} /> : null}
       <ErrorLine message={error} testID="error-familyId" />
@@ -65,6 +63,5 @@ export function FamilyPicker({ familyId, familyVersion, error, onChange }: Famil
 
 const styles = StyleSheet.create({
   field: { gap: spacing.xs },
-  chips: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
   versionRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: spacing.sm },
 });

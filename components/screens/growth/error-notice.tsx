@@ -1,3 +1,4 @@
+import { fieldSentence } from '@/shared/api/field-labels';
 import { ApiError } from '@/components/api/client';
 import { Notice } from '@/components/ui/notice';
 import { AppText } from '@/components/ui/text';
@@ -9,7 +10,7 @@ export function ErrorNotice({ title, error, testID }: { title: string; error: Er
     <Notice tone="danger" title={title} testID={testID}>
       <AppText>{error.message}</AppText>
       {fields.map((f, i) => (
-        <AppText key={i} variant="mono">{`${f.field}: ${f.message}`}</AppText>
+        <AppText key={i}>{fieldSentence(f.field, f.message)}</AppText>
       ))}
     </Notice>
   );

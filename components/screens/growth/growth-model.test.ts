@@ -39,7 +39,7 @@ describe('order states', () => {
 describe('forms, checked with the API’s schemas', () => {
   it('a release needs a batch, a real date and K in 1–12', () => {
     const bad = checkRelease({ ...emptyRelease, zones: '0', dueDate: 'soon' });
-    expect(bad).toEqual({ ok: false, problems: { batch: 'batch is required', dueDate: expect.stringMatching(/dueDate must be a date/), zones: 'zones must be 1–12' } });
+    expect(bad).toEqual({ ok: false, problems: { batch: 'Batch is required', dueDate: 'Due date must be a date like 2027-01-31', zones: 'Zones K must be 1–12' } });
     const good = checkRelease({ ...emptyRelease, batch: ' NL-1 ', lossBudget: '0.5' });
     expect(good).toEqual({ ok: true, body: { batch: ' NL-1 ', dueDate: undefined, notes: '', zones: 3, lossBudget: 0.5, measureTemperature: 300 } });
   });
@@ -47,7 +47,7 @@ describe('forms, checked with the API’s schemas', () => {
   it('sheet settings refuse a blank budget and a temperature in °C', () => {
     expect(checkSettings({ zones: 4, lossBudget: '', measureTemperature: '27' })).toEqual({
       ok: false,
-      problems: { lossBudget: 'lossBudget must be a number', measureTemperature: 'measureTemperature is in kelvin (200–400 K)' },
+      problems: { lossBudget: 'ΔT loss budget must be a number', measureTemperature: 'Check temperature is in kelvin (200–400 K)' },
     });
     expect(checkSettings({ zones: 4, lossBudget: '2', measureTemperature: '295' })).toEqual({ ok: true, value: { zones: 4, lossBudget: 2, measureTemperature: 295 } });
   });

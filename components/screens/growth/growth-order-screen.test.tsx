@@ -257,7 +257,7 @@ describe('GrowthOrderScreen: joint bands and the yield', () => {
     expect(screen.getByTestId('yield-note')).toHaveTextContent(/of 600 simulated as-grown legs lose ≤ 1 K at a doping scatter of 0.05 decades \(1σ\) per zone/);
     fireEvent.changeText(screen.getByLabelText(/Doping scatter per zone/), '2');
     fireEvent.press(screen.getByRole('button', { name: 'Recompute yield' }));
-    expect(await screen.findByText('dopingScatter must be 0–1 decade (1σ)')).toBeOnTheScreen();
+    expect(await screen.findByText('Doping scatter per zone (1σ) must be 0–1 decade')).toBeOnTheScreen();
     expect(fetched.requests.some((r) => r.method === 'PUT')).toBe(false);
     fireEvent.changeText(screen.getByLabelText(/Doping scatter per zone/), '0.12');
     fireEvent.press(screen.getByRole('button', { name: 'Recompute yield' }));

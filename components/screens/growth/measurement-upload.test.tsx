@@ -80,7 +80,7 @@ describe('MeasurementUpload', () => {
     await choose();
     expect(await screen.findByTestId('measurement-status')).toHaveTextContent(/Ready to upload/);
     fireEvent.changeText(screen.getByTestId('field-hall-factor'), '7');
-    expect(screen.getByTestId('error-hall-factor')).toHaveTextContent(/hallFactor must be 0.5–2/);
+    expect(screen.getByTestId('error-hall-factor')).toHaveTextContent(/^Hall factor r_H must be 0.5–2/);
     expect(screen.getByRole('button', { name: 'Upload measurements' })).toBeDisabled();
     fireEvent.changeText(screen.getByTestId('field-hall-factor'), '1.1');
     await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Upload measurements' })));

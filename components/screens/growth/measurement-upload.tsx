@@ -17,6 +17,7 @@ import { ErrorNotice } from './error-notice';
 import { MeasurementFormatHelp } from './measurement-format-help';
 import { MeasurementPreview } from './measurement-preview';
 import { readPickedText } from './read-picked-text';
+import { wordIssue } from '@/shared/api/field-labels';
 
 /** "file:line 12:seebeck_uV_per_K" (the API's field of a CSV problem) as a located issue. */
 export function issueFromField(field: string, message: string): UploadIssue {
@@ -65,7 +66,8 @@ export function MeasurementUpload({ orderId, lengthMm, measureTemperature, onSav
   const temperatureError = temperature.trim() === '' || !(t >= 200 && t <= 400) ? 'Give the measurement temperature in kelvin (200–400 K).' : undefined;
   const hall = hallFactor.trim() === '' ? null : hallFactorSchema.safeParse(hallFactor.trim());
   const serverHallError = upload.error instanceof ApiError ? upload.error.fieldErrors.find((e) => e.field === 'hallFactor')?.message : undefined;
-  const hallError = hall && !hall.success ? hall.error.issues[0]?.message : serverHallError;
+  const hallIssue = hall && !hall.success ? hall.error.issues[0] : undefined;
+  const hallError = hallIssue ? wordIssue(hallIssue, 'hallFactor') : serverHallError;
   const hasHall = chosen?.preview.points.some((q) => q.perCm3 !== undefined) ?? false;
   const save = () => {
     if (!chosen || temperatureError || (hall && !hall.success)) return;

@@ -1,5 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 import type { GrowthOrderDto } from '@/shared/api/growth';
+import { Can } from '@/components/auth/session';
 import { spacing } from '@/components/theme';
 import { LinkButton } from '@/components/ui/link-button';
 import { Notice } from '@/components/ui/notice';
@@ -18,7 +19,10 @@ export function OrderOverview({ order }: { order: GrowthOrderDto }) {
           <StateBadge look={growthStateLook[order.state]} size="large" testID="order-state" />
           {closed ? null : <StateBadge look={sheetStatusLook[order.sheetStatus]} testID="order-sheet-status" />}
         </View>
-        <LinkButton variant="quiet" label={`Run ${order.runNumber}`} href={`/runs/${order.runId}`} testID="order-run-link" />
+        {/* Growers see released profiles here, not runs (shared/api/permissions.ts). */}
+        <Can action="designs.read">
+          <LinkButton variant="quiet" label={`Run ${order.runNumber}`} href={`/runs/${order.runId}`} testID="order-run-link" />
+        </Can>
       </View>
       <StateStepper state={order.state} />
       {order.notes ? (

@@ -31,9 +31,9 @@ describe('ReleaseButton', () => {
     fireEvent.changeText(screen.getByTestId('field-release-zones'), '13');
     fireEvent.changeText(screen.getByTestId('field-release-dueDate'), '31/01/2027');
     await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Release to grower' })));
-    expect(screen.getByTestId('error-release-batch')).toHaveTextContent('batch is required');
-    expect(screen.getByTestId('error-release-zones')).toHaveTextContent('zones must be 1–12');
-    expect(screen.getByTestId('error-release-dueDate')).toHaveTextContent(/dueDate must be a date like/);
+    expect(screen.getByTestId('error-release-batch')).toHaveTextContent('Batch is required');
+    expect(screen.getByTestId('error-release-zones')).toHaveTextContent('Zones K must be 1–12');
+    expect(screen.getByTestId('error-release-dueDate')).toHaveTextContent(/^Due date must be a date like 2027-01-31$/);
     expect(requests).toHaveLength(0);
   });
 
@@ -53,6 +53,6 @@ describe('ReleaseButton', () => {
     fireEvent.changeText(screen.getByTestId('field-release-batch'), 'NL-P7-25-003');
     await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Release to grower' })));
     expect(await screen.findByText('Only a converged run with a doping profile can be released.')).toBeOnTheScreen();
-    expect(screen.getByText('runId: the run is running')).toBeOnTheScreen();
+    expect(screen.getByText('Run: the run is running')).toBeOnTheScreen();
   });
 });

@@ -1,4 +1,5 @@
 import { releaseRequestSchema, type ReleaseRequest } from '@/shared/api/growth';
+import { wordIssue } from '@/shared/api/field-labels';
 
 /** The release form as typed: every number still text. */
 export type ReleaseDraft = { batch: string; dueDate: string; notes: string; zones: string; lossBudget: string; measureTemperature: string };
@@ -24,7 +25,7 @@ export function checkRelease(d: ReleaseDraft): { ok: true; body: ReleaseRequest 
   const problems: Partial<Record<ReleaseField, string>> = {};
   for (const issue of parsed.error.issues) {
     const field = String(issue.path[0]) as ReleaseField;
-    problems[field] ??= issue.message;
+    problems[field] ??= wordIssue(issue);
   }
   return { ok: false, problems };
 }

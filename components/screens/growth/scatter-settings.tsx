@@ -7,11 +7,12 @@ import { spacing } from '@/components/theme';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';
 import { ErrorNotice } from './error-notice';
+import { wordIssue } from '@/shared/api/field-labels';
 
 /** The draft checked with the API's own schema: the scatter, or the message for the field. */
 export function checkScatter(text: string): { ok: true; value: number } | { ok: false; message: string } {
   const parsed = yieldSettingsSchema.safeParse({ dopingScatter: Number(text.trim() || Number.NaN) });
-  return parsed.success ? { ok: true, value: parsed.data.dopingScatter } : { ok: false, message: parsed.error.issues[0]?.message ?? 'dopingScatter is not valid' };
+  return parsed.success ? { ok: true, value: parsed.data.dopingScatter } : { ok: false, message: parsed.error.issues[0] ? wordIssue(parsed.error.issues[0]) : 'The doping scatter is not valid' };
 }
 
 /**

@@ -20,7 +20,7 @@ describe('SheetSettings', () => {
     fireEvent.press(screen.getByTestId('zones-5'));
     fireEvent.changeText(screen.getByTestId('field-loss-budget'), 'one');
     await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Apply settings' })));
-    expect(screen.getByTestId('error-loss-budget')).toHaveTextContent('lossBudget must be a number');
+    expect(screen.getByTestId('error-loss-budget')).toHaveTextContent('ΔT loss budget must be a number');
     expect(requests).toHaveLength(0);
     fireEvent.changeText(screen.getByTestId('field-loss-budget'), '0.5');
     fireEvent.changeText(screen.getByTestId('field-check-temperature'), '295');

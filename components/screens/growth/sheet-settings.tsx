@@ -10,6 +10,7 @@ import { Section } from '@/components/ui/form-section';
 import { AppText } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
 import { ErrorNotice } from './error-notice';
+import { wordIssue } from '@/shared/api/field-labels';
 
 export type SheetSettingsProps = { order: GrowthOrderDto; maxZones: number };
 
@@ -23,7 +24,7 @@ export function checkSettings(d: Draft): { ok: true; value: { zones: number; los
   const problems: Problems = {};
   for (const issue of parsed.error.issues) {
     const field = String(issue.path[0]) as keyof Problems;
-    problems[field] ??= issue.message;
+    problems[field] ??= wordIssue(issue);
   }
   return { ok: false, problems };
 }

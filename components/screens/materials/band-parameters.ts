@@ -1,3 +1,4 @@
+import { fieldLabels } from '@/shared/api/field-labels';
 import type { BandParameters, MinorityBand } from '@/shared/engine';
 
 export type BandNumberKey = Exclude<keyof BandParameters, 'carrier' | 'minority'>;
@@ -19,7 +20,7 @@ export type ParameterInfo<K extends string = BandNumberKey> = {
 export const bandParameters: readonly ParameterInfo[] = [
   {
     key: 'effectiveMass',
-    label: 'Effective mass',
+    label: fieldLabels['definition.effectiveMass'],
     symbol: 'm*',
     unit: 'm₀',
     explanation: 'Density-of-states mass over the free-electron mass; a heavier band gives a larger S at the same doping.',
@@ -27,7 +28,7 @@ export const bandParameters: readonly ParameterInfo[] = [
   },
   {
     key: 'mobility300',
-    label: 'Mobility at 300 K',
+    label: fieldLabels['definition.mobility300'],
     symbol: 'μ₃₀₀',
     unit: 'cm²/(V·s)',
     explanation: 'Drift mobility of non-degenerate carriers at 300 K; with the doping it sets σ.',
@@ -35,7 +36,7 @@ export const bandParameters: readonly ParameterInfo[] = [
   },
   {
     key: 'mobilityExponent',
-    label: 'Mobility exponent',
+    label: fieldLabels['definition.mobilityExponent'],
     symbol: 'a',
     unit: '',
     explanation: 'μ follows (T/300 K)^a; about −1.5 when acoustic phonons limit the mobility.',
@@ -43,7 +44,7 @@ export const bandParameters: readonly ParameterInfo[] = [
   },
   {
     key: 'latticeKappa300',
-    label: 'Lattice thermal conductivity at 300 K',
+    label: fieldLabels['definition.latticeKappa300'],
     symbol: 'κL,300',
     unit: 'W/(m·K)',
     explanation: 'Heat carried by lattice vibrations alone; the carriers add L·σ·T on top.',
@@ -51,7 +52,7 @@ export const bandParameters: readonly ParameterInfo[] = [
   },
   {
     key: 'latticeKappaExponent',
-    label: 'Lattice κ exponent',
+    label: fieldLabels['definition.latticeKappaExponent'],
     symbol: 'b',
     unit: '',
     explanation: 'κL follows (T/300 K)^b; about −1 when phonon–phonon (umklapp) scattering dominates.',
@@ -66,7 +67,7 @@ export const carrierExplanation =
 export const minorityParameters: readonly ParameterInfo<MinorityKey>[] = [
   {
     key: 'bandGap',
-    label: 'Band gap at 0 K',
+    label: fieldLabels['definition.minority.bandGap'],
     symbol: 'Eg0',
     unit: 'eV',
     explanation: 'Energy gap to the minority band, extrapolated to 0 K; a narrow gap (bismuth telluride ≈ 0.2 eV) lets carriers across it at room temperature.',
@@ -74,7 +75,7 @@ export const minorityParameters: readonly ParameterInfo<MinorityKey>[] = [
   },
   {
     key: 'bandGapSlope',
-    label: 'Gap temperature coefficient',
+    label: fieldLabels['definition.minority.bandGapSlope'],
     symbol: 'β',
     unit: 'eV/K',
     explanation: 'Eg(T) = Eg0 − β·T; positive when the gap narrows as it warms (typically 1e-4 to 5e-4 eV/K).',
@@ -82,7 +83,7 @@ export const minorityParameters: readonly ParameterInfo<MinorityKey>[] = [
   },
   {
     key: 'effectiveMass',
-    label: 'Minority effective mass',
+    label: fieldLabels['definition.minority.effectiveMass'],
     symbol: 'm*min',
     unit: 'm₀',
     explanation: 'Density-of-states mass of the band across the gap (electrons of a p-type family, holes of an n-type one).',
@@ -90,7 +91,7 @@ export const minorityParameters: readonly ParameterInfo<MinorityKey>[] = [
   },
   {
     key: 'mobility300',
-    label: 'Minority mobility at 300 K',
+    label: fieldLabels['definition.minority.mobility300'],
     symbol: 'μmin,300',
     unit: 'cm²/(V·s)',
     explanation: 'Non-degenerate drift mobility of the minority carriers; the faster they are, the sooner they cut S.',
@@ -98,7 +99,7 @@ export const minorityParameters: readonly ParameterInfo<MinorityKey>[] = [
   },
   {
     key: 'mobilityExponent',
-    label: 'Minority mobility exponent',
+    label: fieldLabels['definition.minority.mobilityExponent'],
     symbol: 'amin',
     unit: '',
     explanation: 'μmin follows (T/300 K)^a; about −1.5 for acoustic phonons.',

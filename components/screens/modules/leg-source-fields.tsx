@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
-import { useFamilies } from '@/components/api/families';
 import { spacing } from '@/components/theme';
 import { Chip } from '@/components/ui/chip';
+import { FamilyChoiceChips } from '@/components/screens/designs/family-choice-chips';
 import { ErrorLine } from '@/components/ui/field-parts';
 import { AppText } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
@@ -18,7 +18,6 @@ type Props = { side: 'p' | 'n'; value: LegText; onChange: (v: LegText) => void; 
 
 /** One leg of the couple: a stored run's leg, or a family at uniform doping with its length and area. */
 export function LegSourceFields({ side, value, onChange, errors }: Props) {
-  const families = useFamilies();
   const set = (patch: Partial<LegText>) => onChange({ ...value, ...patch });
   return (
     <View style={styles.wrap} testID={`leg-${side}`}>
@@ -38,11 +37,15 @@ export function LegSourceFields({ side, value, onChange, errors }: Props) {
         </>
       ) : (
         <>
-          <View style={styles.chips}>
-            {(families.data?.families ?? []).filter((f) => f.carrier === side || f.carrier === null).map((f) => (
-              <Chip key={f.id} role="radio" label={f.name} selected={value.familyId === f.id} onPress={() => set({ familyId: f.id })} testID={`${side}-family-${f.id}`} />
-            ))}
-          </View>
+          <FamilyChoiceChips
+            id={`${side}-family`}
+            selectedId={value.familyId}
+            onPick={(f) => set({ familyId: f.id })}
+            fits={(f) => f.carrier === side || f.carrier === null}
+            chipLabel={(f) => f.name}
+            chipTestID={(f) => `${side}-family-${f.id}`}
+            ariaLabel={`Family of the ${side}-type leg`}
+          />
           <ErrorLine message={errors[`${side}.familyId`]} testID={`${side}-family-error`} />
           <TextField id={`${side}-per-cm3`} label="Doping n" unit="cm⁻³" mono value={value.perCm3} onChangeText={(perCm3) => set({ perCm3 })} error={errors[`${side}.perCm3`]} />
           <TextField id={`${side}-length`} label="Leg length" unit="mm" mono value={value.lengthMm} onChangeText={(lengthMm) => set({ lengthMm })} error={errors[`${side}.lengthMm`]} />

@@ -12,6 +12,7 @@ import { Notice } from '@/components/ui/notice';
 import { AppText } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
 import { LegSourceFields } from './leg-source-fields';
+import { ModuleReadOnly } from './module-facts';
 import { ModuleFields } from './module-fields';
 import { moduleInputFrom, type FieldErrors, type ModuleText } from './module-form-model';
 import { ModuleResults } from './module-results';
@@ -30,6 +31,22 @@ export function ModuleEditor({ initial, saved, onSaved }: Props) {
   const save = useSaveModule();
   const { input, errors } = moduleInputFrom(text);
   const shown = tried ? { ...serverErrors(save.error), ...errors } : {};
+  const downloads = saved ? (
+    <>
+      <DownloadLink label="Export CSV" url={moduleCsvUrl(saved.id)} testID="module-csv" />
+      <DownloadLink label="Export ΔT CSV" url={moduleCsvUrl(saved.id, 'deltaT')} testID="module-csv-delta-t" />
+    </>
+  ) : null;
+  if (!writer && saved) {
+    // A role that cannot save reads the settings as text: no inputs that go nowhere.
+    return (
+      <View style={styles.wrap}>
+        <ModuleReadOnly module={saved} />
+        <View style={styles.actions}>{downloads}</View>
+        <ModuleResults moduleCase={saved.case} />
+      </View>
+    );
+  }
   const submit = () => {
     setTried(true);
     if (input) save.mutate({ id: saved?.id ?? null, body: input }, { onSuccess: (r) => onSaved(r.module) });
@@ -53,8 +70,7 @@ export function ModuleEditor({ initial, saved, onSaved }: Props) {
       ) : null}
       <View style={styles.actions}>
         {writer ? <Button label={save.isPending ? 'Saving…' : saved ? 'Save changes' : 'Save module'} onPress={submit} disabled={save.isPending} /> : null}
-        {saved ? <DownloadLink label="Export CSV" url={moduleCsvUrl(saved.id)} testID="module-csv" /> : null}
-        {saved ? <DownloadLink label="Export ΔT CSV" url={moduleCsvUrl(saved.id, 'deltaT')} testID="module-csv-delta-t" /> : null}
+        {downloads}
       </View>
       {saved ? (
         <ModuleResults moduleCase={saved.case} />

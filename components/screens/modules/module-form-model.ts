@@ -1,4 +1,5 @@
 import type { ModuleInput } from '@/shared/api/modules';
+import { formatForInput } from '@/components/format/number';
 
 export type LegText = { kind: 'run' | 'family'; runId: string; leg: 'optimum' | 'uniform' | 'localBestZt'; familyId: string; perCm3: string; lengthMm: string; areaMm2: string };
 
@@ -61,7 +62,7 @@ export function moduleInputFrom(t: ModuleText): { input: ModuleInput | null; err
   if (t.name.trim() === '') errors.name = 'Name is required';
   const p = leg('p', t.p);
   const n = leg('n', t.n);
-  const hotSide = num('hotSide', t.hotSide, 'Hot side Th (K)');
+  const hotSide = num('hotSide', t.hotSide, 'Hot-side temperature Th (K)');
   const deltaT = num('deltaT', t.deltaT, 'ΔT (K)');
   const couples = num('couples', t.couples, 'Couples N');
   const optional = {
@@ -81,14 +82,14 @@ export function textFrom(input: ModuleInput): ModuleText {
   const leg = (s: ModuleInput['p']): LegText =>
     s.kind === 'run'
       ? { ...emptyLeg('run', s.runId), leg: s.leg ?? 'optimum' }
-      : { ...emptyLeg('family'), familyId: s.familyId, perCm3: String(s.perCm3), lengthMm: String(s.lengthMm), areaMm2: String(s.areaMm2) };
-  const opt = (v: number | undefined) => (v === undefined ? '' : String(v));
+      : { ...emptyLeg('family'), familyId: s.familyId, perCm3: formatForInput(s.perCm3), lengthMm: formatForInput(s.lengthMm), areaMm2: formatForInput(s.areaMm2) };
+  const opt = formatForInput;
   return {
     name: input.name,
     p: leg(input.p),
     n: leg(input.n),
-    hotSide: String(input.hotSide),
-    deltaT: String(input.deltaT),
+    hotSide: formatForInput(input.hotSide),
+    deltaT: formatForInput(input.deltaT),
     couples: opt(input.couples),
     areaRatio: opt(input.areaRatio),
     contactResistivity: opt(input.contactResistivity),

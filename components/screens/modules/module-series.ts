@@ -33,13 +33,14 @@ export function modulePlots(r: ModuleResult): ModulePlotSpec[] {
     series: splitByLimit(title, c.currents, y, c.overLimit),
   });
   const d = r.versusDeltaT;
-  const byDeltaT = (key: string, title: string, yLabel: string, y: (number | null)[]): ModulePlotSpec => ({
+  // Each plot names its own legend: a phrase built from the title read "Current at the current of maximum Qc".
+  const byDeltaT = (key: string, title: string, legend: string, yLabel: string, y: (number | null)[]): ModulePlotSpec => ({
     key,
     group: 'deltaT',
     title: `${title} versus ΔT`,
     xLabel: 'ΔT (K)',
     yLabel,
-    series: splitByLimit(`${title} at the current of maximum Qc`, d.deltaT, y, d.overLimit),
+    series: splitByLimit(legend, d.deltaT, y, d.overLimit),
   });
   const trade = r.trade.rows.map((row) => ({ x: row.maxHeatLoad.current, y: row.maxHeatLoad.voltage }));
   return [
@@ -47,10 +48,10 @@ export function modulePlots(r: ModuleResult): ModulePlotSpec[] {
     byCurrent('cop', 'COP', 'COP (dimensionless)', c.cop),
     byCurrent('voltage', 'Voltage', 'V (V)', c.voltage),
     byCurrent('power', 'Input power', 'P (W)', c.power),
-    byDeltaT('deltaT', 'Heat load Qc', 'Qc (W)', d.heatLoad),
-    byDeltaT('deltaT-cop', 'COP', 'COP (dimensionless)', d.cop),
-    byDeltaT('deltaT-voltage', 'Voltage', 'V (V)', d.voltage),
-    byDeltaT('deltaT-current', 'Current', 'I (A)', d.currents),
+    byDeltaT('deltaT', 'Heat load Qc', 'Maximum Qc at each ΔT', 'Qc (W)', d.heatLoad),
+    byDeltaT('deltaT-cop', 'COP', 'COP where Qc is largest', 'COP (dimensionless)', d.cop),
+    byDeltaT('deltaT-voltage', 'Voltage', 'Voltage where Qc is largest', 'V (V)', d.voltage),
+    byDeltaT('deltaT-current', 'Current', 'Current of maximum Qc', 'I (A)', d.currents),
     {
       key: 'trade',
       group: 'trade',

@@ -4,6 +4,7 @@ import { SeriesPlot } from '@/components/charts/series-plot';
 import { spacing } from '@/components/theme';
 import { AppText } from '@/components/ui/text';
 import { baselineProfiles } from './baseline-profiles';
+import { quantity } from './run-format';
 import { ChartCard } from '@/components/charts/chart-card';
 import { legQuantities, legSeries, positionAxis, type LegQuantity } from './leg-series';
 import type { RunResult } from './run-result';
@@ -36,8 +37,8 @@ export function LegPlots({ result, runCase, lengthMm }: LegPlotsProps) {
                   xLabel={positionAxis}
                   yLabel={info.axis}
                   yScale={info.scale}
-                  description={`${info.title} from the cold end (0 mm) to the hot end (${lengthMm} mm): ${series.map((s) => s.label).join(', ')}`}
-                  note={q === 'doping' && result.doping ? 'Markers: the optimised control points.' : undefined}
+                  description={`${info.title} from the cold end (0 mm) to the hot end (${quantity(lengthMm, 'mm')}): ${series.map((s) => s.label).join(', ')}`}
+                  note={q === 'doping' && result.doping ? 'Circles: the optimised control points; squares and stars only mark the baselines.' : undefined}
                 />
               </ChartCard>
             );

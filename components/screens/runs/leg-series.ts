@@ -42,6 +42,25 @@ function baselineDoping(result: RunResult, lengthMm: number): { uniform: PlotPoi
   return { uniform, local };
 }
 
+/** How many markers a baseline line carries along the leg. */
+const baselineMarkers = 6;
+
+/**
+ * A few of a line's own points, evenly spread and both ends included: the
+ * markers that set the two baselines apart (squares for the best uniform
+ * leg, stars for the local-best-zT leg) where their dashes and dots blur
+ * at phone size or in print.
+ */
+export function markersAlong(line: readonly PlotPoint[], count = baselineMarkers): PlotPoint[] {
+  if (line.length <= count) return [...line];
+  return Array.from({ length: count }, (_, i) => line[Math.round((i * (line.length - 1)) / (count - 1))]);
+}
+
+/** A baseline's line with its markers along it. */
+function baseline(key: string, label: string, mark: PlotSeries['mark'], line: PlotPoint[]): PlotSeries {
+  return { key, label, mark, line, points: markersAlong(line) };
+}
+
 /** The optimum and the baselines along the leg for one quantity (series with no points are left out). */
 export function legSeries(quantity: LegQuantity, result: RunResult, baselines: BaselineProfiles, lengthMm: number): PlotSeries[] {
   const known = quantity === 'doping' ? baselineDoping(result, lengthMm) : null;
@@ -49,8 +68,8 @@ export function legSeries(quantity: LegQuantity, result: RunResult, baselines: B
   const nodes = quantity === 'doping' && result.doping ? result.doping.x.map((f, i) => ({ x: f * lengthMm, y: result.doping!.perCm3[i] })) : undefined;
   const series: PlotSeries[] = [
     { key: 'optimum', label: 'Graded optimum', mark: legMarks.optimum, line: optimum, points: nodes },
-    { key: 'uniform', label: 'Best uniform', mark: legMarks.uniform, line: known ? known.uniform : baselines.uniform ? along(baselines.uniform, quantity) : [] },
-    { key: 'local', label: 'Local-best zT', mark: legMarks.localBestZt, line: known ? known.local : baselines.localBestZt ? along(baselines.localBestZt, quantity) : [] },
+    baseline('uniform', 'Best uniform', legMarks.uniform, known ? known.uniform : baselines.uniform ? along(baselines.uniform, quantity) : []),
+    baseline('local', 'Local-best zT', legMarks.localBestZt, known ? known.local : baselines.localBestZt ? along(baselines.localBestZt, quantity) : []),
   ];
   return series.filter((s) => s.line.length > 0 || (s.points?.length ?? 0) > 0);
 }

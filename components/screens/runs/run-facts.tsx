@@ -13,6 +13,12 @@ import type { RunResult } from './run-result';
 
 type Fact = { key: string; label: string; value: string };
 
+/** What the leg solve found, for the accuracy line: the engine's unknown in words. */
+const solvedFor: Record<RunResult['accuracy']['unknown'], string> = {
+  coldSide: 'the cold-side temperature Tc',
+  heatLoad: 'the heat load Qc',
+};
+
 function facts(detail: RunDetail, r: RunResult): Fact[] {
   const wall = secondsBetween(detail.run.startedAt, detail.run.finishedAt);
   const search = r.search;
@@ -24,7 +30,7 @@ function facts(detail: RunDetail, r: RunResult): Fact[] {
     {
       key: 'accuracy',
       label: 'Accuracy',
-      value: `estimated relative error ${formatScientific(r.accuracy.relativeError, 2)} of ${r.accuracy.unknown} (target ${formatScientific(r.accuracy.tolerance, 1)}); energy balance ${formatScientific(r.accuracy.energyBalance, 2)}`,
+      value: `estimated relative error ${formatScientific(r.accuracy.relativeError, 2)} of ${solvedFor[r.accuracy.unknown]} (target ${formatScientific(r.accuracy.tolerance, 1)}); energy balance ${formatScientific(r.accuracy.energyBalance, 2)}`,
     },
     { key: 'time', label: 'Time taken', value: wall === null ? formatDuration(r.seconds) : `${formatDuration(wall)} from start to finish` },
   ];

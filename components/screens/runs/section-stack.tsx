@@ -1,4 +1,6 @@
+import type { ReactNode } from 'react';
 import { Stack } from 'expo-router';
+import { RoleGate } from '@/components/shell/role-gate';
 import { colors } from '@/components/theme';
 
 const screenOptions = { headerShown: false, contentStyle: { backgroundColor: colors.background } };
@@ -9,5 +11,10 @@ const screenOptions = { headerShown: false, contentStyle: { backgroundColor: col
  * screen draws its own header with a back link.
  */
 export function SectionStack() {
-  return <Stack screenOptions={screenOptions} />;
+  return <Stack screenOptions={screenOptions} screenLayout={gated} />;
+}
+
+/** Each page of the stack explains itself to a role that may not use it (components/shell/page-rules.ts). */
+function gated({ children }: { children: ReactNode }) {
+  return <RoleGate layer="stack">{children}</RoleGate>;
 }

@@ -13,7 +13,7 @@ export function parseVersionParam(raw: string | string[] | undefined): number | 
   return value >= 1 ? value : undefined;
 }
 
-const back = { label: 'Materials', href: '/' } as const;
+const back = { label: 'Materials', href: '/materials' } as const;
 
 /** `/materials/[id]` (`?version=N` for an older version). */
 export function FamilyDetailScreen() {

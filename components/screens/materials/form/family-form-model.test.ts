@@ -88,7 +88,7 @@ describe('band family form model', () => {
       'definition.effectiveMass': 'Effective mass must be greater than 0',
       name: 'a family with this name exists already',
     });
-    expect(split.other).toEqual(['definition: unknown key "colour"']);
+    expect(split.other).toEqual(['Material definition: unknown key "colour"']);
     expect(humanize('definition.mobilityExponent', 'mobilityExponent is required')).toBe('Mobility exponent is required');
   });
 

@@ -4,6 +4,8 @@ import type { FieldError } from '@/shared/api/errors';
 import type { MaterialInput } from '@/shared/engine';
 import { splitFieldErrors, type FieldErrors, type SplitErrors } from '@/components/ui/save-errors';
 import { bandParameters, minorityParameters, type BandNumberKey, type MinorityKey } from '../band-parameters';
+import { formatForInput } from '@/components/format/number';
+import { labelOf, wordIssue, wordMessage } from '@/shared/api/field-labels';
 
 /** What the form holds: text as typed, so a half-typed "1e" is not lost. */
 export type FamilyFormValues = {
@@ -46,11 +48,11 @@ export function valuesFromVersion(name: string, version: Pick<FamilyVersion, 'de
   const definition = version.definition;
   if (definition.kind !== 'band') return values;
   const numbers = { ...values.numbers };
-  for (const p of bandParameters) numbers[p.key] = String(definition[p.key]);
+  for (const p of bandParameters) numbers[p.key] = formatForInput(definition[p.key]);
   const stored = definition.minority;
   if (!stored) return { ...values, carrier: definition.carrier, numbers };
   const minority = { ...values.minority };
-  for (const p of minorityParameters) minority[p.key] = String(stored[p.key]);
+  for (const p of minorityParameters) minority[p.key] = formatForInput(stored[p.key]);
   return { ...values, carrier: definition.carrier, numbers, twoBands: true, minority };
 }
 
@@ -68,28 +70,24 @@ function bandDefinition(values: FamilyFormValues): Record<string, unknown> {
   return definition;
 }
 
-const labels: Record<string, string> = {
-  name: 'Name',
-  summary: 'Summary',
-  source: 'Source',
-  'definition.carrier': 'Carrier type',
-  ...Object.fromEntries(bandParameters.map((p) => [`definition.${p.key}`, p.label])),
-  'definition.minority': 'Minority band',
-  ...Object.fromEntries(minorityParameters.map((p) => [`definition.minority.${p.key}`, p.label])),
-};
+/** The form's fields: the provenance texts, the carrier and the band numbers of both bands. */
+const formFieldList = [
+  'name',
+  'summary',
+  'source',
+  'definition.carrier',
+  ...bandParameters.map((p) => `definition.${p.key}`),
+  'definition.minority',
+  ...minorityParameters.map((p) => `definition.minority.${p.key}`),
+];
 
 /** The label a field has on screen ("Effective mass"), or its path when it has none. */
 export function fieldLabel(field: string): string {
-  return labels[field] ?? field;
+  return labelOf(field) ?? field;
 }
 
-/** The schema's messages start with the field's code name; people read its label instead. */
-export function humanize(field: string, message: string): string {
-  const key = field.split('.').pop() ?? field;
-  const label = labels[field];
-  if (!label || !message.startsWith(key)) return message;
-  return `${label}${message.slice(key.length)}`;
-}
+/** Messages name fields by their labels (shared/api/field-labels.ts), not by their keys. */
+export const humanize = wordMessage;
 
 /**
  * Checks the form with the same schema the server uses. `fixedDefinition`
@@ -107,13 +105,13 @@ export function validate(values: FamilyFormValues, fixedDefinition?: MaterialInp
   const errors: FieldErrors = {};
   for (const issue of parsed.error.issues) {
     const field = issue.path.map(String).join('.');
-    errors[field] ??= humanize(field, issue.message);
+    errors[field] ??= wordIssue(issue);
   }
   return { ok: false, errors };
 }
 
 /** Fields the form shows; API errors on anything else are listed above the buttons. */
-export const formFields = new Set(Object.keys(labels));
+export const formFields = new Set(formFieldList);
 
 export function splitApiErrors(fieldErrors: FieldError[]): SplitErrors {
   return splitFieldErrors(fieldErrors, formFields, humanize);

@@ -13,7 +13,7 @@ export function NewFamilyScreen() {
     <ScreenFrame
       title="New band-model family"
       subtitle="Describe the material by its band: the app derives S, σ and κ at any doping and temperature."
-      back={{ label: 'Materials', href: '/' }}
+      back={{ label: 'Materials', href: '/materials' }}
     >
       <FamilyWriteGuard>
         <FamilyForm

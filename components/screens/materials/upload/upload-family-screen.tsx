@@ -46,7 +46,7 @@ export function UploadFamilyScreen() {
     <ScreenFrame
       title="Upload a measured table"
       subtitle="S, σ and κ measured on a doping × temperature grid, from a CSV file."
-      back={{ label: 'Materials', href: '/' }}
+      back={{ label: 'Materials', href: '/materials' }}
     >
       <FamilyWriteGuard>
         <Section title="1 · Choose a CSV file">

@@ -1,0 +1,1 @@
+export { MaterialsScreen as default } from '@/components/screens/materials/materials-screen';
