@@ -6,6 +6,7 @@ import {
   chooseCsvFile,
   convergedRun,
   demoPFamilyName,
+  eventually,
   getJsonAs,
   openBrowser,
   pageProblems,
@@ -70,6 +71,12 @@ describe('every screen fits a phone, a tablet and a desktop: no sideways page, n
     // A two-point sweep of the hot side: short runs, finished or not by the time its page is checked.
     const { sweep } = (await postJsonAs(admin, `/api/designs/${run.design.id}/sweeps`, { parameter: 'hotSide', values: [295, 305] })) as { sweep: { id: string } };
     const { order } = (await postJsonAs(admin, `/api/runs/${runA}/release`, { batch: `Layout ${stamp}`, zones: 3 })) as { order: { id: string } };
+    // Growing needs the sheet's zones and bands: wait for the worker to have computed them.
+    await eventually(async () => {
+      const detail = (await getJsonAs(admin, `/api/growth-orders/${order.id}`)) as { order: { sheetStatus: string } };
+      if (detail.order.sheetStatus === 'failed') throw new Error('the growth sheet failed');
+      return detail.order.sheetStatus === 'ready' ? true : undefined;
+    }, 180, 'the growth sheet to be ready');
     for (const state of ['accepted', 'growing', 'grown']) await putJsonAs(admin, `/api/growth-orders/${order.id}/state`, { state });
     screens.push(
       { name: 'materials', path: '/' },

@@ -1,12 +1,13 @@
 /**
  * Run numbers ("Run 12"): one sequence per team, given at launch, distinct
  * when launches race, never given twice. No worker takes this file's queue:
- * the runs stay queued, numbering is all that is looked at.
+ * the runs stay queued, numbering is all that is looked at. Each test makes
+ * teams of its own, so the launch limit never counts another file's runs.
  */
 import { randomUUID } from 'node:crypto';
 import { runsResponseSchema, runSummarySchema, sweepSchema } from '../../shared/api';
 import { RunNumbers1764655200000 } from '../../server/db/migrations/1764655200000-run-numbers';
-import { demo, openContext, signedIn, type TestContext } from './context';
+import { newTeam, openContext, type TestContext } from './context';
 
 let ctx: TestContext;
 jest.setTimeout(120_000);
@@ -23,7 +24,7 @@ afterAll(async () => {
   await ctx.close();
 });
 
-type Api = Awaited<ReturnType<typeof signedIn>>;
+type Api = Awaited<ReturnType<typeof newTeam>>['api'];
 
 /** The issue's benchmark band family, parameters invented; each team gets its own copy. */
 const band = { kind: 'band', carrier: 'p', effectiveMass: 1, mobility300: 350, mobilityExponent: -1.5, latticeKappa300: 1, latticeKappaExponent: -1 } as const;
@@ -42,12 +43,14 @@ const lastNumber = async (teamEmail: string): Promise<number> => {
 };
 
 it('launches at the same moment get distinct, consecutive numbers of their own team; another team counts on its own', async () => {
-  const piet = await signedIn(ctx, demo.physicist);
-  const hana = await signedIn(ctx, demo.otherTeamAdmin);
+  const mineTeam = await newTeam(ctx, { displayName: 'Piet Okafor' });
+  const theirTeam = await newTeam(ctx);
+  const piet = mineTeam.api;
+  const hana = theirTeam.api;
   const mine = await design(piet, `Numbered ${Date.now()}`, 3);
   const theirs = await design(hana, `Harbour numbered ${Date.now()}`, 150);
-  const before = await lastNumber(demo.physicist);
-  const otherBefore = await lastNumber(demo.otherTeamAdmin);
+  const before = await lastNumber(mineTeam.email);
+  const otherBefore = await lastNumber(theirTeam.email);
   const launches = await Promise.all([
     ...Array.from({ length: 6 }, () => piet.post(`/api/designs/${mine}/runs`)),
     ...Array.from({ length: 3 }, () => hana.post(`/api/designs/${theirs}/runs`)),
@@ -66,9 +69,10 @@ it('launches at the same moment get distinct, consecutive numbers of their own t
 });
 
 it('a sweep numbers its runs in the same sequence, and a refused launch gives no number away', async () => {
-  const piet = await signedIn(ctx, demo.physicist);
+  const team = await newTeam(ctx);
+  const piet = team.api;
   const id = await design(piet, `Swept numbers ${Date.now()}`, 2);
-  const before = await lastNumber(demo.physicist);
+  const before = await lastNumber(team.email);
   const sweep = await piet.post(`/api/designs/${id}/sweeps`).send({ parameter: 'hotSide', values: [290, 300, 310] });
   expect(sweep.status).toBe(201);
   expect(sweepSchema.parse(sweep.body.sweep).runs.map((r) => r.number).sort((a, b) => a - b)).toEqual([before + 1, before + 2, before + 3]);
@@ -80,21 +84,30 @@ it('a sweep numbers its runs in the same sequence, and a refused launch gives no
 });
 
 it('the migration numbers existing runs per team in launch order and the counter continues after them', async () => {
+  // Down and up again inside one transaction that is rolled back: the other
+  // test files launching runs meanwhile wait on the lock (taken team first,
+  // then run, the order a launch takes them, so no deadlock) and never see
+  // the column missing.
   const qr = ctx.ds.createQueryRunner();
+  let rows: Array<{ team_id: string; number: number; k: number }>;
+  let counters: Array<{ n: number; runs: number }>;
+  await qr.startTransaction();
   try {
+    await qr.query('LOCK TABLE team, run IN ACCESS EXCLUSIVE MODE');
     const migration = new RunNumbers1764655200000();
     await migration.down(qr);
     await migration.up(qr);
+    rows = (await qr.query(`SELECT team_id, number, row_number() OVER (PARTITION BY team_id ORDER BY created_at, id)::int AS k FROM run`)) as typeof rows;
+    counters = (await qr.query(`SELECT t.last_run_number AS n, (SELECT count(*)::int FROM run WHERE team_id = t.id) AS runs FROM team t`)) as typeof counters;
   } finally {
+    await qr.rollbackTransaction();
     await qr.release();
   }
-  const rows = (await ctx.ds.query(`SELECT team_id, number, row_number() OVER (PARTITION BY team_id ORDER BY created_at, id)::int AS k FROM run`)) as Array<{ team_id: string; number: number; k: number }>;
   expect(rows.length).toBeGreaterThan(9);
   expect(rows.filter((r) => r.number !== r.k)).toEqual([]);
-  const counters = (await ctx.ds.query(`SELECT t.last_run_number AS n, (SELECT count(*)::int FROM run WHERE team_id = t.id) AS runs FROM team t`)) as Array<{ n: number; runs: number }>;
   expect(counters.filter((c) => c.n !== c.runs)).toEqual([]);
-  const piet = await signedIn(ctx, demo.physicist);
-  const id = await design(piet, `After backfill ${Date.now()}`, 1);
-  const before = await lastNumber(demo.physicist);
-  expect(runSummarySchema.parse((await piet.post(`/api/designs/${id}/runs`)).body.run).number).toBe(before + 1);
+  const team = await newTeam(ctx);
+  const id = await design(team.api, `After backfill ${Date.now()}`, 1);
+  const before = await lastNumber(team.email);
+  expect(runSummarySchema.parse((await team.api.post(`/api/designs/${id}/runs`)).body.run).number).toBe(before + 1);
 });
