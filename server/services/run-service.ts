@@ -29,7 +29,7 @@ export function summarise(r: Run, designName: string, launchedBy: string, waitin
   const p = r.progress as Partial<RunProgress> | null;
   const res = r.result as { objective?: { value: number }; deltaT?: number; profile?: ProfileLike } | null;
   return {
-    id: r.id, number: r.number, designId: r.designId, designName, sweepId: r.sweepId, sweepValue: r.sweepValue, state: r.state, objective: r.objective,
+    id: r.id, number: r.number, kind: 'leg', designId: r.designId, coolerId: null, designName, sweepId: r.sweepId, sweepValue: r.sweepValue, state: r.state, objective: r.objective,
     best: res?.objective?.value ?? p?.best ?? null, deltaT: res?.deltaT ?? null,
     fractionDone: r.state === 'succeeded' ? 1 : p?.fractionDone ?? 0,
     starts: startsOf(r),

@@ -13,3 +13,4 @@ export * from './growth-documents';
 export * from './account-mail';
 export * from './audit';
 export * from './growth-mail';
+export * from './coolers';

@@ -2,6 +2,9 @@ import { z } from 'zod';
 import { idSchema, isoDateTimeSchema } from './common';
 import { designSchema } from './designs';
 
+/** What a run optimises: one leg (from a design), a matched couple or a cascade (from a cooler, see coolers.ts). */
+export const runKindSchema = z.enum(['leg', 'couple', 'cascade']);
+
 export const runStateSchema = z.enum(['queued', 'running', 'succeeded', 'failed', 'cancelled']);
 
 /**
@@ -65,7 +68,12 @@ export const runSummarySchema = z.object({
   id: idSchema,
   /** The team's short number for the run ("Run 12"): 1, 2, 3 … in launch order, never reused. */
   number: z.number().int().min(1),
-  designId: idSchema,
+  kind: runKindSchema.default('leg'),
+  /** The leg design a leg run ran; null for couple and cascade runs. */
+  designId: idSchema.nullable(),
+  /** The cooler (couple or cascade) a couple or cascade run ran; null for leg runs. */
+  coolerId: idSchema.nullable().default(null),
+  /** The design's or the cooler's name. */
   designName: z.string(),
   sweepId: idSchema.nullable(),
   sweepValue: z.number().nullable(),
@@ -105,7 +113,7 @@ export const tracePageQuerySchema = z.object({
 });
 export const tracePageSchema = z.object({ total: z.number().int(), offset: z.number().int(), points: z.array(tracePointSchema) });
 
-/** A stored run: the frozen design and case it ran, its progress trace and its result (engine output). */
+/** A stored leg run (kind "leg"; couple and cascade runs: coolerRunDetailSchema in coolers.ts): the frozen design and case it ran, its progress trace and its result (engine output). */
 export const runDetailSchema = z.object({
   run: runSummarySchema,
   design: designSchema,
@@ -135,6 +143,7 @@ export const sweepSchema = z.object({
   runs: z.array(runSummarySchema),
 });
 
+export type RunKind = z.infer<typeof runKindSchema>;
 export type RunState = z.infer<typeof runStateSchema>;
 export type RunProgress = z.infer<typeof runProgressSchema>;
 export type RunStartProgress = z.infer<typeof runStartProgressSchema>;

@@ -21,7 +21,8 @@ export function RunLegPicker({ side, runId, onPick, error }: Props) {
   const runs = useRuns();
   const designs = useDesigns();
   const carrierOf = new Map((designs.data?.designs ?? []).map((d) => [d.id, d.carrier]));
-  const fits = (r: RunSummary) => hasResult(r) && [side, null].includes(carrierOf.get(r.designId) ?? null);
+  // Leg runs only: a couple or cascade run's legs come in whole from its cooler.
+  const fits = (r: RunSummary) => r.kind === 'leg' && r.designId !== null && hasResult(r) && [side, null].includes(carrierOf.get(r.designId) ?? null);
   const all = runs.data?.runs ?? [];
   const chosen = all.find((r) => r.id === runId);
   const choices = [...(chosen ? [chosen] : []), ...all.filter((r) => r.id !== runId && fits(r)).slice(0, offered)];

@@ -81,7 +81,9 @@ export function runSummary(state: RunState, overrides: Partial<RunSummary> = {})
   return {
     id: ids.run,
     number: 7,
+    kind: 'leg',
     designId: ids.design,
+    coolerId: null,
     designName: 'Detector p-leg',
     sweepId: null,
     sweepValue: null,
