@@ -1,7 +1,7 @@
 import { useMutation, useQueries, useQuery, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
+import { anyRunDetailSchema, type AnyRunDetail, type CoolerRunDetail } from '@/shared/api/coolers';
 import {
-  runDetailSchema,
   runSummarySchema,
   runsResponseSchema,
   sweepSchema,
@@ -15,9 +15,9 @@ import { apiBaseUrl, apiGet, apiSend } from './client';
 /** Every runs and sweeps query starts with this key: a `run:state` event refreshes them all. */
 export const runsQueryKey = ['runs'] as const;
 
-export type RunFilter = { designId?: string; sweepId?: string };
+export type RunFilter = { designId?: string; sweepId?: string; coolerId?: string };
 
-export const runListKey = (filter: RunFilter = {}) => [...runsQueryKey, 'list', filter.designId ?? '', filter.sweepId ?? ''] as const;
+export const runListKey = (filter: RunFilter = {}) => [...runsQueryKey, 'list', filter.designId ?? '', filter.sweepId ?? '', filter.coolerId ?? ''] as const;
 export const runDetailKey = (id: string) => [...runsQueryKey, 'detail', id] as const;
 export const sweepKey = (id: string) => [...runsQueryKey, 'sweep', id] as const;
 
@@ -37,6 +37,7 @@ function listPath(filter: RunFilter): string {
   const query = new URLSearchParams();
   if (filter.designId) query.set('designId', filter.designId);
   if (filter.sweepId) query.set('sweepId', filter.sweepId);
+  if (filter.coolerId) query.set('coolerId', filter.coolerId);
   const text = query.toString();
   return text ? `/api/runs?${text}` : '/api/runs';
 }
@@ -47,7 +48,7 @@ function listPath(filter: RunFilter): string {
  */
 const whileWaitingMs = 5000;
 
-/** `GET /api/runs?designId=&sweepId=`: newest first (at most 200). */
+/** `GET /api/runs?designId=&sweepId=&coolerId=`: newest first (at most 200). */
 export function useRuns(filter: RunFilter = {}) {
   return useQuery({
     queryKey: runListKey(filter),
@@ -59,12 +60,16 @@ export function useRuns(filter: RunFilter = {}) {
 const runPath = (id: string) => `/api/runs/${encodeURIComponent(id)}`;
 const runDetailQuery = (id: string) => ({
   queryKey: runDetailKey(id),
-  queryFn: ({ signal }: { signal: AbortSignal }) => apiGet(runPath(id), runDetailSchema, { signal }),
+  queryFn: ({ signal }: { signal: AbortSignal }) => apiGet(runPath(id), anyRunDetailSchema, { signal }),
   enabled: id.length > 0,
-  refetchInterval: (q: { state: { data?: RunDetail } }) => (q.state.data?.run.state === 'queued' ? whileWaitingMs : false),
+  refetchInterval: (q: { state: { data?: AnyRunDetail } }) => (q.state.data?.run.state === 'queued' ? whileWaitingMs : false),
 });
 
-/** `GET /api/runs/:id`: the frozen design, progress, trace and (when finished) the result. */
+/** A leg run's detail (a design and a leg result) rather than a couple's or a cascade's (a cooler). */
+export const isLegRunDetail = (d: AnyRunDetail): d is RunDetail => !('cooler' in d);
+export const isCoolerRunDetail = (d: AnyRunDetail): d is CoolerRunDetail => 'cooler' in d;
+
+/** `GET /api/runs/:id`: the frozen design (or cooler), progress, trace and (when finished) the result; any kind of run. */
 export function useRunDetail(id: string) {
   return useQuery(runDetailQuery(id));
 }

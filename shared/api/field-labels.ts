@@ -50,6 +50,14 @@ export const fieldLabels = {
   runId: 'Run',
   leg: 'Leg',
   perCm3: 'Doping n',
+  // Coolers: matched couples and cascades (shared/api/coolers.ts).
+  designId: 'Leg design',
+  stages: 'Stages',
+  interfaceResistance: 'Interface resistance to the next stage',
+  wiring: 'Wiring',
+  couplesLimit: 'Couple counts',
+  'couplesLimit.total': 'Total couples',
+  baseAreaMm2: 'Base area',
   // Growth orders (shared/api/growth.ts).
   batch: 'Batch',
   dueDate: 'Due date',

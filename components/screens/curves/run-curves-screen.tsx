@@ -1,6 +1,6 @@
 import { useLocalSearchParams } from 'expo-router';
 import { ApiError } from '@/components/api/client';
-import { useRunDetail } from '@/components/api/runs';
+import { isLegRunDetail, useRunDetail } from '@/components/api/runs';
 import { runName, runTitle } from '@/components/screens/runs/run-format';
 import { parseRunResult } from '@/components/screens/runs/run-result';
 import { ScreenFrame } from '@/components/shell/screen-frame';
@@ -29,7 +29,8 @@ export function RunCurvesScreen() {
     );
   }
   const detail = query.data;
-  const parsed = parseRunResult(detail.result);
+  // A couple's or cascade's run has no single leg to draw curves of: its page shows its own results.
+  const parsed = isLegRunDetail(detail) ? parseRunResult(detail.result) : { ok: false as const, message: 'This run optimised a matched couple or a cascade: its results are on the run page.' };
   return (
     <ScreenFrame
       title={`Operating curves of ${runName(detail.run)}`}

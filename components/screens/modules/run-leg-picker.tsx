@@ -11,13 +11,14 @@ import { AppText } from '@/components/ui/text';
 /** How many recent runs of the right carrier the picker offers besides the one chosen. */
 const offered = 8;
 
-type Props = { side: 'p' | 'n'; runId: string; onPick: (runId: string) => void; error?: string };
+type Props = { side: 'p' | 'n'; runId: string; onPick: (runId: string) => void; error?: string; idPrefix?: string };
 
 /**
  * A finished run whose family has this leg's carrier (or none, a constant
  * material), newest first: picked by design, objective and date, not by id.
  */
-export function RunLegPicker({ side, runId, onPick, error }: Props) {
+export function RunLegPicker({ side, runId, onPick, error, idPrefix = '' }: Props) {
+  const id = `${idPrefix}${side}`;
   const runs = useRuns();
   const designs = useDesigns();
   const carrierOf = new Map((designs.data?.designs ?? []).map((d) => [d.id, d.carrier]));
@@ -28,17 +29,17 @@ export function RunLegPicker({ side, runId, onPick, error }: Props) {
   const choices = [...(chosen ? [chosen] : []), ...all.filter((r) => r.id !== runId && fits(r)).slice(0, offered)];
   const loading = runs.isPending || designs.isPending;
   return (
-    <View style={styles.wrap} testID={`${side}-run-picker`}>
+    <View style={styles.wrap} testID={`${id}-run-picker`}>
       <AppText variant="label">{`Run (finished, ${side}-type family)`}</AppText>
       {loading ? <AppText tone="muted">Loading runs…</AppText> : null}
       {!loading && choices.length === 0 ? <AppText tone="muted">{`No finished ${side}-type runs yet: launch one from a design, or use a family at uniform doping.`}</AppText> : null}
       {!loading && runId !== '' && !chosen ? <AppText tone="danger">The chosen run is no longer in your team: pick another.</AppText> : null}
       <View style={styles.chips} role="radiogroup" aria-label={`Run for the ${side}-type leg`}>
         {choices.map((r) => (
-          <Chip key={r.id} role="radio" label={runChoiceLabel(r)} selected={r.id === runId} onPress={() => onPick(r.id)} testID={`${side}-run-${r.id}`} />
+          <Chip key={r.id} role="radio" label={runChoiceLabel(r)} selected={r.id === runId} onPress={() => onPick(r.id)} testID={`${id}-run-${r.id}`} />
         ))}
       </View>
-      <ErrorLine message={error} testID={`${side}-run-error`} />
+      <ErrorLine message={error} testID={`${id}-run-error`} />
     </View>
   );
 }

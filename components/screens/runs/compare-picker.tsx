@@ -22,7 +22,8 @@ type Props = {
 
 /** What is in the comparison: recent finished runs and saved modules, up to `maxCompared` of each. */
 export function ComparePicker({ runs, modules, runIds, moduleIds, onChange }: Props) {
-  const finished = runs.filter(hasResult);
+  // Leg runs: a cascade or couple has no leg profile to overlay (cascades compare on /stages/compare).
+  const finished = runs.filter((r) => r.kind === 'leg' && hasResult(r));
   const offered = [...finished.filter((r) => runIds.includes(r.id)), ...finished.filter((r) => !runIds.includes(r.id)).slice(0, offeredRuns)];
   return (
     <Section title="In this comparison" hint={`Up to ${maxCompared} runs and ${maxCompared} modules; at least two things in all.`}>

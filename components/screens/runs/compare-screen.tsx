@@ -3,7 +3,7 @@ import { router, useLocalSearchParams } from 'expo-router';
 import type { ModuleDesign, ModuleSummary } from '@/shared/api/modules';
 import type { RunDetail } from '@/shared/api/runs';
 import { useModuleDetails, useModules } from '@/components/api/modules';
-import { useRunDetails, useRuns } from '@/components/api/runs';
+import { isLegRunDetail, useRunDetails, useRuns } from '@/components/api/runs';
 import { SeriesPlot } from '@/components/charts/series-plot';
 import { ScreenFrame } from '@/components/shell/screen-frame';
 import { spacing } from '@/components/theme';
@@ -76,7 +76,8 @@ export function CompareScreen() {
   const runList = useRuns();
   const moduleList = useModules();
   const failed = [...runQueries, ...moduleQueries].find((q) => q.isError);
-  const details = loaded(runQueries);
+  // Leg runs only: cascades are compared on the Stages page (/stages/compare).
+  const details = loaded(runQueries)?.filter(isLegRunDetail) ?? null;
   const modules = loaded(moduleQueries.map((q) => ({ data: q.data?.module, isError: q.isError })));
   const total = runIds.length + moduleIds.length;
   const summaries = moduleList.data?.modules ?? [];

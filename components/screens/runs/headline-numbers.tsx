@@ -1,14 +1,13 @@
 import { StyleSheet, View } from 'react-native';
 import type { Objective } from '@/shared/api/designs';
-import { colors, radii, spacing } from '@/components/theme';
+import { spacing } from '@/components/theme';
+import { FigureTiles, type FigureTile } from '@/components/ui/figure-tiles';
 import { AppText } from '@/components/ui/text';
 import { doping, formatObjective, objectiveInfo, quantity } from './run-format';
 import type { RunResult } from './run-result';
 
-type Tile = { key: string; label: string; value: string; lead?: boolean };
-
-function tiles(r: RunResult, objective: Objective): Tile[] {
-  const list: Tile[] = [
+function tiles(r: RunResult, objective: Objective): FigureTile[] {
+  const list: FigureTile[] = [
     { key: 'deltaT', label: 'Temperature drop ΔT', value: quantity(r.deltaT, 'K'), lead: objective === 'maxDeltaT' },
     { key: 'coldSide', label: 'Cold side Tc', value: quantity(r.coldSide, 'K') },
     { key: 'current', label: 'Current I', value: quantity(r.current, 'A') },
@@ -23,20 +22,7 @@ function tiles(r: RunResult, objective: Objective): Tile[] {
 
 /** The converged leg's numbers, the optimised one first and highlighted by a frame and the word "objective". */
 export function HeadlineNumbers({ result, objective }: { result: RunResult; objective: Objective }) {
-  const list = tiles(result, objective);
-  const sorted = [...list.filter((t) => t.lead), ...list.filter((t) => !t.lead)];
-  return (
-    <View style={styles.grid} testID="headline-numbers">
-      {sorted.map((t) => (
-        <View key={t.key} style={[styles.tile, t.lead && styles.lead]} testID={`headline-${t.key}`}>
-          <AppText variant="caption" tone="muted">
-            {t.lead ? `${t.label} · objective` : t.label}
-          </AppText>
-          <AppText variant={t.lead ? 'title' : 'heading'}>{t.value}</AppText>
-        </View>
-      ))}
-    </View>
-  );
+  return <FigureTiles tiles={tiles(result, objective)} testID="headline-numbers" prefix="headline" />;
 }
 
 type GainRow = { key: string; name: string; gain: number; baseline: number; detail: string };
@@ -81,18 +67,6 @@ export function Gains({ result, objective }: { result: RunResult; objective: Obj
 }
 
 const styles = StyleSheet.create({
-  grid: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
-  tile: {
-    flexGrow: 1,
-    flexBasis: 150,
-    backgroundColor: colors.surface,
-    borderWidth: 1,
-    borderColor: colors.border,
-    borderRadius: radii.md,
-    padding: spacing.md,
-    gap: spacing.xxs,
-  },
-  lead: { borderColor: colors.primary, borderWidth: 2, flexBasis: 220 },
   gains: { gap: spacing.md },
   gainRow: { gap: spacing.xxs },
 });

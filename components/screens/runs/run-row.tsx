@@ -10,6 +10,7 @@ import { BipolarLine } from './bipolar-note';
 import { ProgressBar } from './progress-bar';
 import { asObjective, formatObjective, objectiveInfo, placeInLine, runName, runProvenance, runTitle } from './run-format';
 import { RunStateBadge } from './run-state-badge';
+import { coolerBestWords, runKindLabel } from '@/components/screens/stages/cooler-format';
 
 export type RunRowProps = {
   run: RunSummary;
@@ -22,10 +23,11 @@ export type RunRowProps = {
   selection?: { selected: boolean; onToggle: () => void };
 };
 
-/** "Best ΔT 87.3 K" or "Best so far ΔT 80.1 K". */
+/** "Best ΔT 87.3 K" or "Best so far ΔT 80.1 K"; a cascade's least power in W. */
 function bestText(run: RunSummary, live?: RunProgress): string {
   const objective = asObjective(run.objective);
   const best = live?.best ?? run.best;
+  if (run.kind !== 'leg') return coolerBestWords(run.objective, best, isFinished(run.state));
   const prefix = isFinished(run.state) ? 'Best' : 'Best so far';
   return `${prefix} ${objectiveInfo[objective].symbol} ${formatObjective(objective, best)}`;
 }
@@ -42,6 +44,7 @@ function RowBody({ run, live, showDesign, sweepLabel }: Omit<RunRowProps, 'selec
       </View>
       <View style={styles.facts}>
         <RunStateBadge state={run.state} />
+        {showDesign ? <AppText variant="caption" tone="muted" testID="run-row-kind">{`${runKindLabel[run.kind]} run`}</AppText> : null}
         <AppText variant="mono">{bestText(run, live)}</AppText>
       </View>
       {active ? (

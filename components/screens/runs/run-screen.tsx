@@ -2,7 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import { useLocalSearchParams } from 'expo-router';
 import type { RunDetail } from '@/shared/api/runs';
 import { ApiError } from '@/components/api/client';
-import { isFinished, useRunDetail } from '@/components/api/runs';
+import { isFinished, isLegRunDetail, useRunDetail } from '@/components/api/runs';
 import { formatDateTime } from '@/components/format/date';
 import { useRunProgress } from '@/components/realtime/use-run-progress';
 import { ScreenFrame } from '@/components/shell/screen-frame';
@@ -11,6 +11,7 @@ import { Section } from '@/components/ui/form-section';
 import { LinkButton } from '@/components/ui/link-button';
 import { ErrorState, LoadingState } from '@/components/ui/state-views';
 import { DesignFacts } from '../designs/design-facts';
+import { CoolerRunPage } from '../stages/cooler-run-page';
 import { ReleaseButton } from '../growth/release-button';
 import { objectiveInfo, runName, runTitle, startsText, sweepNote } from './run-format';
 import { RunLive } from './run-live';
@@ -48,11 +49,12 @@ function RunPage({ detail }: { detail: RunDetail }) {
   );
 }
 
-/** `/runs/[id]`: live while queued or running, the result once finished. */
+/** `/runs/[id]`: live while queued or running, the result once finished; any kind of run. */
 export function RunScreen() {
   const id = useLocalSearchParams<{ id: string }>().id ?? '';
   const query = useRunDetail(id);
-  if (query.data) return <RunPage detail={query.data} />;
+  // A couple's or cascade's run has a cooler, not a design: its own page.
+  if (query.data) return isLegRunDetail(query.data) ? <RunPage detail={query.data} /> : <CoolerRunPage detail={query.data} />;
   const notFound = query.error instanceof ApiError && query.error.isNotFound;
   return (
     <ScreenFrame title={notFound ? 'No such run' : 'Run'} back={back}>

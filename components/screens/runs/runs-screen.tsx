@@ -8,6 +8,7 @@ import { spacing } from '@/components/theme';
 import { Chip } from '@/components/ui/chip';
 import { LinkButton } from '@/components/ui/link-button';
 import { EmptyState, ErrorState, LoadingState } from '@/components/ui/state-views';
+import { StagesEntry } from '@/components/screens/stages/stages-entry';
 import { ConnectionLine } from './connection-line';
 import { CompareBar, useCompareSelection } from './compare-bar';
 import { compareHref, maxCompared } from './compare-model';
@@ -36,6 +37,7 @@ export function RunsScreen() {
       subtitle="Optimisation runs of your team, newest first"
       accessory={<LinkButton variant="quiet" label="Modules" href="/modules" testID="modules-link" />}
       refreshing={query.isRefetching} onRefresh={() => void query.refetch()}>
+      <StagesEntry />
       <View style={styles.toolbar}>
         <View style={styles.filters} role="tablist" aria-label="Which runs">
           {filters.map((f) => (
@@ -65,7 +67,7 @@ export function RunsScreen() {
                 live={live.progress[r.id]}
                 showDesign
                 sweepLabel={r.sweepId ? 'Part of a sweep' : undefined}
-                selection={hasResult(r) ? { selected: selected.includes(r.id), onToggle: () => toggle(r.id) } : undefined}
+                selection={r.kind === 'leg' && hasResult(r) ? { selected: selected.includes(r.id), onToggle: () => toggle(r.id) } : undefined}
               />
             </View>
           ))}

@@ -1,7 +1,7 @@
 import { View } from 'react-native';
 import { useLocalSearchParams } from 'expo-router';
 import type { Sweep } from '@/shared/api/runs';
-import { hasResult, isFinished, useRunDetails, useSweep } from '@/components/api/runs';
+import { hasResult, isFinished, isLegRunDetail, useRunDetails, useSweep } from '@/components/api/runs';
 import { SeriesPlot } from '@/components/charts/series-plot';
 import { formatDateTime } from '@/components/format/date';
 import { useLiveRuns } from '@/components/realtime/use-live-runs';
@@ -19,7 +19,7 @@ import { optimumSeries, sweepFraction, uniformSeries } from './sweep-model';
 function SweepPage({ sweep }: { sweep: Sweep }) {
   const live = useLiveRuns(sweep.runs, true);
   const finishedIds = sweep.runs.filter(hasResult).map((r) => r.id);
-  const details = useRunDetails(finishedIds).flatMap((q) => (q.data ? [q.data] : []));
+  const details = useRunDetails(finishedIds).flatMap((q) => (q.data && isLegRunDetail(q.data) ? [q.data] : []));
   const param = sweepParameterInfo[sweep.parameter];
   const objective = asObjective(sweep.runs[0]?.objective ?? 'maxDeltaT');
   const info = objectiveInfo[objective];
