@@ -9,7 +9,7 @@ export const appName = 'Frostgrade';
  * title, so tabs, history and bookmarks read "Run 12 · Runs · Frostgrade".
  */
 const sections: Record<string, string> = {
-  index: 'Materials', materials: 'Materials', designs: 'Designs', runs: 'Runs', sweeps: 'Runs', modules: 'Modules',
+  index: 'Materials', materials: 'Materials', designs: 'Designs', runs: 'Runs', sweeps: 'Runs', modules: 'Modules', stages: 'Stages',
   growth: 'Growth', team: 'Team', account: 'Team', outbox: 'Outbox', system: 'System',
 };
 

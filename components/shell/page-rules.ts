@@ -27,7 +27,8 @@ const id = '[^/]+';
 export const pageRules: readonly PageRule[] = [
   { pattern: new RegExp(`^/designs/(new|${id}/edit)$`), requires: 'designs.write', what: 'designs', verb: 'change', layer: 'stack' },
   { pattern: /^\/modules\/new$/, requires: 'designs.write', what: 'modules', verb: 'change', layer: 'stack' },
-  { pattern: /^\/(designs|runs|sweeps|modules)(\/|$)/, requires: 'designs.read', what: 'designs, runs and modules', verb: 'see', layer: 'stack' },
+  { pattern: new RegExp(`^/stages/(new-cascade|new-couple|${id}/edit)$`), requires: 'designs.write', what: 'cascades and matched couples', verb: 'change', layer: 'stack' },
+  { pattern: /^\/(designs|runs|sweeps|modules|stages)(\/|$)/, requires: 'designs.read', what: 'designs, runs and modules', verb: 'see', layer: 'stack' },
   { pattern: /^\/outbox(\/|$)/, requires: 'outbox.read', what: 'the outbox', verb: 'see', layer: 'tabs' },
   { pattern: /^\/team\/audit(\/|$)/, requires: 'audit.read', what: 'the audit trail', verb: 'see', layer: 'stack' },
 ];

@@ -11,7 +11,7 @@ export type CoupleText = {
   n: LegText;
   hotSide: string;
   objective: Objective;
-  /** Per couple, typed in mW; the API takes W. Used by the largest-ΔT objective. */
+  /** Per couple, typed in mW; the API takes W. Held by the ΔT and COP objectives. */
   heatLoadMw: string;
   /** The cold side the heat-load and COP objectives hold. */
   coldSide: string;
@@ -35,8 +35,9 @@ export const defaultCoupleText = (): CoupleText => ({
   starts: '8',
 });
 
-/** The objective's own conditions: ΔT at a heat load, or a heat load or COP at a cold side. */
+/** The objective's own conditions, as for a leg design: ΔT at a heat load, the largest heat load at a cold side, the best COP at both. */
 export const usesColdSide = (o: Objective) => o !== 'maxDeltaT';
+export const usesHeatLoad = (o: Objective) => o !== 'maxHeatLoad';
 
 /** The form's text as a couple input, checked by the API's schema; messages keyed as the API names fields. */
 export function coupleInputFrom(t: CoupleText): { input: CoupleInput | null; errors: FieldErrors } {
@@ -44,7 +45,7 @@ export function coupleInputFrom(t: CoupleText): { input: CoupleInput | null; err
   const p = legSourceFromText(errors, 'p', 'p', t.p);
   const n = legSourceFromText(errors, 'n', 'n', t.n);
   const hotSide = numberFromText(errors, 'hotSide', t.hotSide, 'Hot-side temperature Th (K)');
-  const heatLoadMw = usesColdSide(t.objective) ? 0 : numberFromText(errors, 'heatLoad', t.heatLoadMw, 'Heat load Qc per couple (mW)');
+  const heatLoadMw = !usesHeatLoad(t.objective) ? 0 : numberFromText(errors, 'heatLoad', t.heatLoadMw, 'Heat load Qc per couple (mW)');
   const coldSide = usesColdSide(t.objective) ? numberFromText(errors, 'coldSide', t.coldSide, 'Cold-side target Tc (K)') : undefined;
   const areaRatio = t.areaRatioFree ? undefined : numberFromText(errors, 'areaRatio', t.areaRatio, 'Area ratio A_n / A_p');
   const starts = numberFromText(errors, 'starts', t.starts, 'Search starts');

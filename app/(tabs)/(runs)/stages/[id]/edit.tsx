@@ -1,0 +1,1 @@
+export { EditCoolerScreen as default } from '@/components/screens/stages/cooler-editor-screens';

@@ -1,0 +1,1 @@
+export { CoolerScreen as default } from '@/components/screens/stages/cooler-screen';

@@ -1,0 +1,1 @@
+export { CompareCascadesScreen as default } from '@/components/screens/stages/compare-cascades-screen';

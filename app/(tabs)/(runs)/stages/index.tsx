@@ -1,0 +1,1 @@
+export { StagesScreen as default } from '@/components/screens/stages/stages-screen';

@@ -1,0 +1,1 @@
+export { NewCascadeScreen as default } from '@/components/screens/stages/cooler-editor-screens';

@@ -1,0 +1,1 @@
+export { NewCoupleScreen as default } from '@/components/screens/stages/cooler-editor-screens';
