@@ -1,6 +1,6 @@
-import { cascadeResultSchema, coolerRunDetailSchema, coolerSchema, coolerSummarySchema, coupleResultSchema, type Cooler, type CoolerRunDetail, type CoolerSummary } from '@/shared/api/coolers';
-import type { RunState } from '@/shared/api/runs';
-import { runSummary } from '@/components/screens/runs/test-fixtures';
+// Relative imports: the end-to-end project (no `@/` alias) reads these fixtures too.
+import { cascadeResultSchema, coolerRunDetailSchema, coolerSchema, coolerSummarySchema, coupleResultSchema, type Cooler, type CoolerRunDetail, type CoolerSummary } from '../../../shared/api/coolers';
+import { runSummarySchema, type RunState } from '../../../shared/api/runs';
 
 /** Invented ids of the Northlight demo's cascade, couple and their runs. Every fixture goes through the contract's schema, so it cannot drift from it. */
 export const coolerIds = {
@@ -66,9 +66,13 @@ export function coolerSummary(c: Cooler, latest: CoolerSummary['latestRun'] = nu
 export function coolerRunDetail(kind: 'cascade' | 'couple', state: RunState): CoolerRunDetail {
   const cooler = kind === 'cascade' ? cascadeCooler() : coupleCooler();
   const result = state === 'succeeded' ? (kind === 'cascade' ? cascadeResult() : coupleResult()) : null;
-  const run = runSummary(state, {
+  const finished = state === 'succeeded' || state === 'failed' || state === 'cancelled';
+  const run = runSummarySchema.parse({
     id: kind === 'cascade' ? coolerIds.cascadeRun : coolerIds.coupleRun, number: kind === 'cascade' ? 9 : 8, kind, designId: null, coolerId: cooler.id, designName: cooler.name,
-    starts: 4, best: result ? result.deltaT : null, deltaT: result ? result.deltaT : null,
+    sweepId: null, sweepValue: null, state, objective: 'maxDeltaT', best: result ? result.deltaT : null, deltaT: result ? result.deltaT : null,
+    fractionDone: state === 'succeeded' ? 1 : 0, starts: 4, launchedBy: 'Piet', createdAt: '2026-12-01T12:00:00.000Z',
+    startedAt: state === 'queued' ? null : '2026-12-01T12:00:02.000Z', finishedAt: finished ? '2026-12-01T12:00:12.000Z' : null, error: null,
+    attempts: state === 'queued' ? 0 : 1, waiting: state === 'queued' ? { position: 1, reason: 'Next in line.' } : null, bipolar: null,
   });
   return coolerRunDetailSchema.parse({
     run, cooler, case: {}, progress: null, trace: [], traceTotal: 0,
