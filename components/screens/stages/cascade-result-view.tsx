@@ -19,10 +19,9 @@ function tiles(r: CascadeRunResult): FigureTile[] {
   return [
     { key: 'deltaT', label: 'Temperature drop ΔT', value: quantity(r.deltaT, 'K'), lead: r.objective === 'maxDeltaT' },
     { key: 'coldSide', label: 'Cold side Tc', value: quantity(r.coldSide, 'K') },
-    { key: 'heatLoad', label: 'Heat load Qc (coldest stage)', value: heatFlow(r.heatLoad) },
+    { key: 'heatLoad', label: 'Heat load Qc', value: heatFlow(r.heatLoad) },
     { key: 'power', label: 'Total input power P', value: quantity(r.power, 'W'), lead: r.objective === 'minPower' },
     { key: 'cop', label: 'COP', value: r.cop === null ? '– (no power)' : r.heatLoad === 0 ? '0 (no heat load)' : formatNumber(r.cop, 3) },
-    { key: 'stages', label: 'Stages', value: `${r.stages.length} · ${r.stages.reduce((n, s) => n + s.couples, 0)} couples` },
   ];
 }
 
@@ -33,7 +32,7 @@ export function CascadeResultView({ result: r, runId }: { result: CascadeRunResu
     <View style={styles.wrap} testID="cascade-result">
       <FigureTiles tiles={tiles(r)} testID="cascade-figures" prefix="cascade" />
       <Columns>
-        <ChartCard title="Pyramid, drawn to scale" hint="Bar width in proportion to the stage's couples; the coldest stage on top, the heat sink below." testID="cascade-pyramid">
+        <ChartCard title={`Pyramid: ${r.stages.length} stages, ${r.stages.reduce((n, s) => n + s.couples, 0)} couples`} hint="Drawn to scale: bar width in proportion to the stage's couples; the coldest stage on top, the heat sink below." testID="cascade-pyramid">
           <Pyramid stages={r.stages} sink={r.hotSide} />
         </ChartCard>
         <ChartCard title="Heat load against cold side" hint="At the best currents; the cascade and with its coldest stages removed." testID="cascade-curves">

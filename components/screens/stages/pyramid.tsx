@@ -68,7 +68,7 @@ const styles = StyleSheet.create({
   wrap: { gap: spacing.xs },
   row: { flexDirection: 'row', alignItems: 'center', gap: spacing.sm },
   label: { width: 118 },
-  labelCompact: { width: 96 },
+  labelCompact: { width: 112 },
   track: { flex: 1, minWidth: 0, alignItems: 'center' },
   // Outlined, so a bar reads on paper where backgrounds are left off.
   bar: { height: 34, borderWidth: 1.5, borderColor: colors.text, borderRadius: radii.sm, justifyContent: 'center', alignItems: 'center', paddingHorizontal: spacing.xxs },
