@@ -53,10 +53,11 @@ export const fieldLabels = {
   // Coolers: matched couples and cascades (shared/api/coolers.ts).
   designId: 'Leg design',
   stages: 'Stages',
-  interfaceResistance: 'Interface resistance to the next stage',
+  'stages.source': 'Legs of the stage',
+  interfaceResistance: 'Interface resistance to the stage above',
   wiring: 'Wiring',
-  couplesLimit: 'Couple counts',
-  'couplesLimit.total': 'Total couples',
+  couplesLimit: 'Couple count limit',
+  total: 'Couples in all stages',
   baseAreaMm2: 'Base area',
   // Growth orders (shared/api/growth.ts).
   batch: 'Batch',

@@ -1,5 +1,6 @@
 import type { Page } from 'playwright-core';
 import { familiesResponseSchema } from '../../shared/api/families';
+import { coolersResponseSchema } from '../../shared/api/coolers';
 import { modulesResponseSchema } from '../../shared/api/modules';
 import {
   baseUrl,
@@ -62,6 +63,10 @@ describe('every screen fits a phone, a tablet and a desktop: no sideways page, n
     const { families } = familiesResponseSchema.parse(await getJsonAs(admin, '/api/families'));
     const family = families.find((f) => demoPFamilyName.test(f.name))!;
     const { modules } = modulesResponseSchema.parse(await getJsonAs(admin, '/api/modules'));
+    // The seeded demo cascade and matched couple, by name.
+    const { coolers } = coolersResponseSchema.parse(await getJsonAs(admin, '/api/coolers'));
+    const demoCascade = coolers.find((c) => c.kind === 'cascade' && c.name.startsWith('Demo: detector cascade'))!;
+    const demoCouple = coolers.find((c) => c.kind === 'couple' && c.name.startsWith('Demo: matched couple'))!;
     // Two short runs of the demo family to open, compare and release.
     const [runA, runB] = await Promise.all([
       convergedRun(admin, { name: `Layout leg A ${stamp}`, controlPoints: 3 }, 300),
@@ -95,6 +100,12 @@ describe('every screen fits a phone, a tablet and a desktop: no sideways page, n
       { name: 'modules', path: '/modules' },
       { name: 'module-new', path: '/modules/new' },
       { name: 'module', path: `/modules/${modules[0]!.id}`, tables: true },
+      { name: 'stages', path: '/stages' },
+      { name: 'stages-new-cascade', path: '/stages/new-cascade' },
+      { name: 'stages-new-couple', path: '/stages/new-couple' },
+      { name: 'stages-cascade', path: `/stages/${demoCascade.id}`, tables: true },
+      { name: 'stages-couple', path: `/stages/${demoCouple.id}` },
+      { name: 'stages-compare', path: '/stages/compare' },
       { name: 'growth-orders', path: '/growth' },
       {
         name: 'growth-order',
