@@ -25,7 +25,7 @@ describe('cascadeInputFrom', () => {
     const { input, errors } = cascadeInputFrom({ ...t, stages: [{ ...t.stages[0]!, couples: 'many' }, { ...t.stages[1]!, p: { ...t.stages[1]!.p, familyId: '' } }] });
     expect(input).toBeNull();
     expect(errors['stages.0.couples']).toBe('Stage 1: couples must be a number');
-    expect(errors['stages.1.source.p.familyId']).toBe('p-type leg: pick a family');
+    expect(errors['stages.1.source.p.familyId']).toBe('Stage 2, p-type leg: pick a family');
   });
 
   it('refuses what the contract refuses, worded through the field labels (a stage without couples, a cold side above the sink)', () => {

@@ -66,8 +66,11 @@ function stageFrom(errors: FieldErrors, s: StageText, i: number) {
     if (s.coupleRunId === '') errors[`${at}.source.runId`] = `Stage ${i + 1}: pick a finished matched-couple run`;
     return { couples, interfaceResistance, source: { kind: 'couple' as const, runId: s.coupleRunId } };
   }
-  const p = legSourceFromText(errors, `${at}.source.p`, 'p', s.p);
-  const n = legSourceFromText(errors, `${at}.source.n`, 'n', s.n);
+  const legErrors: FieldErrors = {};
+  const p = legSourceFromText(legErrors, `${at}.source.p`, 'p', s.p);
+  const n = legSourceFromText(legErrors, `${at}.source.n`, 'n', s.n);
+  // Every stage has a p and an n leg: the message says which stage's, wherever it is read.
+  for (const [key, message] of Object.entries(legErrors)) errors[key] = `Stage ${i + 1}, ${message}`;
   // A stage's legs are fixed legs: the form offers no leg design here.
   const fixed = p && n && p.kind !== 'design' && n.kind !== 'design' ? { kind: 'legs' as const, p, n } : null;
   return { couples, interfaceResistance, source: fixed };

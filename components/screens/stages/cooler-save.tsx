@@ -43,8 +43,8 @@ export function CoolerSaveBar({ shown, tried, busy, error, isNew, onSave }: BarP
     <View style={styles.wrap}>
       {tried && problems.length > 0 ? (
         <Notice tone="danger" title="Not saved: check these fields" testID="cooler-form-problems">
-          {problems.map((m) => (
-            <AppText key={m}>{m}</AppText>
+          {problems.map((m, i) => (
+            <AppText key={i}>{m}</AppText>
           ))}
         </Notice>
       ) : null}
