@@ -48,9 +48,9 @@ type Best = { point: CascadePoint; currents: number[]; counts: number[] };
 export type CascadeOptimum = { point: CascadePoint; currents: number[]; counts: number[]; evaluations: number; stopped: boolean };
 
 /** Currents are searched as I/I_ref within these bounds (I_ref = S̄·Th/R̄ of one couple of the stage). */
-const CURRENT_BOUNDS: [number, number] = [1e-3, 3];
+export const CURRENT_BOUNDS: [number, number] = [1e-3, 3];
 /** Finite-difference step of every variable (scaled currents, log-ratios): between the truncation and the 3e-9 K solve noise. */
-const STEP = 3e-5;
+export const STEP = 3e-5;
 const RATIO_LOG_BOUND = Math.log(30);
 
 /** Largest-remainder rounding of positive counts to whole numbers ≥ 1 keeping the sum. */
@@ -71,14 +71,14 @@ export function roundCounts(counts: readonly number[], total: number): number[] 
   return floor;
 }
 
-type Layout = {
+export type Layout = {
   /** Which stages each current variable drives (series: all). */
   freeGroups: number[][];
   fixed: (number | null)[];
   reference: number[];
 };
 
-function layoutOf(c: CheckedCascadeCase, solver: CascadeSolver): Layout {
+export function layoutOf(c: CheckedCascadeCase, solver: CascadeSolver): Layout {
   const n = c.stages.length;
   const reference = solver.referenceCurrents(c.hotSide);
   if (c.wiring === 'series') {
