@@ -19,7 +19,6 @@ import { coupleArea, type CheckedCascadeCase } from './cascade-case';
 import { CaseError } from './case-error';
 import { brentRoot } from './find-root';
 import { minimizeBox } from './box-bfgs';
-import { brentMinimize } from './minimize-scalar';
 
 export type CascadeStart = { currents: number[]; counts: number[] };
 
@@ -237,22 +236,27 @@ export function optimizeCascade(c: CheckedCascadeCase, o: CascadeOptimizeOptions
       [a, fa] = [b, fb];
       b = next;
       fb = h(b);
-      if (Math.abs(fb) <= 1e-10 * scale && (fb - fa) / (b - a) > 0) {
+      // The lower root only: Qc must still be rising there (a chord across the peak can look rising at the upper root).
+      if (Math.abs(fb) <= 1e-10 * scale && h(b * (1 + 1e-4)) > fb) {
         lambdaWarm = b;
         return { lambda: b, point: at(b) };
       }
     }
-    // Bracket: the peak of Qc over λ, then the root below it.
-    const top = Math.max(2 * lambdaWarm, 1) * 3;
-    const peak = brentMinimize((l) => {
-      const v = h(l);
-      return Number.isFinite(v) ? -v : Number.MAX_VALUE;
-    }, 0, top, 1e-6 * top);
-    if (!(-peak.value >= 0)) return undefined;
-    const low = 1e-6 * top;
-    const fl = h(low);
-    if (!(fl < 0)) return undefined;
-    const root = brentRoot(h, low, peak.x, fl, -peak.value, 1e-12 * top);
+    // Bracket: walk up in λ from near zero (Qc < 0 there: heat leaks in) to the first λ holding the load.
+    // A walk, not a maximiser: beyond the peak lies thermal runaway, where nothing has a steady state.
+    let lo = 0.02 * Math.max(lambdaWarm, 1);
+    let flo = h(lo);
+    if (!(flo < 0)) return undefined;
+    let hi = lo;
+    let fhi = flo;
+    for (;;) {
+      hi = lo * 1.25;
+      fhi = h(hi);
+      if (!Number.isFinite(fhi) || fhi < flo) return undefined;
+      if (fhi >= 0) break;
+      [lo, flo] = [hi, fhi];
+    }
+    const root = brentRoot(h, lo, hi, flo, fhi, 1e-13 * hi);
     lambdaWarm = root.root;
     return { lambda: root.root, point: at(root.root) };
   };
