@@ -16,14 +16,14 @@ import type { CurveConditions, CurveOptions } from './operating-curve';
 
 const shape = caseSchema.shape;
 
-const count = (what: string, min: number, max: number) =>
+export const count = (what: string, min: number, max: number) =>
   z
     .number({ error: `${what} must be a whole number` })
     .int({ error: `${what} must be a whole number` })
     .min(min, { error: `${what} must be at least ${min}` })
     .max(max, { error: `${what} must be at most ${max}` });
 
-const positiveUpTo = (what: string, max: number, hint: string) =>
+export const positiveUpTo = (what: string, max: number, hint: string) =>
   z
     .number({ error: (issue) => (issue.input === undefined ? `${what} is required` : `${what} must be a finite number`) })
     .gt(0, { error: `${what} must be greater than 0` })
@@ -43,7 +43,7 @@ const deltaTSchema = z
 const currentLimitSchema = positiveUpTo('currentLimit', 1e4, 'the limit is in amperes');
 
 /** The leg fields of a solve case, without conditions or optimiser settings. */
-const legFields = {
+export const legFields = {
   description: shape.description,
   length: shape.length,
   area: shape.area,
@@ -116,7 +116,7 @@ export type ModuleCase = {
   trade: TradeOptions;
 };
 
-function firstIssue(error: z.ZodError): CaseError {
+export function firstIssue(error: z.ZodError): CaseError {
   const issue = error.issues[0];
   if (issue.code === 'unrecognized_keys') {
     return new CaseError(fieldPath([...issue.path, issue.keys[0]]), 'unknown field (check its spelling; see PHYSICS.md for the case fields)');
@@ -124,15 +124,15 @@ function firstIssue(error: z.ZodError): CaseError {
   return new CaseError(fieldPath(issue.path), issue.message);
 }
 
-const messageOf = (e: CaseError) => e.message.slice(e.field.length + 2);
+export const messageOf = (e: CaseError) => e.message.slice(e.field.length + 2);
 
-type LegJson = Omit<LegDefinitionInput, 'area'> & { area?: number };
+export type LegJson = Omit<LegDefinitionInput, 'area'> & { area?: number };
 
 /**
  * A leg checked exactly as a solve case checks it (doping ranges, table
  * temperatures, segment fractions), with errors named under `prefix`.
  */
-function checkLeg(input: LegJson, area: number, hotSide: number, coldSide: number | undefined, prefix: string, coldField: string): LegDefinition {
+export function checkLeg(input: LegJson, area: number, hotSide: number, coldSide: number | undefined, prefix: string, coldField: string): LegDefinition {
   const at = (field: string) => (prefix ? `${prefix}.${field}` : field);
   if (input.material && input.material.kind !== 'constant' && input.doping === undefined) {
     throw new CaseError(at('doping'), 'is required for a table or band material: a number (cm⁻³) or {x, perCm3}');
@@ -161,7 +161,7 @@ function checkColdSide(input: { hotSide: number; coldSide?: number; deltaT?: num
   return { conditions: { hotSide: input.hotSide, coldSide }, coldSide, coldField: 'coldSide' };
 }
 
-const asObject = (json: unknown) => {
+export const asObject = (json: unknown) => {
   if (typeof json !== 'object' || json === null || Array.isArray(json)) throw new CaseError('(case)', 'a case must be a JSON object');
   return json;
 };

@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 
 /**
- * The command-line contract: `npm run -s leg -- solve|optimize|curves|module FILE` prints
+ * The command-line contract: `npm run -s leg -- solve|optimize|curves|module|cascade FILE` prints
  * one JSON object on stdout; invalid input exits 2 with one line on stderr
  * naming the field and nothing on stdout.
  */
@@ -128,6 +128,23 @@ describe('leg CLI', () => {
     expect(out.trade.rows[0].maxHeatLoad.overLimit).toBe(true);
   });
 
+  test('cascade prints the stages coldest first, the totals and the curves with one stage fewer', () => {
+    const stage = (couples: number, interfaceResistance: number) => ({ couples, p: { length: 1e-3, area: 1e-6, segments: uniform.segments }, n: { length: 1e-3, area: 1e-6, segments: [{ ...uniform.segments[0], seebeck: -2e-4 }] }, interfaceResistance });
+    const r = leg(['cascade', caseFile('cascade', { hotSide: 300, heatLoad: 0.01, wiring: 'separate', currents: [3, null], stages: [stage(2, 0.2), stage(10, 0.05)], curvePoints: 4 })]);
+    expect(r.stderr).toBe('');
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout);
+    for (const field of ['hotSide', 'coldSide', 'deltaT', 'heatLoad', 'objective', 'wiring', 'stages', 'power', 'cop', 'curves', 'evaluations', 'seconds']) expect(out).toHaveProperty(field);
+    expect(out.stages).toHaveLength(2);
+    expect(out.stages[0].current).toBe(3);
+    expect(out.stages[0].coldSide).toBe(out.coldSide);
+    // The heat a stage rejects is the next stage's load; the total power is the stages' sum.
+    expect(out.stages[1].heatLoad).toBeCloseTo(out.stages[0].heatRejected, 9);
+    expect(out.power).toBeCloseTo(out.stages[0].power + out.stages[1].power, 12);
+    expect(out.curves.map((c: { stages: number }) => c.stages)).toEqual([2, 1]);
+    expect(out.curves[0].points).toHaveLength(4);
+  });
+
   test.each<[string, string[] | (() => string[]), RegExp]>([
     ['unknown command', ['frobnicate', 'x.json'], /^command: /],
     ['missing file argument', ['solve'], /^FILE: /],
@@ -151,6 +168,16 @@ describe('leg CLI', () => {
       /^n\.segments: /,
     ],
     ['module: no legs', () => ['module', caseFile('nolegs', { hotSide: 300, deltaT: 20 })], /^p: /],
+    [
+      'cascade: a stage with zero couples',
+      () => ['cascade', caseFile('zero', { hotSide: 300, stages: [{ couples: 0, p: { length: 1e-3, area: 1e-6, segments: uniform.segments }, n: { length: 1e-3, area: 1e-6, segments: [{ ...uniform.segments[0], seebeck: -2e-4 }] } }] })],
+      /^stages\[0\]\.couples: a stage needs at least 1 couple/,
+    ],
+    [
+      'cascade: interface resistance negative',
+      () => ['cascade', caseFile('negative', { hotSide: 300, stages: [{ couples: 1, interfaceResistance: -1, p: { length: 1e-3, area: 1e-6, segments: uniform.segments }, n: { length: 1e-3, area: 1e-6, segments: [{ ...uniform.segments[0], seebeck: -2e-4 }] } }] })],
+      /^stages\[0\]\.interfaceResistance: /,
+    ],
   ])('bad input (%s): exit 2, one line naming the field on stderr, nothing on stdout', (_name, args, pattern) => {
     const r = leg(typeof args === 'function' ? args() : args);
     expect(r.status).toBe(2);
