@@ -72,9 +72,18 @@ export function leastCurrentFor(solver: DeviceSolver, hotSide: number, coldSide:
 /**
  * Score the couple at a current (ignored for maxCop, where Tc, Th and Qc set
  * it). `hint`: the last maxCop current, to bracket the next one narrowly.
+ * `reuse`: a couple solver used for neighbouring designs (an optimiser's
+ * finite differences and line searches); only its first guesses depend on
+ * what it solved before, never the answer.
  */
-export function scoreCouple(p: Leg, n: Leg, current: number, conditions: CoupleConditions, tolerance: number, counter: SolveCounter, hint?: number): CoupleScore {
-  const solver = legsSolver([p, n], tolerance);
+export function scoreCouple(p: Leg, n: Leg, current: number, conditions: CoupleConditions, tolerance: number, counter: SolveCounter, hint?: number, reuse?: DeviceSolver): CoupleScore {
+  const solver = reuse ?? legsSolver([p, n], tolerance);
+  if (reuse) {
+    // Same solver, new legs: its junction guesses and shooting roots from the last design carry over.
+    reuse.device.legs[0].leg = p;
+    reuse.device.legs[1].leg = n;
+  }
+  const before = solver.evaluations();
   const { hotSide, heatLoad } = conditions;
   try {
     if (conditions.objective === 'maxDeltaT') {
@@ -94,6 +103,6 @@ export function scoreCouple(p: Leg, n: Leg, current: number, conditions: CoupleC
     }
     return { feasible: true, value: r.point.cop ?? 0, current: r.point.current, point: r.point };
   } finally {
-    counter.evaluations += solver.evaluations();
+    counter.evaluations += solver.evaluations() - before;
   }
 }

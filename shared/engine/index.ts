@@ -55,3 +55,8 @@ export { runCurves, runModule } from './run-device-case';
 export type { CurvesResult, ModuleResult } from './run-device-case';
 export { legsFromRun } from './run-legs';
 export type { RunLegs, RunResultLegs } from './run-legs';
+export { coupleCaseSchema, parseCoupleCase, AREA_RATIO_BOUNDS } from './couple-case';
+export type { CheckedCoupleCase, CoupleCaseInput, CoupleLegCase } from './couple-case';
+export { runCouple } from './run-couple-case';
+export type { CoupleResult, CoupleLegResult, CoupleOptions } from './run-couple-case';
+export type { CoupleState, CoupleProgress } from './optimize-couple';

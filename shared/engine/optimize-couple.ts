@@ -197,6 +197,10 @@ export function optimizeCouple(c: CheckedCoupleCase, counter: SolveCounter, opti
     const legs = build(starts[starts.length - 1]);
     return legsSolver([legs.p, legs.n], tolerance).referenceCurrent(c.hotSide);
   })();
+  const shared = (() => {
+    const legs = build(starts[starts.length - 1]);
+    return legsSolver([legs.p, legs.n], tolerance);
+  })();
   let best: CoupleOptimum | undefined;
   let iterations = 0;
   let lastCurrent: number | undefined;
@@ -226,7 +230,7 @@ export function optimizeCouple(c: CheckedCoupleCase, counter: SolveCounter, opti
     const f = (v: readonly number[]) => {
       const state = stateOf(v);
       const legs = build(state);
-      const score = scoreCouple(legs.p, legs.n, state.current, conditions, tolerance, counter, lastCurrent);
+      const score = scoreCouple(legs.p, legs.n, state.current, conditions, tolerance, counter, lastCurrent, shared);
       if (score.feasible && c.objective === 'maxCop') lastCurrent = score.current;
       consider({ ...state, current: score.current }, legs, score);
       if (scale === 0) scale = Math.max(Math.abs(score.value), 1e-30);
