@@ -6,18 +6,12 @@
  */
 import { deviceSolver, type DevicePoint, type DeviceSolver } from './device';
 import { maxHeatLoadPoint } from './device-optima';
-import type { Objective } from './evaluate-design';
+import type { Conditions } from './evaluate-design';
 import { brentRoot } from './find-root';
 import type { Leg } from './leg-profile';
 
-export type CoupleConditions = {
-  objective: Objective;
-  hotSide: number;
-  /** W per couple: given for maxDeltaT (0 by default) and maxCop. */
-  heatLoad: number;
-  /** Given for maxHeatLoad and maxCop [K]. */
-  coldSide?: number;
-};
+/** A leg's conditions, with the heat load per couple [W]. */
+export type CoupleConditions = Conditions;
 
 export type CoupleScore = {
   feasible: boolean;

@@ -11,7 +11,7 @@ import { mismatchOf } from './couple-mismatch';
 import type { LegDefinitionInput } from './device-case';
 import type { Objective } from './evaluate-design';
 import type { Leg } from './leg-profile';
-import { coupleConditions, optimizeCouple, type CoupleProgress, type CoupleState } from './optimize-couple';
+import { coupleConditions, optimizeCouple, type CoupleRunOptions } from './optimize-couple';
 import { checkSolveOptions } from './solve-leg';
 
 export type CoupleLegResult = {
@@ -50,15 +50,7 @@ export type CoupleResult = {
   seconds: number;
 };
 
-export type CoupleOptions = {
-  onProgress?: (p: CoupleProgress) => void;
-  shouldStop?: () => boolean;
-  /** Resume from (or also start at) this design. */
-  start?: CoupleState;
-  /** With `start`: search from it alone (later starts of a multi-start search). */
-  startOnly?: boolean;
-  /** @default 1e-9 */
-  tolerance?: number;
+export type CoupleOptions = CoupleRunOptions & {
   /** Milliseconds clock, for `seconds` only. */
   now?: () => number;
 };

@@ -2,8 +2,7 @@ import { CaseError } from '../engine/case-error';
 import type { CheckedCoupleCase, CoupleLegCase } from '../engine/couple-case';
 import type { CoupleState } from '../engine/optimize-couple';
 import { runCouple, type CoupleResult } from '../engine/run-couple-case';
-import { mulberry32 } from '../random';
-import { SearchStoppedEarly, type SearchProgress } from './global-search';
+import { generator, SearchStoppedEarly, type SearchProgress } from './global-search';
 
 /**
  * Multi-start search over a matched couple, as globalSearch is over one leg:
@@ -28,13 +27,6 @@ export type SearchOptionsOf<C> = {
 };
 
 export type CoupleSearchResult = { result: CoupleResult; stopped: boolean; startsDone: number; bestStart: number; evaluations: number };
-
-/** A generator per (run, start): the seed string and the start index hashed into mulberry32's seed (as globalSearch). */
-function generator(seed: string, start: number): () => number {
-  let a = start * 0x9e3779b1;
-  for (let i = 0; i < seed.length; i += 1) a = Math.imul(a ^ seed.charCodeAt(i), 0x85ebca6b) >>> 0;
-  return mulberry32(a);
-}
 
 /** Random log10 nodes within a leg's bounds, ordered like the best profile when the leg must be monotone. */
 function randomProfile(l: CoupleLegCase, rnd: () => number, best: { perCm3: number[] } | null): number[] | null {

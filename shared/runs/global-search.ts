@@ -49,7 +49,7 @@ export class SearchStoppedEarly extends Error {
 export type SearchResult = { result: OptimizeResult; stopped: boolean; startsDone: number; bestStart: number; evaluations: number };
 
 /** A generator per (run, start): the seed string and the start index hashed into mulberry32's seed. */
-function generator(seed: string, start: number): () => number {
+export function generator(seed: string, start: number): () => number {
   let a = start * 0x9e3779b1;
   for (let i = 0; i < seed.length; i += 1) a = Math.imul(a ^ seed.charCodeAt(i), 0x85ebca6b) >>> 0;
   return mulberry32(a);
