@@ -1,3 +1,4 @@
+import { CaseError } from './case-error';
 import { parseCoupleCase } from './couple-case';
 import { runCouple } from './run-couple-case';
 
@@ -115,6 +116,15 @@ describe('matched couple of constant legs against Ioffe’s closed forms', () =>
     // Freeing the ratio (same total area) can only help.
     const free = runCouple(parseCoupleCase({ hotSide: TH, coldSide: tc, heatLoad, objective: 'maxCop', p: leg(P1, AREA), n: leg(N1, 1.3 * AREA) }));
     expect(free.cop ?? NaN).toBeGreaterThanOrEqual((r.cop ?? NaN) - 1e-9);
+  });
+
+  test('maxCop with a heat load above the couple’s largest Qc at that Tc is refused on heatLoad', () => {
+    const tc = 270;
+    const { alpha, r: resistance, k } = couple(P1, N1, 1.3);
+    const most = (alpha * alpha * tc * tc) / (2 * resistance) - k * (TH - tc);
+    const run = () => runCouple(parseCoupleCase({ hotSide: TH, coldSide: tc, heatLoad: 1.01 * most, objective: 'maxCop', p: leg(P1, AREA), n: leg(N1), areaRatio: 1.3 }));
+    expect(run).toThrow(CaseError);
+    expect(run).toThrow(/^heatLoad: /);
   });
 
   test('with nothing free the couple is just evaluated: Ioffe’s Tc at the given current', () => {
