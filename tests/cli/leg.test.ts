@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 
 /**
- * The command-line contract: `npm run -s leg -- solve|optimize|curves|module|cascade FILE` prints
+ * The command-line contract: `npm run -s leg -- solve|optimize|curves|module|couple|cascade FILE` prints
  * one JSON object on stdout; invalid input exits 2 with one line on stderr
  * naming the field and nothing on stdout.
  */
@@ -145,6 +145,31 @@ describe('leg CLI', () => {
     expect(out.curves[0].points).toHaveLength(4);
   });
 
+  test('couple optimises both graded legs, the ratio and the current of the bundled detector example', () => {
+    const r = leg(['couple', join(root, 'shared', 'engine', 'examples', 'detector-couple.json')]);
+    expect(r.stderr).toBe('');
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout);
+    for (const field of ['hotSide', 'coldSide', 'deltaT', 'heatLoad', 'current', 'voltage', 'power', 'cop', 'areaRatio', 'objective', 'p', 'n', 'mismatch', 'evaluations', 'seconds']) expect(out).toHaveProperty(field);
+    expect(out.objective.kind).toBe('maxDeltaT');
+    expect(out.heatLoad).toBeCloseTo(0.002, 9);
+    expect(out.deltaT).toBeCloseTo(out.hotSide - out.coldSide, 9);
+    // The free ratio splits the case's 2 mm² of legs.
+    expect(out.p.area + out.n.area).toBeCloseTo(2e-6, 15);
+    expect(out.areaRatio).toBeCloseTo(out.n.area / out.p.area, 9);
+    for (const side of ['p', 'n']) {
+      expect(out[side].optimised).toBe(true);
+      expect(out[side].doping.perCm3).toHaveLength(5);
+      expect(out[side].leg).toEqual(expect.objectContaining({ length: 0.0012, area: out[side].area, contactResistivity: 5e-10 }));
+    }
+    // Monotone p leg: its doping never rises along the leg or never falls.
+    const d = out.p.doping.perCm3 as number[];
+    const steps = d.slice(1).map((v, k) => Math.sign(v - d[k]));
+    expect(steps.every((s) => s <= 0) || steps.every((s) => s >= 0)).toBe(true);
+    expect(out.mismatch.unit).toBe('K');
+    expect(out.mismatch.cost).toBeGreaterThanOrEqual(0);
+  });
+
   test.each<[string, string[] | (() => string[]), RegExp]>([
     ['unknown command', ['frobnicate', 'x.json'], /^command: /],
     ['missing file argument', ['solve'], /^FILE: /],
@@ -178,6 +203,12 @@ describe('leg CLI', () => {
       () => ['cascade', caseFile('negative', { hotSide: 300, stages: [{ couples: 1, interfaceResistance: -1, p: { length: 1e-3, area: 1e-6, segments: uniform.segments }, n: { length: 1e-3, area: 1e-6, segments: [{ ...uniform.segments[0], seebeck: -2e-4 }] } }] })],
       /^stages\[0\]\.interfaceResistance: /,
     ],
+    [
+      'couple: bounds reversed on the n leg',
+      () => ['couple', caseFile('cbounds', { hotSide: 300, p: { length: 1e-3, area: 1e-6, segments: uniform.segments }, n: { length: 1e-3, material: { ...band, carrier: 'n' }, bounds: { minPerCm3: 1e20, maxPerCm3: 1e18 } } })],
+      /^n\.bounds\.maxPerCm3: /,
+    ],
+    ['couple: both areaRatio and n.area', () => ['couple', caseFile('cratio', { hotSide: 300, areaRatio: 1.2, p: { length: 1e-3, area: 1e-6, segments: uniform.segments }, n: { length: 1e-3, area: 1e-6, segments: [{ ...uniform.segments[0], seebeck: -2e-4 }] } })], /^areaRatio: /],
   ])('bad input (%s): exit 2, one line naming the field on stderr, nothing on stdout', (_name, args, pattern) => {
     const r = leg(typeof args === 'function' ? args() : args);
     expect(r.status).toBe(2);
