@@ -5,7 +5,7 @@ import type { LegDefinitionInput, MaterialInput } from '../../shared/engine';
 import { designToCase } from '../../shared/runs/design-case';
 import { MaterialFamilyVersion, Team } from '../db/entities';
 import { ValidationError } from '../http/errors';
-import { coolerResultOf } from './cooler-results';
+import { coolerResultOf } from '../../shared/runs/cooler-results';
 import { findDesign } from './design-service';
 import { resolveLeg } from './module-service';
 import { findRun } from './run-service';
@@ -37,12 +37,14 @@ function conditions(input: { objective: string; heatLoad: number; coldSide?: num
 }
 
 export async function coupleCase(m: EntityManager, team: Team, input: CoupleInputOut): Promise<Record<string, unknown>> {
+  const p = await coupleLeg(m, team, input.p, 'p');
+  const n = await coupleLeg(m, team, input.n, 'n');
   const c = {
     hotSide: input.hotSide,
     ...conditions(input),
-    p: await coupleLeg(m, team, input.p, 'p'),
-    n: await coupleLeg(m, team, input.n, 'n'),
-    ...(input.areaRatio !== undefined ? { areaRatio: input.areaRatio } : {}),
+    p,
+    // A given ratio sets the n leg's area from the p leg's (the engine refuses both); a free ratio splits the two legs' total.
+    ...(input.areaRatio !== undefined ? { n: { ...n, area: undefined }, areaRatio: input.areaRatio } : { n }),
     objective: input.objective,
   };
   return JSON.parse(JSON.stringify(c)) as Record<string, unknown>;
@@ -52,7 +54,7 @@ export async function coupleCase(m: EntityManager, team: Team, input: CoupleInpu
 async function coupleRunLegs(m: EntityManager, team: Team, runId: string, field: string): Promise<{ p: LegDefinitionInput; n: LegDefinitionInput }> {
   const run = await findRun(m, team, runId).catch(() => { throw new ValidationError([{ field, message: 'no such run in this team' }]); });
   if (run.kind !== 'couple') throw new ValidationError([{ field, message: `the run is a ${run.kind} run; a stage takes both legs of a matched-couple run` }]);
-  const parsed = coolerResultOf(run.kind, run.result, run.id);
+  const parsed = coolerResultOf(run.kind, run.result);
   if (!parsed || parsed.kind !== 'couple') throw new ValidationError([{ field, message: `the run has no result (it is ${run.state})` }]);
   return { p: parsed.result.p.leg as LegDefinitionInput, n: parsed.result.n.leg as LegDefinitionInput };
 }

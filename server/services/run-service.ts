@@ -12,7 +12,7 @@ import { waitingOf, type WaitContext } from '../runs/queue-position';
 import { sendRunJob } from '../runs/run-jobs';
 import { cancelRunState } from '../runs/run-lifecycle';
 import { version as appVersion } from '../version';
-import { coolerSnapshotOf } from './cooler-results';
+import { coolerSnapshotOf } from '../../shared/runs/cooler-results';
 import { checkSweep, describe, findDesign } from './design-service';
 import { summarise } from './run-summary';
 

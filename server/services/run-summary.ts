@@ -1,7 +1,7 @@
 import type { RunProgress, RunSummary, RunWaiting } from '../../shared/api';
 import { bipolarOfProfile, type MaterialInput, type ProfileLike } from '../../shared/engine';
 import type { Run } from '../db/entities';
-import { coolerHeadline, coolerResultOf } from './cooler-results';
+import { coolerHeadline, coolerResultOf } from '../../shared/runs/cooler-results';
 
 /** What a run ran, by name: its design's (leg run) or its cooler's (couple, cascade), as frozen at launch. */
 export function runName(r: Pick<Run, 'kind' | 'designSnapshot' | 'coolerSnapshot'>): string {
@@ -26,7 +26,7 @@ function headline(r: Run): { best: number | null; deltaT: number | null } {
     const res = r.result as { objective?: { value: number }; deltaT?: number } | null;
     return { best: res?.objective?.value ?? null, deltaT: res?.deltaT ?? null };
   }
-  const parsed = coolerResultOf(r.kind, r.result, r.id);
+  const parsed = coolerResultOf(r.kind, r.result);
   if (!parsed) return { best: null, deltaT: null };
   const h = coolerHeadline(parsed);
   return { best: h.best, deltaT: h.deltaT };

@@ -50,6 +50,15 @@ export const fieldLabels = {
   runId: 'Run',
   leg: 'Leg',
   perCm3: 'Doping n',
+  // Coolers: matched couples and cascades (shared/api/coolers.ts).
+  designId: 'Leg design',
+  stages: 'Stages',
+  'stages.source': 'Legs of the stage',
+  interfaceResistance: 'Interface resistance to the stage above',
+  wiring: 'Wiring',
+  couplesLimit: 'Couple count limit',
+  total: 'Couples in all stages',
+  baseAreaMm2: 'Base area',
   // Growth orders (shared/api/growth.ts).
   batch: 'Batch',
   dueDate: 'Due date',

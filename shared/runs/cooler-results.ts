@@ -1,10 +1,10 @@
-import { cascadeResultSchema, coolerSchema, coolerSearchSchema, coupleResultSchema, type CascadeRunResult, type Cooler as CoolerDto, type CoupleRunResult } from '../../shared/api';
+import { cascadeResultSchema, coolerSchema, coolerSearchSchema, coupleResultSchema, type CascadeRunResult, type Cooler as CoolerDto, type CoupleRunResult } from '../api';
 
 /**
  * A couple or cascade run's stored result read through the contract's
  * schemas (shared/api/coolers.ts): the engine's output plus the search.
- * A result that does not parse is treated as absent (and said so in the
- * server log) rather than shown half-read.
+ * A result that does not parse is treated as absent rather than shown
+ * half-read. Pure: the API, the worker's mail and the CSV read it alike.
  */
 const stored = {
   couple: coupleResultSchema.extend({ search: coolerSearchSchema.optional() }),
@@ -15,13 +15,10 @@ export type StoredCoupleResult = CoupleRunResult & { search?: { startsDone: numb
 export type StoredCascadeResult = CascadeRunResult & { search?: { startsDone: number; bestStart: number; starts: number } };
 export type StoredCoolerResult = { kind: 'couple'; result: StoredCoupleResult } | { kind: 'cascade'; result: StoredCascadeResult };
 
-export function coolerResultOf(kind: string, result: unknown, runId = ''): StoredCoolerResult | null {
+export function coolerResultOf(kind: string, result: unknown): StoredCoolerResult | null {
   if (result === null || result === undefined || (kind !== 'couple' && kind !== 'cascade')) return null;
   const parsed = stored[kind].safeParse(result);
-  if (!parsed.success) {
-    console.error(`[runs] run ${runId}: stored ${kind} result does not match the contract: ${parsed.error.issues[0]?.message ?? ''}`);
-    return null;
-  }
+  if (!parsed.success) return null;
   return kind === 'couple' ? { kind, result: parsed.data as StoredCoupleResult } : { kind, result: parsed.data as StoredCascadeResult };
 }
 
