@@ -6,6 +6,7 @@ import type { FairShare } from '../server/config/env';
 import { isDatabaseUnavailable, outageLog } from '../server/db/db-errors';
 import type { Mailer } from '../server/mail/mailer';
 import { beatRun, claimRun, finishRun, otherTeamWaiting, recordProgress, requeueRun, saveCheckpoint, type ClaimedRun, type Finish, type RunCheckpoint, type RunLife } from '../server/runs/run-lifecycle';
+import { frozenStarts } from '../server/runs/run-starts';
 import type { ThreadInput, ThreadMessage } from './engine-protocol';
 import { mailRunFinished } from './run-mail';
 
@@ -56,7 +57,7 @@ export async function runJob(d: RunJobDeps, runId: string, jobId: string): Promi
   if (run.attempts > MAX_ATTEMPTS) return end(d, run, t0, { state: 'failed', error: `the run lost its worker ${run.attempts - 1} times; it may be too large for one worker's memory or time limit`, result: null });
 
   const stop = new Int32Array(new SharedArrayBuffer(4));
-  const starts = startsOf(run);
+  const starts = frozenStarts(run.kind, run.design_snapshot, run.cooler_snapshot);
   const input: ThreadInput = { kind: run.kind, case: run.case_json, starts, seed: runId, resume: run.checkpoint, stopFlag: stop.buffer as SharedArrayBuffer };
   const thread = new Worker(join(__dirname, 'engine-thread.ts'), { execArgv: ['--require', 'tsx/cjs'], workerData: input });
 
@@ -131,13 +132,6 @@ export async function runJob(d: RunJobDeps, runId: string, jobId: string): Promi
   } finally {
     clearInterval(beatTimer);
   }
-}
-
-/** The search starts, frozen with the run: in its design snapshot (leg) or its cooler's input (couple, cascade). */
-function startsOf(run: ClaimedRun): number {
-  const raw = run.kind === 'leg' ? run.design_snapshot?.starts : (run.cooler_snapshot?.input as { starts?: unknown } | undefined)?.starts;
-  const n = Number(raw ?? 1);
-  return Number.isInteger(n) && n >= 1 ? n : 1;
 }
 
 async function end(d: RunJobDeps, run: ClaimedRun, t0: number, o: Finish): Promise<string> {

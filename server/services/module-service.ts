@@ -33,7 +33,9 @@ export async function resolveLeg(m: EntityManager, team: Team, s: LegSource, fie
   }
   const family = await findFamily(m, team, s.familyId).catch(() => { throw new ValidationError([{ field: `${field}.familyId`, message: 'no such family in this team' }]); });
   const version = await findVersion(m, family, s.version);
-  return { length: s.lengthMm * 1e-3, area: s.areaMm2 * 1e-6, material: version.definition as LegDefinitionInput['material'], doping: s.perCm3 };
+  const material = version.definition as NonNullable<LegDefinitionInput['material']>;
+  // A constant-property material does not depend on doping: the engine's couple and cascade checks refuse one with it.
+  return { length: s.lengthMm * 1e-3, area: s.areaMm2 * 1e-6, material, ...(material.kind === 'constant' ? {} : { doping: s.perCm3 }) };
 }
 
 /** The engine case of a module (checked separately, so a saved module always computes). */

@@ -1,23 +1,13 @@
 import type { RunProgress, RunSummary, RunWaiting } from '../../shared/api';
 import { bipolarOfProfile, type MaterialInput, type ProfileLike } from '../../shared/engine';
 import type { Run } from '../db/entities';
+import { frozenStarts } from '../runs/run-starts';
 import { coolerHeadline, coolerResultOf } from '../../shared/runs/cooler-results';
 
 /** What a run ran, by name: its design's (leg run) or its cooler's (couple, cascade), as frozen at launch. */
 export function runName(r: Pick<Run, 'kind' | 'designSnapshot' | 'coolerSnapshot'>): string {
   const snap = r.kind === 'leg' ? r.designSnapshot : r.coolerSnapshot;
   return String(snap?.name ?? '');
-}
-
-/**
- * The search starts the run was launched with: frozen in its design snapshot
- * (leg runs; runs from before starts were a setting made one) or in its
- * cooler's input (couple and cascade runs).
- */
-export function startsOf(r: Pick<Run, 'kind' | 'designSnapshot' | 'coolerSnapshot'>): number {
-  const raw = r.kind === 'leg' ? r.designSnapshot?.starts : (r.coolerSnapshot?.input as { starts?: unknown } | undefined)?.starts;
-  const n = Number(raw ?? 1);
-  return Number.isInteger(n) && n >= 1 ? n : 1;
 }
 
 /** best / deltaT of a finished (or cancelled-with-a-best) run; null when there is no result. */
@@ -40,7 +30,7 @@ export function summarise(r: Run, launchedBy: string, waiting: RunWaiting | null
     id: r.id, number: r.number, kind: r.kind, designId: r.designId, coolerId: r.coolerId, designName: runName(r), sweepId: r.sweepId, sweepValue: r.sweepValue, state: r.state, objective: r.objective,
     best: h.best ?? p?.best ?? null, deltaT: h.deltaT,
     fractionDone: r.state === 'succeeded' ? 1 : p?.fractionDone ?? 0,
-    starts: startsOf(r),
+    starts: frozenStarts(r.kind, r.designSnapshot, r.coolerSnapshot),
     launchedBy, createdAt: r.createdAt.toISOString(), startedAt: r.startedAt?.toISOString() ?? null, finishedAt: r.finishedAt?.toISOString() ?? null,
     error: r.error, attempts: r.attempts, waiting: r.state === 'queued' ? waiting : null,
     // One neutrality solve per profile point, and only for two-band families: cheap enough for every list.
