@@ -23,7 +23,7 @@ export function coolerHeadline(kind: string, result: unknown): { subject: string
         `Optimised for the ${objectiveWords[r.objective] ?? r.objective}, ${r.stages.length} stages wired ${r.wiring === 'series' ? 'in series on one supply' : 'on one supply each'}.`,
         `cold side ${num(r.coldSide, 2)} K, hot side ${num(r.hotSide, 2)} K, ΔT ${num(r.deltaT, 2)} K at a heat load of ${watts(r.heatLoad)}`,
         `input power ${num(r.power, 3)} W, COP ${num(r.cop, 4)}`,
-        ...r.stages.map((s, i) => `stage ${i + 1}${i === 0 ? ' (coldest)' : ''}: ${s.couples} couples, ${num(s.coldSide, 1)}–${num(s.hotSide, 1)} K, ${num(s.current, 3)} A, ${num(s.voltage, 3)} V, ${num(s.power, 3)} W`),
+        ...r.stages.map((s, i) => `stage ${i + 1}${i === 0 ? ' (coldest)' : ''}: ${s.couples} couple${s.couples === 1 ? '' : 's'}, ${num(s.coldSide, 1)}–${num(s.hotSide, 1)} K, ${num(s.current, 3)} A, ${num(s.voltage, 3)} V, ${num(s.power, 3)} W`),
       ],
     };
   }

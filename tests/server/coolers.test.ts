@@ -104,8 +104,11 @@ describe('saving coolers', () => {
     expect(noCold.body.errors).toEqual([{ field: 'coldSide', message: 'Cold-side target Tc is required for the least-power objective' }]);
     // Another team's run is no source: as a stage's couple, and as a leg.
     const outsider = await signedIn(ctx, demo.otherTeamAdmin);
-    const fam = await outsider.post('/api/families').send({ name: `Outsider ${stamp}`, source: 'x', definition: { kind: 'constant', seebeck: 2e-4, sigma: 1e5, kappa: 1.5 } });
+    const band = { kind: 'band', carrier: 'p', effectiveMass: 1.0, mobility300: 350, mobilityExponent: -1.5, latticeKappa300: 1.0, latticeKappaExponent: -1 };
+    const fam = await outsider.post('/api/families').send({ name: `Outsider ${stamp}`, source: 'Test data: a one-band model.', definition: band });
+    expect(fam.status).toBe(201);
     const design = await outsider.post('/api/designs').send({ name: `Outsider ${stamp}`, familyId: fam.body.family.id, lengthMm: 1.5, areaMm2: 1, hotSide: 300, minPerCm3: 1e18, maxPerCm3: 1e20, controlPoints: 2, starts: 1 });
+    expect(design.status).toBe(201);
     const theirs = (await outsider.post(`/api/designs/${design.body.design.id}/runs`)).body.run.id as string;
     const asStage = await api.post('/api/coolers').send(cascade(`Theirs ${stamp}`, { stages: [{ couples: 2, source: { kind: 'couple', runId: theirs } }] }));
     expect(asStage.status).toBe(400);
