@@ -5,7 +5,7 @@ import {
 } from '../../shared/api';
 import { demo, eventually, mailTo, openContext, signedIn, type TestContext } from './context';
 import { expectCellOf, oneLine, readSafeCsv } from './csv-safety';
-import { spawnWorker, stopWorker, type SpawnedWorker } from './workers';
+import { checkpointHolder, spawnWorker, stopWorker, type SpawnedWorker } from './workers';
 
 /**
  * Matched couples and cascades against the real stack: saved through the
@@ -219,11 +219,8 @@ describe('cooler runs', () => {
     const api = await signedIn(ctx, demo.physicist);
     const id = await save(api, cascade(`Killed ${stamp}`, { starts: 200 }));
     const runId = (await api.post(`/api/coolers/${id}/runs`)).body.run.id as string;
-    const cp = await eventually(async () => {
-      const [row] = await ctx.ds.query('SELECT worker_id, checkpoint FROM run WHERE id = $1', [runId]);
-      return row?.checkpoint && row.checkpoint.nextStart >= 2 ? row as { worker_id: string; checkpoint: { nextStart: number } } : undefined;
-    }, 120);
-    const victim = workers.find((w) => cp.worker_id.includes(`:${w.pid}:`))!;
+    const held = await checkpointHolder(ctx.ds, workers, runId);
+    const victim = held.victim!;
     expect(victim).toBeDefined();
     victim.child.kill('SIGKILL');
     workers = workers.filter((w) => w !== victim);
@@ -232,7 +229,7 @@ describe('cooler runs', () => {
     expect(done.run.state).toBe('succeeded');
     expect(done.run.attempts).toBe(2);
     const [row] = await ctx.ds.query('SELECT worker_id FROM run WHERE id = $1', [runId]);
-    expect(row.worker_id).not.toBe(cp.worker_id);
+    expect(row.worker_id).not.toBe(held.workerId);
     // Every start done once, the ones before the kill taken from the checkpoint.
     expect(cascadeResultSchema.extend({ search: coolerSearchSchema }).parse(done.result).search).toMatchObject({ startsDone: 200, starts: 200 });
   });
