@@ -35,6 +35,9 @@ module.exports = {
     {
       displayName: 'client',
       preset: 'jest-expo',
+      // A screen test renders the whole router; on a loaded 2-core machine one
+      // takes well over jest's default 5 s, which is a limit, not a measurement.
+      testTimeout: 30_000,
       roots: roots('app', 'components'),
       testMatch: ['**/*.test.ts?(x)'],
       moduleNameMapper: { '^@/(.*)$': '<rootDir>/$1' },

@@ -145,7 +145,8 @@ function checkBounds(input: CaseInput, family: MaterialFamily, mode: Mode): { lo
   return undefined;
 }
 
-function checkConditions(input: CaseInput, mode: Mode, objective: Objective) {
+/** Which of coldSide, heatLoad and current each objective needs (also a couple case's rules). */
+export function checkConditions(input: Pick<CaseInput, 'current' | 'coldSide' | 'heatLoad'>, mode: Mode, objective: Objective) {
   if (mode === 'solve') {
     if (input.current === undefined) throw new CaseError('current', 'is required for solve');
     if (input.coldSide !== undefined && input.heatLoad !== undefined) throw new CaseError('coldSide', 'give heatLoad or coldSide for solve, not both: the other one is computed');

@@ -8,22 +8,22 @@
  */
 import { z } from 'zod';
 import { CaseError } from './case-error';
-import { caseSchema, contactResistivitySchema, parasiticSchema } from './case-schema';
-import { fieldPath, parseCase } from './check-case';
+import { caseSchema, contactResistivitySchema, parasiticSchema, type CaseInput } from './case-schema';
+import { fieldPath, parseCase, type CheckedCase, type Mode } from './check-case';
 import type { DeltaTOptions } from './delta-t-curve';
 import type { LegDefinition, ModuleDefinition, TradeOptions } from './module';
 import type { CurveConditions, CurveOptions } from './operating-curve';
 
 const shape = caseSchema.shape;
 
-const count = (what: string, min: number, max: number) =>
+export const count = (what: string, min: number, max: number) =>
   z
     .number({ error: `${what} must be a whole number` })
     .int({ error: `${what} must be a whole number` })
     .min(min, { error: `${what} must be at least ${min}` })
     .max(max, { error: `${what} must be at most ${max}` });
 
-const positiveUpTo = (what: string, max: number, hint: string) =>
+export const positiveUpTo = (what: string, max: number, hint: string) =>
   z
     .number({ error: (issue) => (issue.input === undefined ? `${what} is required` : `${what} must be a finite number`) })
     .gt(0, { error: `${what} must be greater than 0` })
@@ -43,7 +43,7 @@ const deltaTSchema = z
 const currentLimitSchema = positiveUpTo('currentLimit', 1e4, 'the limit is in amperes');
 
 /** The leg fields of a solve case, without conditions or optimiser settings. */
-const legFields = {
+export const legFields = {
   description: shape.description,
   length: shape.length,
   area: shape.area,
@@ -116,7 +116,8 @@ export type ModuleCase = {
   trade: TradeOptions;
 };
 
-function firstIssue(error: z.ZodError): CaseError {
+/** The first schema issue as a CaseError naming its field (also used by couple-case.ts). */
+export function firstIssue(error: z.ZodError): CaseError {
   const issue = error.issues[0];
   if (issue.code === 'unrecognized_keys') {
     return new CaseError(fieldPath([...issue.path, issue.keys[0]]), 'unknown field (check its spelling; see PHYSICS.md for the case fields)');
@@ -124,29 +125,47 @@ function firstIssue(error: z.ZodError): CaseError {
   return new CaseError(fieldPath(issue.path), issue.message);
 }
 
-const messageOf = (e: CaseError) => e.message.slice(e.field.length + 2);
+/** A CaseError's message without its field, to name it under another path. */
+export const messageOf = (e: CaseError) => e.message.slice(e.field.length + 2);
 
-type LegJson = Omit<LegDefinitionInput, 'area'> & { area?: number };
+export type LegJson = Omit<LegDefinitionInput, 'area'> & { area?: number };
 
 /**
  * A leg checked exactly as a solve case checks it (doping ranges, table
- * temperatures, segment fractions), with errors named under `prefix`.
+ * temperatures, segment fractions) — or, in 'optimize' mode, as an optimize
+ * case (bounds, control points; doping then optional) — with errors named
+ * under `prefix`.
  */
-function checkLeg(input: LegJson, area: number, hotSide: number, coldSide: number | undefined, prefix: string, coldField: string): LegDefinition {
+export function checkLegCase(
+  input: LegJson & Pick<CaseInput, 'bounds' | 'controlPoints' | 'monotone'>,
+  area: number,
+  hotSide: number,
+  coldSide: number | undefined,
+  prefix: string,
+  coldField: string,
+  mode: Mode = 'solve',
+): CheckedCase {
   const at = (field: string) => (prefix ? `${prefix}.${field}` : field);
-  if (input.material && input.material.kind !== 'constant' && input.doping === undefined) {
+  if (mode === 'solve' && input.material && input.material.kind !== 'constant' && input.doping === undefined) {
     throw new CaseError(at('doping'), 'is required for a table or band material: a number (cm⁻³) or {x, perCm3}');
   }
   const { description: _description, ...leg } = input;
+  // optimize mode: only coldSide's range matters here, so a given coldSide is checked as maxHeatLoad's.
+  const conditions = mode === 'solve' ? { current: 0 } : { objective: coldSide !== undefined ? 'maxHeatLoad' : 'maxDeltaT' };
   try {
-    const c = parseCase({ ...leg, area, hotSide, ...(coldSide !== undefined ? { coldSide } : {}), current: 0 }, 'solve');
-    return { length: c.length, area: c.area, leg: c.leg, ...(c.ends ? { ends: c.ends } : {}) };
+    return parseCase({ ...leg, area, hotSide, ...(coldSide !== undefined ? { coldSide } : {}), ...conditions }, mode);
   } catch (e) {
     if (!(e instanceof CaseError)) throw e;
     if (e.field === 'hotSide') throw e;
     if (e.field === 'coldSide') throw new CaseError(coldField, messageOf(e));
     throw new CaseError(at(e.field), messageOf(e));
   }
+}
+
+/** A solve-checked leg as a leg definition. */
+export function checkLeg(input: LegJson, area: number, hotSide: number, coldSide: number | undefined, prefix: string, coldField: string): LegDefinition {
+  const c = checkLegCase(input, area, hotSide, coldSide, prefix, coldField);
+  return { length: c.length, area: c.area, leg: c.leg, ...(c.ends ? { ends: c.ends } : {}) };
 }
 
 function checkColdSide(input: { hotSide: number; coldSide?: number; deltaT?: number }): { conditions: CurveConditions; coldSide: number | undefined; coldField: string } {
@@ -161,7 +180,8 @@ function checkColdSide(input: { hotSide: number; coldSide?: number; deltaT?: num
   return { conditions: { hotSide: input.hotSide, coldSide }, coldSide, coldField: 'coldSide' };
 }
 
-const asObject = (json: unknown) => {
+/** The case must be a JSON object. */
+export const asObject = (json: unknown) => {
   if (typeof json !== 'object' || json === null || Array.isArray(json)) throw new CaseError('(case)', 'a case must be a JSON object');
   return json;
 };

@@ -18,6 +18,9 @@
  *   moduleDeltaTCurve(m, { hotSide: 300 });             // versus ΔT at each ΔT's current of maximum Qc
  *   moduleTrade(m, { hotSide: 300, deltaT: 40 });       // the same leg area as 1, 2, 5, … couples
  *
+ *   // A matched couple: both profiles, the shared current and A_n/A_p together (seconds; a worker's job):
+ *   const couple = runCouple(parseCoupleCase(json), { onProgress, shouldStop });   // multi-start: coupleSearch (shared/runs)
+ *
  * Physics, numerics and the case format: PHYSICS.md beside this file.
  */
 export { CaseError } from './case-error';
@@ -55,3 +58,16 @@ export { runCurves, runModule } from './run-device-case';
 export type { CurvesResult, ModuleResult } from './run-device-case';
 export { legsFromRun } from './run-legs';
 export type { RunLegs, RunResultLegs } from './run-legs';
+export { cascadeAt, cascadeSolver } from './cascade';
+export type { CascadeDefinition, CascadeStage, CascadeCold, CascadePoint, CascadeStagePoint, CascadeSolver } from './cascade';
+export { cascadeCaseSchema, parseCascadeCase, MAX_STAGES, DEFAULT_CASCADE_CURVE_POINTS } from './cascade-case';
+export type { CascadeCaseInput, CheckedCascadeCase, CouplesLimit } from './cascade-case';
+export { optimizeCascade } from './optimize-cascade';
+export type { CascadeStart, CascadeProgress, CascadeOptimizeOptions, CascadeOptimum } from './optimize-cascade';
+export { runCascade } from './run-cascade-case';
+export type { CascadeResult, CascadeStageResult, CascadeCurve, CascadeCurvePoint } from './run-cascade-case';
+export { coupleCaseSchema, parseCoupleCase, AREA_RATIO_BOUNDS } from './couple-case';
+export type { CheckedCoupleCase, CoupleCaseInput, CoupleLegCase } from './couple-case';
+export { runCouple } from './run-couple-case';
+export type { CoupleResult, CoupleLegResult, CoupleOptions } from './run-couple-case';
+export type { CoupleState, CoupleProgress } from './optimize-couple';

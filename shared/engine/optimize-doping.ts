@@ -40,14 +40,15 @@ export type DopingOptimum = {
   stopped: boolean;
 };
 
-type Parametrisation = {
+/** Node profile ↔ box variables (also used by optimize-couple.ts). */
+export type Parametrisation = {
   toProfile: (v: readonly number[]) => number[];
   fromProfile: (y: readonly number[]) => number[];
   lower: number[];
   upper: number[];
 };
 
-function freeParametrisation(n: number, lo: number, hi: number): Parametrisation {
+export function freeParametrisation(n: number, lo: number, hi: number): Parametrisation {
   return { toProfile: (v) => [...v], fromProfile: (y) => y.map((v) => Math.min(hi, Math.max(lo, v))), lower: Array(n).fill(lo), upper: Array(n).fill(hi) };
 }
 
@@ -82,7 +83,7 @@ export function isotonic(y: readonly number[]): number[] {
   return blocks.flatMap((b) => Array<number>(b.count).fill(b.sum / b.count));
 }
 
-function monotoneParametrisation(n: number, lo: number, hi: number, increasing: boolean): Parametrisation {
+export function monotoneParametrisation(n: number, lo: number, hi: number, increasing: boolean): Parametrisation {
   const flip = (y: readonly number[]) => [...y].reverse();
   return {
     toProfile: (t) => (increasing ? increasingFrom(t, lo, hi) : flip(increasingFrom(t, lo, hi))),

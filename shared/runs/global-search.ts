@@ -28,15 +28,18 @@ export type SearchProgress = {
   fractionDone: number;
 };
 
-export type SearchOptions = {
+/** A multi-start search's options, for any checkpoint type (leg, couple and cascade searches share it). */
+export type SearchOptionsOf<C> = {
   starts: number;
   seed: string;
-  resume?: SearchCheckpoint | null;
+  resume?: C | null;
   shouldStop?: () => boolean;
   onProgress?: (p: SearchProgress) => void;
   /** After each completed start: enough to resume. */
-  onCheckpoint?: (cp: SearchCheckpoint) => void;
+  onCheckpoint?: (cp: C) => void;
 };
+
+export type SearchOptions = SearchOptionsOf<SearchCheckpoint>;
 
 /** Stopped (cancelled, shut down) before any start produced a design: there is nothing to keep. */
 export class SearchStoppedEarly extends Error {
@@ -49,7 +52,7 @@ export class SearchStoppedEarly extends Error {
 export type SearchResult = { result: OptimizeResult; stopped: boolean; startsDone: number; bestStart: number; evaluations: number };
 
 /** A generator per (run, start): the seed string and the start index hashed into mulberry32's seed. */
-function generator(seed: string, start: number): () => number {
+export function generator(seed: string, start: number): () => number {
   let a = start * 0x9e3779b1;
   for (let i = 0; i < seed.length; i += 1) a = Math.imul(a ^ seed.charCodeAt(i), 0x85ebca6b) >>> 0;
   return mulberry32(a);

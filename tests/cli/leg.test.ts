@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 
 /**
- * The command-line contract: `npm run -s leg -- solve|optimize|curves|module FILE` prints
+ * The command-line contract: `npm run -s leg -- solve|optimize|curves|module|couple|cascade FILE` prints
  * one JSON object on stdout; invalid input exits 2 with one line on stderr
  * naming the field and nothing on stdout.
  */
@@ -128,6 +128,48 @@ describe('leg CLI', () => {
     expect(out.trade.rows[0].maxHeatLoad.overLimit).toBe(true);
   });
 
+  test('cascade prints the stages coldest first, the totals and the curves with one stage fewer', () => {
+    const stage = (couples: number, interfaceResistance: number) => ({ couples, p: { length: 1e-3, area: 1e-6, segments: uniform.segments }, n: { length: 1e-3, area: 1e-6, segments: [{ ...uniform.segments[0], seebeck: -2e-4 }] }, interfaceResistance });
+    const r = leg(['cascade', caseFile('cascade', { hotSide: 300, heatLoad: 0.01, wiring: 'separate', currents: [3, null], stages: [stage(2, 0.2), stage(10, 0.05)], curvePoints: 4 })]);
+    expect(r.stderr).toBe('');
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout);
+    for (const field of ['hotSide', 'coldSide', 'deltaT', 'heatLoad', 'objective', 'wiring', 'stages', 'power', 'cop', 'curves', 'evaluations', 'seconds']) expect(out).toHaveProperty(field);
+    expect(out.stages).toHaveLength(2);
+    expect(out.stages[0].current).toBe(3);
+    expect(out.stages[0].coldSide).toBe(out.coldSide);
+    // The heat a stage rejects is the next stage's load; the total power is the stages' sum.
+    expect(out.stages[1].heatLoad).toBeCloseTo(out.stages[0].heatRejected, 9);
+    expect(out.power).toBeCloseTo(out.stages[0].power + out.stages[1].power, 12);
+    expect(out.curves.map((c: { stages: number }) => c.stages)).toEqual([2, 1]);
+    expect(out.curves[0].points).toHaveLength(4);
+  });
+
+  test('couple optimises both graded legs, the ratio and the current of the bundled detector example', () => {
+    const r = leg(['couple', join(root, 'shared', 'engine', 'examples', 'detector-couple.json')]);
+    expect(r.stderr).toBe('');
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout);
+    for (const field of ['hotSide', 'coldSide', 'deltaT', 'heatLoad', 'current', 'voltage', 'power', 'cop', 'areaRatio', 'objective', 'p', 'n', 'mismatch', 'evaluations', 'seconds']) expect(out).toHaveProperty(field);
+    expect(out.objective.kind).toBe('maxDeltaT');
+    expect(out.heatLoad).toBeCloseTo(0.002, 9);
+    expect(out.deltaT).toBeCloseTo(out.hotSide - out.coldSide, 9);
+    // The free ratio splits the case's 2 mm² of legs.
+    expect(out.p.area + out.n.area).toBeCloseTo(2e-6, 15);
+    expect(out.areaRatio).toBeCloseTo(out.n.area / out.p.area, 9);
+    for (const side of ['p', 'n']) {
+      expect(out[side].optimised).toBe(true);
+      expect(out[side].doping.perCm3).toHaveLength(5);
+      expect(out[side].leg).toEqual(expect.objectContaining({ length: 0.0012, area: out[side].area, contactResistivity: 5e-10 }));
+    }
+    // Monotone p leg: its doping never rises along the leg or never falls.
+    const d = out.p.doping.perCm3 as number[];
+    const steps = d.slice(1).map((v, k) => Math.sign(v - d[k]));
+    expect(steps.every((s) => s <= 0) || steps.every((s) => s >= 0)).toBe(true);
+    expect(out.mismatch.unit).toBe('K');
+    expect(out.mismatch.cost).toBeGreaterThanOrEqual(0);
+  });
+
   test.each<[string, string[] | (() => string[]), RegExp]>([
     ['unknown command', ['frobnicate', 'x.json'], /^command: /],
     ['missing file argument', ['solve'], /^FILE: /],
@@ -151,6 +193,22 @@ describe('leg CLI', () => {
       /^n\.segments: /,
     ],
     ['module: no legs', () => ['module', caseFile('nolegs', { hotSide: 300, deltaT: 20 })], /^p: /],
+    [
+      'cascade: a stage with zero couples',
+      () => ['cascade', caseFile('zero', { hotSide: 300, stages: [{ couples: 0, p: { length: 1e-3, area: 1e-6, segments: uniform.segments }, n: { length: 1e-3, area: 1e-6, segments: [{ ...uniform.segments[0], seebeck: -2e-4 }] } }] })],
+      /^stages\[0\]\.couples: a stage needs at least 1 couple/,
+    ],
+    [
+      'cascade: interface resistance negative',
+      () => ['cascade', caseFile('negative', { hotSide: 300, stages: [{ couples: 1, interfaceResistance: -1, p: { length: 1e-3, area: 1e-6, segments: uniform.segments }, n: { length: 1e-3, area: 1e-6, segments: [{ ...uniform.segments[0], seebeck: -2e-4 }] } }] })],
+      /^stages\[0\]\.interfaceResistance: /,
+    ],
+    [
+      'couple: bounds reversed on the n leg',
+      () => ['couple', caseFile('cbounds', { hotSide: 300, p: { length: 1e-3, area: 1e-6, segments: uniform.segments }, n: { length: 1e-3, material: { ...band, carrier: 'n' }, bounds: { minPerCm3: 1e20, maxPerCm3: 1e18 } } })],
+      /^n\.bounds\.maxPerCm3: /,
+    ],
+    ['couple: both areaRatio and n.area', () => ['couple', caseFile('cratio', { hotSide: 300, areaRatio: 1.2, p: { length: 1e-3, area: 1e-6, segments: uniform.segments }, n: { length: 1e-3, area: 1e-6, segments: [{ ...uniform.segments[0], seebeck: -2e-4 }] } })], /^areaRatio: /],
   ])('bad input (%s): exit 2, one line naming the field on stderr, nothing on stdout', (_name, args, pattern) => {
     const r = leg(typeof args === 'function' ? args() : args);
     expect(r.status).toBe(2);

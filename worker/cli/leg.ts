@@ -1,6 +1,7 @@
 /**
  * `npm run -s leg -- solve FILE` / `npm run -s leg -- optimize FILE`
  * `npm run -s leg -- curves FILE` / `npm run -s leg -- module FILE`
+ * `npm run -s leg -- couple FILE` / `npm run -s leg -- cascade FILE`
  *
  * Reads one JSON case, prints one JSON object on stdout. Invalid input
  * (unreadable file, bad JSON, a field out of range, a case with no steady
@@ -9,10 +10,10 @@
  * The contract and the case fields are in shared/engine/PHYSICS.md.
  */
 import { readFileSync } from 'node:fs';
-import { CaseError, optimizeLeg, parseCase, parseCurvesCase, parseModuleCase, runCurves, runModule, solveLeg } from '../../shared/engine';
+import { CaseError, optimizeLeg, parseCascadeCase, parseCase, parseCoupleCase, parseCurvesCase, parseModuleCase, runCascade, runCouple, runCurves, runModule, solveLeg } from '../../shared/engine';
 
-const USAGE = 'usage: npm run -s leg -- solve|optimize|curves|module FILE';
-const COMMANDS = ['solve', 'optimize', 'curves', 'module'] as const;
+const USAGE = 'usage: npm run -s leg -- solve|optimize|curves|module|couple|cascade FILE';
+const COMMANDS = ['solve', 'optimize', 'curves', 'module', 'couple', 'cascade'] as const;
 type Command = (typeof COMMANDS)[number];
 
 const isCommand = (c: string | undefined): c is Command => (COMMANDS as readonly (string | undefined)[]).includes(c);
@@ -27,6 +28,10 @@ function run(command: Command, json: unknown): unknown {
       return runCurves(parseCurvesCase(json));
     case 'module':
       return runModule(parseModuleCase(json));
+    case 'couple':
+      return runCouple(parseCoupleCase(json));
+    case 'cascade':
+      return runCascade(parseCascadeCase(json));
   }
 }
 
@@ -53,7 +58,7 @@ function readCase(file: string): unknown {
 
 function main(argv: string[]): void {
   const [command, file, ...rest] = argv;
-  if (!isCommand(command)) fail(2, `command: expected solve, optimize, curves or module, got ${command ?? 'nothing'} (${USAGE})`);
+  if (!isCommand(command)) fail(2, `command: expected solve, optimize, curves, module, couple or cascade, got ${command ?? 'nothing'} (${USAGE})`);
   if (!file || rest.length > 0) fail(2, `FILE: give exactly one case file (${USAGE})`);
   try {
     const result = run(command, readCase(file));
