@@ -1,12 +1,12 @@
 import { join } from 'node:path';
 import { Worker } from 'node:worker_threads';
 import type { RunProgress } from '../shared/api';
-import type { SearchCheckpoint } from '../shared/runs/global-search';
 import { runProgressOf } from '../shared/runs/run-progress';
 import type { FairShare } from '../server/config/env';
 import { isDatabaseUnavailable, outageLog } from '../server/db/db-errors';
 import type { Mailer } from '../server/mail/mailer';
-import { beatRun, claimRun, finishRun, otherTeamWaiting, recordProgress, requeueRun, saveCheckpoint, type ClaimedRun, type Finish, type RunLife } from '../server/runs/run-lifecycle';
+import { beatRun, claimRun, finishRun, otherTeamWaiting, recordProgress, requeueRun, saveCheckpoint, type ClaimedRun, type Finish, type RunCheckpoint, type RunLife } from '../server/runs/run-lifecycle';
+import { frozenStarts } from '../server/runs/run-starts';
 import type { ThreadInput, ThreadMessage } from './engine-protocol';
 import { mailRunFinished } from './run-mail';
 
@@ -57,14 +57,14 @@ export async function runJob(d: RunJobDeps, runId: string, jobId: string): Promi
   if (run.attempts > MAX_ATTEMPTS) return end(d, run, t0, { state: 'failed', error: `the run lost its worker ${run.attempts - 1} times; it may be too large for one worker's memory or time limit`, result: null });
 
   const stop = new Int32Array(new SharedArrayBuffer(4));
-  const starts = Number(run.design_snapshot.starts ?? 1);
-  const input: ThreadInput = { case: run.case_json, starts, seed: runId, resume: run.checkpoint, stopFlag: stop.buffer as SharedArrayBuffer };
+  const starts = frozenStarts(run.kind, run.design_snapshot, run.cooler_snapshot);
+  const input: ThreadInput = { kind: run.kind, case: run.case_json, starts, seed: runId, resume: run.checkpoint, stopFlag: stop.buffer as SharedArrayBuffer };
   const thread = new Worker(join(__dirname, 'engine-thread.ts'), { execArgv: ['--require', 'tsx/cjs'], workerData: input });
 
   let latest: RunProgress | null = null;
   let written: RunProgress | null = null;
-  let checkpoint: SearchCheckpoint | null = null;
-  let savedCheckpoint: SearchCheckpoint | null = run.checkpoint;
+  let checkpoint: RunCheckpoint | null = null;
+  let savedCheckpoint: RunCheckpoint | null = run.checkpoint;
   let lost = false;
   let cancelled = false;
   let yielding = false;
@@ -139,7 +139,8 @@ async function end(d: RunJobDeps, run: ClaimedRun, t0: number, o: Finish): Promi
   if (!ok) return 'superseded by another worker; nothing written';
   const seconds = (Date.now() - t0) / 1000;
   await mailRunFinished(d.life.ds, d.mailer, d.appOrigin, {
-    id: run.id, state: o.state, designId: run.design_id, designName: String(run.design_snapshot.name), launchedBy: run.launched_by, error: o.error, result: o.result, seconds,
+    id: run.id, number: run.number, kind: run.kind, state: o.state, designId: run.design_id,
+    designName: String((run.kind === 'leg' ? run.design_snapshot : run.cooler_snapshot)?.name ?? ''), launchedBy: run.launched_by, error: o.error, result: o.result, seconds,
   }).catch((err: Error) => console.error(`[worker] mail for run ${run.id} failed: ${err.message}`));
   return `${o.state} in ${seconds.toFixed(1)} s`;
 }

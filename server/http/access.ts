@@ -14,6 +14,8 @@ export const anyMember: readonly Role[] = roles;
 /** Role lists come from the one permission table (shared/api/permissions.ts) the client uses too. */
 export const designers: readonly Role[] = rolesFor('designs.write');
 export const admins: readonly Role[] = rolesFor('team.manage');
+export const launchers: readonly Role[] = rolesFor('runs.launch');
+export const deleters: readonly Role[] = rolesFor('records.delete');
 
 declare module 'express-serve-static-core' {
   interface Request {

@@ -8,6 +8,7 @@ import type { Env } from '../config/env';
 import type { Mailer } from '../mail/mailer';
 import type { RelayStatus } from '../realtime/event-relay';
 import { auditRoutes } from '../routes/audit-routes';
+import { coolerRoutes } from '../routes/cooler-routes';
 import { authRoutes } from '../routes/auth-routes';
 import { designRoutes } from '../routes/design-routes';
 import { familyRoutes } from '../routes/family-routes';
@@ -28,15 +29,17 @@ export type AppDeps = { env: Env; ds: DataSource; boss: PgBoss; mailer: Mailer; 
 /** Every API route, in one table: what the access matrix test walks. */
 export function apiRoutes(d: AppDeps): RouteSpec[] {
   const accountDeps = { ds: d.ds, auth: d.auth, boss: d.boss, appOrigin: d.env.appOrigin };
+  const runDeps = { ds: d.ds, boss: d.boss, runQueue: d.env.runQueue, fair: d.env.fairShare, heartbeatSeconds: d.env.heartbeatSeconds };
   return [
     ...systemRoutes({ ds: d.ds, boss: d.boss, mailer: d.mailer, heartbeatSeconds: d.env.heartbeatSeconds, version: d.version, mailCatcher: d.env.mailCatcher, eventRelay: d.eventRelay }),
     ...authRoutes(accountDeps),
     ...teamRoutes(accountDeps),
     ...auditRoutes(d.ds),
     ...familyRoutes(d.ds),
-    ...designRoutes({ ds: d.ds, boss: d.boss, runQueue: d.env.runQueue, fair: d.env.fairShare, heartbeatSeconds: d.env.heartbeatSeconds }),
+    ...designRoutes(runDeps),
     ...growthRoutes({ ds: d.ds, boss: d.boss, mailer: d.mailer, appOrigin: d.env.appOrigin }),
     ...moduleRoutes(d.ds),
+    ...coolerRoutes(runDeps),
   ];
 }
 

@@ -16,6 +16,7 @@ export const objectReaders = {
   run: runReaders,
   sweep: runReaders,
   module: runReaders,
+  cooler: runReaders,
   growth: rolesFor('growth.read'),
 } as const satisfies Record<string, readonly Role[]>;
 

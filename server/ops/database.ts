@@ -32,7 +32,7 @@ export async function prepareDatabase(env: Env, opts: { fresh: boolean; seed?: b
     log('db', ran.length ? `migrations applied: ${ran.map((m) => m.name).join(', ')}` : 'schema up to date');
     if (opts.seed ?? !env.production) {
       const added = await seedDemo(ds);
-      log('db', `demo data added: ${added.teams} teams, ${added.users} users, ${added.families} families, ${added.modules} modules`);
+      log('db', `demo data added: ${added.teams} teams, ${added.users} users, ${added.families} families, ${added.modules} modules, ${added.coolers} coolers`);
     }
   } finally {
     await ds.destroy();

@@ -36,7 +36,8 @@ export function designRoutes(d: RunDeps): RouteSpec[] {
       res.status(201).json({ sweep: await launchSweep(d, requireTeam(req), requireUser(req), req.params.id, res.locals.body) });
     }),
     route('get', '/runs', objectReaders.run, async (req, res) => {
-      res.json({ runs: await listRuns(d, requireTeam(req), { designId: req.query.designId as string | undefined, sweepId: req.query.sweepId as string | undefined }) });
+      const { designId, sweepId, coolerId } = req.query;
+      res.json({ runs: await listRuns(d, requireTeam(req), { designId, sweepId, coolerId }) });
     }),
     route('get', '/runs/:id', objectReaders.run, async (req, res) => {
       res.json(await runDetail(d, requireTeam(req), req.params.id, requireUser(req).id));

@@ -1,7 +1,6 @@
 import type PgBoss from 'pg-boss';
 import type { DataSource } from 'typeorm';
 import type { RunProgress } from '../../shared/api';
-import type { SearchCheckpoint } from '../../shared/runs/global-search';
 import type { FairShare } from '../config/env';
 import { publishEvent, type TeamEvent } from '../db/events';
 import { returned, retireRunJob, sendRunJob } from './run-jobs';
@@ -17,10 +16,18 @@ import { returned, retireRunJob, sendRunJob } from './run-jobs';
  */
 export type RunLife = { ds: DataSource; boss: PgBoss };
 
-/** What a worker needs of the run it claimed. */
+/**
+ * Where a multi-start search stands after a start: every kind of run's search
+ * checkpoints in this shape (global-search, couple-search, cascade-search),
+ * with `best` that kind's result.
+ */
+export type RunCheckpoint = { nextStart: number; bestStart: number; best: object | null };
+
+/** What a worker needs of the run it claimed: a leg run's design, or a couple or cascade run's cooler (snapshots as launched). */
 export type ClaimedRun = {
-  id: string; team_id: string; queue: string; design_id: string; design_snapshot: Record<string, unknown>; case_json: Record<string, unknown>;
-  checkpoint: SearchCheckpoint | null; attempts: number; launched_by: string;
+  id: string; team_id: string; queue: string; number: number; kind: 'leg' | 'couple' | 'cascade';
+  design_id: string | null; design_snapshot: Record<string, unknown> | null; cooler_snapshot: Record<string, unknown> | null; case_json: Record<string, unknown>;
+  checkpoint: RunCheckpoint | null; attempts: number; launched_by: string;
 };
 
 export type ClaimOutcome = { kind: 'claimed'; run: ClaimedRun } | { kind: 'deferred'; reason: string } | { kind: 'gone'; reason: string };
@@ -62,7 +69,7 @@ export async function claimRun(life: RunLife, runId: string, jobId: string, work
     const rows = returned<ClaimedRun>(await m.query(
       `UPDATE run SET state = 'running', worker_id = $2, job_id = $3, heartbeat_at = now(), attempts = attempts + 1,
          started_at = coalesce(started_at, now()), wait_reason = NULL
-       WHERE id = $1 RETURNING id, team_id, queue, design_id, design_snapshot, case_json, checkpoint, attempts, launched_by`, [run.id, workerId, jobId]));
+       WHERE id = $1 RETURNING id, team_id, queue, number, kind, design_id, design_snapshot, cooler_snapshot, case_json, checkpoint, attempts, launched_by`, [run.id, workerId, jobId]));
     return { kind: 'claimed', run: rows[0]! };
   });
   if (out.kind === 'claimed') await announce(life.ds, stateEvents(out.run.team_id, out.run.id, { state: 'running' }));
@@ -89,7 +96,7 @@ export async function recordProgress(ds: DataSource, run: { id: string; team_id:
   await publishEvent(ds, { teamId: run.team_id, room: `run:${run.id}`, event: 'run:progress', payload: p });
 }
 
-export async function saveCheckpoint(ds: DataSource, runId: string, workerId: string, cp: SearchCheckpoint): Promise<void> {
+export async function saveCheckpoint(ds: DataSource, runId: string, workerId: string, cp: RunCheckpoint): Promise<void> {
   await whileHeld(ds, runId, workerId, 'checkpoint = $3, checkpoint_at = now()', [JSON.stringify(cp)]);
 }
 
@@ -120,7 +127,7 @@ export async function requeueRun(life: RunLife, runId: string, workerId: string,
 }
 
 /** The best design a checkpoint holds, as a run result. */
-function resultOf(cp: SearchCheckpoint | null, starts: unknown): Record<string, unknown> | null {
+function resultOf(cp: RunCheckpoint | null, starts: unknown): Record<string, unknown> | null {
   if (!cp?.best) return null;
   return { ...cp.best, search: { startsDone: cp.nextStart, bestStart: cp.bestStart, starts: Number(starts ?? cp.nextStart) } };
 }
@@ -133,11 +140,12 @@ function resultOf(cp: SearchCheckpoint | null, starts: unknown): Record<string, 
  */
 export async function cancelRunState(life: RunLife, runId: string): Promise<'cancelled' | 'running' | null> {
   const out = await life.ds.transaction(async (m) => {
-    const [r] = (await m.query('SELECT id, team_id, queue, state, job_id, checkpoint, design_snapshot FROM run WHERE id = $1 FOR UPDATE', [runId])) as Array<{ id: string; team_id: string; queue: string; state: string; job_id: string | null; checkpoint: SearchCheckpoint | null; design_snapshot: Record<string, unknown> }>;
+    // Starts are frozen in the design snapshot (leg runs) or the cooler's input (couple and cascade runs).
+    const [r] = (await m.query(`SELECT id, team_id, queue, state, job_id, checkpoint, coalesce(design_snapshot->'starts', cooler_snapshot->'input'->'starts') AS starts FROM run WHERE id = $1 FOR UPDATE`, [runId])) as Array<{ id: string; team_id: string; queue: string; state: string; job_id: string | null; checkpoint: RunCheckpoint | null; starts: unknown }>;
     if (!r) return null;
     if (r.state === 'queued') {
       await m.query(`UPDATE run SET state = 'cancelled', cancel_requested = true, finished_at = now(), wait_reason = NULL, result = $2 WHERE id = $1`,
-        [r.id, JSON.stringify(resultOf(r.checkpoint, r.design_snapshot.starts))]);
+        [r.id, JSON.stringify(resultOf(r.checkpoint, r.starts))]);
       await retireRunJob(m, life.boss, r.queue, r.job_id);
       return { state: 'cancelled' as const, teamId: r.team_id };
     }

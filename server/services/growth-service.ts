@@ -17,6 +17,7 @@ import { enqueueGrowthMail } from '../queue/growth-mail-queue';
 import { queues } from '../queue/queues';
 import { publishEvent } from '../db/events';
 import { findRun } from './run-service';
+import { runName } from './run-summary';
 import { uploadText } from './family-upload-service';
 
 export type GrowthDeps = { ds: DataSource; boss: PgBoss; mailer: Mailer; appOrigin: string };
@@ -77,6 +78,10 @@ async function mailRoles(ds: DataSource, team: Team, roles: string[]): Promise<s
 export async function releaseRun(d: GrowthDeps, team: Team, actor: Actor, who: AuditWho, runId: unknown, input: z.output<typeof releaseRequestSchema>): Promise<GrowthOrderDto> {
   const order = await d.ds.transaction(async (m) => {
     const run = await findRun(m, team, runId);
+    if (run.kind !== 'leg') {
+      // A couple or cascade has several legs and no one profile: each leg is grown from its own leg run.
+      throw new HttpError(409, `A ${run.kind} run is not released to growth: release the leg runs its legs came from instead.`, [{ field: 'runId', message: `the run is a ${run.kind} run, not a leg run` }], 'Conflict');
+    }
     const result = run.result as { doping?: unknown } | null;
     if (run.state !== 'succeeded' || !result?.doping) {
       throw new HttpError(409, 'Only a converged run with a doping profile can be released.', [{ field: 'runId', message: `the run is ${run.state}` }], 'Conflict');
@@ -84,8 +89,8 @@ export async function releaseRun(d: GrowthDeps, team: Team, actor: Actor, who: A
     const o = await m.getRepository(GrowthOrder).save(m.getRepository(GrowthOrder).create({ ...input, dueDate: input.dueDate ?? null, teamId: team.id, runId: run.id, releasedBy: actor.id, state: 'requested', sheetStatus: 'computing' }));
     await event(m, o.id, actor.displayName, 'released', null, 'requested', input.notes);
     await sendSheetJob(d.boss, m, o.id);
-    await recordAudit(m, who, { action: 'order-released', summary: `released run ${run.id.slice(0, 8)} of ${String(run.designSnapshot.name)} to growth as batch ${o.batch}`, subjectId: o.id });
-    return { o, designName: String(run.designSnapshot.name), runNumber: run.number };
+    await recordAudit(m, who, { action: 'order-released', summary: `released run ${run.id.slice(0, 8)} of ${runName(run)} to growth as batch ${o.batch}`, subjectId: o.id });
+    return { o, designName: runName(run), runNumber: run.number };
   });
   const growers = await mailRoles(d.ds, team, ['grower']);
   if (growers.length > 0) {

@@ -13,13 +13,18 @@ import { judge, type EngineVerdict } from './engine-judge';
 import { findFamily, findVersion } from './family-store';
 import type { CurvesCsvInput } from './module-curves-csv';
 import { findRun } from './run-service';
+import { runName } from './run-summary';
 
 type ModuleInput = z.output<typeof moduleInputSchema>;
 
-/** A leg source of the caller's team, as the engine's leg definition. */
-async function resolveLeg(m: EntityManager, team: Team, s: LegSource, field: string): Promise<LegDefinitionInput> {
+/** A leg source of the caller's team, as the engine's leg definition (modules and cooler stages share it). */
+export async function resolveLeg(m: EntityManager, team: Team, s: LegSource, field: string): Promise<LegDefinitionInput> {
   if (s.kind === 'run') {
     const run = await findRun(m, team, s.runId).catch(() => { throw new ValidationError([{ field: `${field}.runId`, message: 'no such run in this team' }]); });
+    if (run.kind !== 'leg') {
+      const hint = run.kind === 'couple' ? 'a cascade stage takes both its legs as {kind: "couple", runId}' : 'a cascade has no single leg to take';
+      throw new ValidationError([{ field: `${field}.runId`, message: `the run is a ${run.kind} run, not a leg run (${hint})` }]);
+    }
     if (!run.result) throw new ValidationError([{ field: `${field}.runId`, message: `the run has no result (it is ${run.state})` }]);
     const legs = legsFromRun(run.caseJson, run.result as unknown as RunResultLegs);
     const leg = legs[s.leg];
@@ -28,7 +33,9 @@ async function resolveLeg(m: EntityManager, team: Team, s: LegSource, field: str
   }
   const family = await findFamily(m, team, s.familyId).catch(() => { throw new ValidationError([{ field: `${field}.familyId`, message: 'no such family in this team' }]); });
   const version = await findVersion(m, family, s.version);
-  return { length: s.lengthMm * 1e-3, area: s.areaMm2 * 1e-6, material: version.definition as LegDefinitionInput['material'], doping: s.perCm3 };
+  const material = version.definition as NonNullable<LegDefinitionInput['material']>;
+  // A constant-property material does not depend on doping: the engine's couple and cascade checks refuse one with it.
+  return { length: s.lengthMm * 1e-3, area: s.areaMm2 * 1e-6, material, ...(material.kind === 'constant' ? {} : { doping: s.perCm3 }) };
 }
 
 /** The engine case of a module (checked separately, so a saved module always computes). */
@@ -79,9 +86,9 @@ async function sourceNamer(ds: DataSource, team: Team, inputs: ModuleInput[]): P
   const runs = runIds.length ? await ds.getRepository(Run).findBy({ teamId: team.id, id: In(runIds) }) : [];
   const families = familyIds.length ? await ds.getRepository(MaterialFamily).findBy({ teamId: team.id, id: In(familyIds) }) : [];
   // "Run 12 · Stage-2 leg": two runs of one design are two different legs.
-  const runName = new Map(runs.map((r) => [r.id, `Run ${r.number} · ${String(r.designSnapshot.name)}`]));
+  const runNames = new Map(runs.map((r) => [r.id, `Run ${r.number} · ${runName(r)}`]));
   const familyName = new Map(families.map((f) => [f.id, f.name]));
-  return (s) => (s.kind === 'run' ? runName.get(s.runId) : familyName.get(s.familyId)) ?? null;
+  return (s) => (s.kind === 'run' ? runNames.get(s.runId) : familyName.get(s.familyId)) ?? null;
 }
 
 export async function listModules(ds: DataSource, team: Team): Promise<ModuleSummary[]> {

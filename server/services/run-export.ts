@@ -2,6 +2,7 @@ import type { DataSource } from 'typeorm';
 import { Team } from '../db/entities';
 import { HttpError } from '../http/errors';
 import { csvComment, csvDocument } from './csv-writer';
+import { coolerRunCsv } from './cooler-csv';
 import { findRun } from './run-service';
 
 type Profile = { x: number[]; temperature: number[]; seebeck: number[]; sigma: number[]; kappa: number[]; zT: number[]; perCm3?: number[] };
@@ -14,8 +15,11 @@ export async function exportRun(ds: DataSource, team: Team, id: unknown, format:
   if (!r.result) throw new HttpError(409, `The run has no result yet (it is ${r.state}).`, [{ field: 'state', message: r.state }], 'Conflict');
   const stem = `run-${r.id.slice(0, 8)}`;
   if (format === 'json') {
-    return { filename: `${stem}.json`, body: `${JSON.stringify({ runId: r.id, state: r.state, engineVersion: r.engineVersion, design: r.designSnapshot, case: r.caseJson, result: r.result }, null, 2)}\n` };
+    const ran = r.kind === 'leg' ? { design: r.designSnapshot } : { cooler: r.coolerSnapshot };
+    return { filename: `${stem}.json`, body: `${JSON.stringify({ runId: r.id, kind: r.kind, state: r.state, engineVersion: r.engineVersion, ...ran, case: r.caseJson, result: r.result }, null, 2)}\n` };
   }
+  // A couple or cascade has no one profile: its CSV is its own table (stages and curves, or the couple's figures and legs).
+  if (r.kind !== 'leg') return coolerRunCsv(ds, team, r.id, r.kind);
   const res = r.result as { profile: Profile; deltaT: number; current: number; coldSide: number; hotSide: number; heatLoad: number; cop: number };
   const p = res.profile;
   const header = ['x_mm', 'temperature_K', 'n_per_cm3', 'seebeck_uV_per_K', 'sigma_S_per_cm', 'kappa_W_per_m_K', 'zT'];

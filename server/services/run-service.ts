@@ -1,7 +1,7 @@
 import type PgBoss from 'pg-boss';
 import type { DataSource, EntityManager } from 'typeorm';
-import { traceShownMax, type RunDetail, type RunProgress, type RunSummary, type RunWaiting, type Sweep as SweepDto, type SweepRequest, type TracePage } from '../../shared/api';
-import { bipolarOfProfile, type MaterialInput, type ProfileLike } from '../../shared/engine';
+import { traceShownMax, type CoolerRunDetail, type RunDetail, type RunProgress, type RunSummary, type Sweep as SweepDto, type SweepRequest, type TracePage } from '../../shared/api';
+import type { MaterialInput } from '../../shared/engine';
 import { designToCase, withSweepValue, type DesignParameters } from '../../shared/runs/design-case';
 import { Design, MaterialFamilyVersion, Run, Sweep, Team } from '../db/entities';
 import type { FairShare } from '../config/env';
@@ -12,7 +12,9 @@ import { waitingOf, type WaitContext } from '../runs/queue-position';
 import { sendRunJob } from '../runs/run-jobs';
 import { cancelRunState } from '../runs/run-lifecycle';
 import { version as appVersion } from '../version';
+import { coolerSnapshotOf } from '../../shared/runs/cooler-results';
 import { checkSweep, describe, findDesign } from './design-service';
+import { summarise } from './run-summary';
 
 export type RunDeps = { ds: DataSource; boss: PgBoss; runQueue: string; fair: FairShare; heartbeatSeconds: number };
 
@@ -25,27 +27,6 @@ export async function findRun(m: EntityManager, team: Team, id: unknown): Promis
   return r;
 }
 
-export function summarise(r: Run, designName: string, launchedBy: string, waiting: RunWaiting | null = null): RunSummary {
-  const p = r.progress as Partial<RunProgress> | null;
-  const res = r.result as { objective?: { value: number }; deltaT?: number; profile?: ProfileLike } | null;
-  return {
-    id: r.id, number: r.number, kind: 'leg', designId: r.designId, coolerId: null, designName, sweepId: r.sweepId, sweepValue: r.sweepValue, state: r.state, objective: r.objective,
-    best: res?.objective?.value ?? p?.best ?? null, deltaT: res?.deltaT ?? null,
-    fractionDone: r.state === 'succeeded' ? 1 : p?.fractionDone ?? 0,
-    starts: startsOf(r),
-    launchedBy, createdAt: r.createdAt.toISOString(), startedAt: r.startedAt?.toISOString() ?? null, finishedAt: r.finishedAt?.toISOString() ?? null,
-    error: r.error, attempts: r.attempts, waiting: r.state === 'queued' ? waiting : null,
-    // One neutrality solve per profile point, and only for two-band families: cheap enough for every list.
-    bipolar: bipolarOfProfile(r.caseJson.material as MaterialInput | undefined, res?.profile),
-  };
-}
-
-/** The search starts the run was launched with (frozen in its design snapshot; runs from before starts were a setting made one). */
-function startsOf(r: Run): number {
-  const n = Number(r.designSnapshot.starts ?? 1);
-  return Number.isInteger(n) && n >= 1 ? n : 1;
-}
-
 /**
  * The team's next run number. The UPDATE locks the team's row until the
  * launch commits, so launches at the same moment queue here and each gets its
@@ -56,14 +37,23 @@ async function nextRunNumber(m: EntityManager, teamId: string): Promise<number> 
   return rows[0][0].n;
 }
 
-async function insertRun(m: EntityManager, d: Design, params: DesignParameters, userId: string, queue: string, sweep?: { id: string; value: number }): Promise<Run> {
+/** What a run computes: a design's leg (kind "leg") or a cooler (kind "couple" / "cascade"), frozen at launch. */
+export type RunSource = Pick<Run, 'kind' | 'designId' | 'designSnapshot' | 'familyVersionId' | 'coolerId' | 'coolerSnapshot' | 'caseJson' | 'objective'>;
+
+/** A leg run's source: the design with these parameters, its family version frozen. */
+async function legSource(m: EntityManager, d: Design, params: DesignParameters): Promise<RunSource> {
   const version = await m.getRepository(MaterialFamilyVersion).findOneByOrFail({ familyId: d.familyId, version: d.familyVersion });
   const snapshot = { ...d, ...params };
+  return {
+    kind: 'leg', designId: d.id, designSnapshot: JSON.parse(JSON.stringify(snapshot)) as Record<string, unknown>, familyVersionId: version.id, coolerId: null, coolerSnapshot: null,
+    caseJson: designToCase(params, version.definition as MaterialInput) as Record<string, unknown>, objective: d.objective,
+  };
+}
+
+async function insertRun(m: EntityManager, teamId: string, source: RunSource, userId: string, queue: string, sweep?: { id: string; value: number }): Promise<Run> {
   const run = m.getRepository(Run).create({
-    teamId: d.teamId, number: await nextRunNumber(m, d.teamId), designId: d.id, designSnapshot: JSON.parse(JSON.stringify(snapshot)) as Record<string, unknown>, familyVersionId: version.id,
-    sweepId: sweep?.id ?? null, sweepValue: sweep?.value ?? null,
-    caseJson: designToCase(params, version.definition as MaterialInput) as Record<string, unknown>,
-    objective: d.objective, state: 'queued', queue, launchedBy: userId, engineVersion: appVersion,
+    ...source, teamId, number: await nextRunNumber(m, teamId), sweepId: sweep?.id ?? null, sweepValue: sweep?.value ?? null,
+    state: 'queued', queue, launchedBy: userId, engineVersion: appVersion,
   });
   return m.getRepository(Run).save(run);
 }
@@ -87,17 +77,29 @@ async function admitLaunch(m: EntityManager, team: Team, count: number, fair: Fa
   }
 }
 
-export async function launchRun(d: RunDeps, team: Team, user: { id: string; displayName: string }, designId: unknown): Promise<RunSummary> {
-  const out = await d.ds.transaction(async (m) => {
-    const design = await findDesign(m, team, designId);
+/**
+ * The one launch path of every kind of run: in one transaction, `prepare`
+ * finds what is launched (404 for another team's), the team's limits admit
+ * it, it gets its number and its job; then watchers hear of it.
+ */
+export async function launchOne(d: RunDeps, team: Team, user: { id: string; displayName: string }, prepare: (m: EntityManager) => Promise<RunSource>): Promise<RunSummary> {
+  const run = await d.ds.transaction(async (m) => {
+    const source = await prepare(m);
     await admitLaunch(m, team, 1, d.fair);
-    const run = await insertRun(m, design, design, user.id, d.runQueue);
+    const run = await insertRun(m, team.id, source, user.id, d.runQueue);
     await sendRunJob(m, d.boss, run);
-    return { run, design };
+    return run;
   });
-  await publishEvent(d.ds, { teamId: team.id, event: 'run:state', payload: { runId: out.run.id, state: 'queued' } });
-  const waiting = await waitingOf(d.ds.manager, [out.run.id], waitContext(d));
-  return summarise(out.run, out.design.name, user.displayName, waiting.get(out.run.id) ?? null);
+  await publishEvent(d.ds, { teamId: team.id, event: 'run:state', payload: { runId: run.id, state: 'queued' } });
+  const waiting = await waitingOf(d.ds.manager, [run.id], waitContext(d));
+  return summarise(run, user.displayName, waiting.get(run.id) ?? null);
+}
+
+export async function launchRun(d: RunDeps, team: Team, user: { id: string; displayName: string }, designId: unknown): Promise<RunSummary> {
+  return launchOne(d, team, user, async (m) => {
+    const design = await findDesign(m, team, designId);
+    return legSource(m, design, design);
+  });
 }
 
 export async function launchSweep(d: RunDeps, team: Team, user: { id: string; displayName: string }, designId: unknown, req: SweepRequest): Promise<SweepDto> {
@@ -108,7 +110,7 @@ export async function launchSweep(d: RunDeps, team: Team, user: { id: string; di
     const sweep = await m.getRepository(Sweep).save(m.getRepository(Sweep).create({ teamId: team.id, designId: design.id, parameter: req.parameter, values: req.values, createdBy: user.displayName }));
     const runs: Run[] = [];
     for (const value of req.values) {
-      const run = await insertRun(m, design, withSweepValue(design, req.parameter, value), user.id, d.runQueue, { id: sweep.id, value });
+      const run = await insertRun(m, team.id, await legSource(m, design, withSweepValue(design, req.parameter, value)), user.id, d.runQueue, { id: sweep.id, value });
       await sendRunJob(m, d.boss, run);
       runs.push(run);
     }
@@ -116,7 +118,7 @@ export async function launchSweep(d: RunDeps, team: Team, user: { id: string; di
   });
   await publishEvent(d.ds, { teamId: team.id, event: 'run:state', payload: { sweepId: sweep.id, state: 'queued' } });
   const waiting = await waitingOf(d.ds.manager, runs.map((r) => r.id), waitContext(d));
-  return { id: sweep.id, designId: design.id, parameter: req.parameter as SweepDto['parameter'], values: sweep.values, createdAt: sweep.createdAt.toISOString(), runs: runs.map((r) => summarise(r, design.name, user.displayName, waiting.get(r.id) ?? null)) };
+  return { id: sweep.id, designId: design.id, parameter: req.parameter as SweepDto['parameter'], values: sweep.values, createdAt: sweep.createdAt.toISOString(), runs: runs.map((r) => summarise(r, user.displayName, waiting.get(r.id) ?? null)) };
 }
 
 /**
@@ -133,7 +135,7 @@ export async function cancelRun(d: RunDeps, team: Team, id: unknown): Promise<Ru
   }
   const run = await findRun(d.ds.manager, team, r.id);
   const who = await names(d.ds.manager, [run.launchedBy]);
-  return summarise(run, String(run.designSnapshot.name), who.get(run.launchedBy) ?? 'a former member');
+  return summarise(run, who.get(run.launchedBy) ?? 'a former member');
 }
 
 async function names(m: EntityManager, userIds: string[]): Promise<Map<string, string>> {
@@ -142,15 +144,17 @@ async function names(m: EntityManager, userIds: string[]): Promise<Map<string, s
   return new Map(rows.map((r) => [r.id, r.display_name]));
 }
 
-export async function listRuns(d: Pick<RunDeps, 'ds' | 'fair' | 'heartbeatSeconds'>, team: Team, filter: { designId?: string; sweepId?: string }): Promise<RunSummary[]> {
+/** The team's runs of every kind, newest first; `coolerId` lists a cooler's couple or cascade runs. */
+export async function listRuns(d: Pick<RunDeps, 'ds' | 'fair' | 'heartbeatSeconds'>, team: Team, filter: { designId?: unknown; sweepId?: unknown; coolerId?: unknown }): Promise<RunSummary[]> {
   const { ds } = d;
   const qb = ds.getRepository(Run).createQueryBuilder('r').where('r.teamId = :team', { team: team.id }).orderBy('r.createdAt', 'DESC').take(200);
   if (filter.designId && isUuid(filter.designId)) qb.andWhere('r.designId = :d', { d: filter.designId });
   if (filter.sweepId && isUuid(filter.sweepId)) qb.andWhere('r.sweepId = :s', { s: filter.sweepId });
+  if (filter.coolerId && isUuid(filter.coolerId)) qb.andWhere('r.coolerId = :c', { c: filter.coolerId });
   const runs = await qb.getMany();
   const who = await names(ds.manager, [...new Set(runs.map((r) => r.launchedBy))]);
   const waiting = await waitingOf(ds.manager, runs.filter((r) => r.state === 'queued').map((r) => r.id), waitContext(d));
-  return runs.map((r) => summarise(r, String(r.designSnapshot.name), who.get(r.launchedBy) ?? 'a former member', waiting.get(r.id) ?? null));
+  return runs.map((r) => summarise(r, who.get(r.launchedBy) ?? 'a former member', waiting.get(r.id) ?? null));
 }
 
 type TraceRow = { iteration: number; objective: number; best: number; seconds: number };
@@ -172,21 +176,30 @@ export async function tracePage(ds: DataSource, team: Team, id: unknown, q: { of
   return { total, offset: q.offset, points };
 }
 
-export async function runDetail(d: Pick<RunDeps, 'ds' | 'fair' | 'heartbeatSeconds'>, team: Team, id: unknown, userId: string): Promise<RunDetail> {
+/** A leg run answers runDetailSchema; a couple or cascade run coolerRunDetailSchema (told apart by `run.kind`). */
+export async function runDetail(d: Pick<RunDeps, 'ds' | 'fair' | 'heartbeatSeconds'>, team: Team, id: unknown, userId: string): Promise<RunDetail | CoolerRunDetail> {
   return d.ds.transaction(async (m) => {
     const r = await findRun(m, team, id);
-    const design = await describe(m, await findDesign(m, team, r.designId), userId);
-    const version = await m.getRepository(MaterialFamilyVersion).findOneByOrFail({ id: r.familyVersionId });
     const trace = await thinTrace(m, r.id, traceShownMax);
     const who = await names(m, [r.launchedBy]);
     const waiting = await waitingOf(m, [r.id], waitContext(d));
+    const run = summarise(r, who.get(r.launchedBy) ?? 'a former member', waiting.get(r.id) ?? null);
+    const progress = (r.progress as RunProgress | null) ?? null;
+    if (r.kind !== 'leg') {
+      // The frozen cooler, not the cooler as it is now: what was run is what is shown.
+      const cooler = coolerSnapshotOf(r.coolerSnapshot);
+      if (!cooler) throw new Error(`run ${r.id} has no readable cooler snapshot`);
+      return { run, cooler, case: r.caseJson, progress, trace: trace.points, traceTotal: trace.total, result: r.result, engineVersion: r.engineVersion };
+    }
+    const design = await describe(m, await findDesign(m, team, r.designId), userId);
+    const version = await m.getRepository(MaterialFamilyVersion).findOneByOrFail({ id: r.familyVersionId ?? undefined });
     // The frozen snapshot, not the design as it is now: what was run is what is shown.
-    const snap = r.designSnapshot as Record<string, unknown>;
+    const snap = r.designSnapshot ?? {};
     return {
-      run: summarise(r, String(snap.name), who.get(r.launchedBy) ?? 'a former member', waiting.get(r.id) ?? null),
+      run,
       design: { ...design, ...pick(snap, design), familyVersion: version.version },
       case: r.caseJson, familyVersion: version.version,
-      progress: (r.progress as RunProgress | null) ?? null,
+      progress,
       trace: trace.points, traceTotal: trace.total, result: r.result, engineVersion: r.engineVersion,
     };
   });

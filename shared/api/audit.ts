@@ -16,6 +16,7 @@ export const auditActions = [
   'member-removed',
   'order-released',
   'module-deleted',
+  'cooler-deleted',
   'family-archived',
   'family-unarchived',
   'sheet-exported',

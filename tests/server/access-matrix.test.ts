@@ -90,6 +90,14 @@ const policy: Record<string, 'public' | Role[]> = {
   'PUT /modules/:id': designers,
   'DELETE /modules/:id': designers,
   'GET /modules/:id/curves.csv': runReaders,
+  'GET /coolers': runReaders,
+  'POST /coolers': designers,
+  'GET /coolers/:id': runReaders,
+  'PUT /coolers/:id': designers,
+  'DELETE /coolers/:id': admins,
+  'POST /coolers/:id/runs': designers,
+  'GET /runs/:id/cascade.csv': runReaders,
+  'GET /runs/:id/couple.csv': runReaders,
 };
 
 const key = (s: RouteSpec): string => `${s.method.toUpperCase()} ${s.path}`;
@@ -111,6 +119,7 @@ const validBody: Record<string, object> = {
   'POST /growth-orders/:id/close': { verdict: 'rejected', reason: 'outsider' },
   'PUT /growth-orders/:id/sheet': { zones: 2 },
   'PUT /growth-orders/:id/yield': { dopingScatter: 0.07 },
+  'PUT /coolers/:id': { kind: 'cascade', name: 'outsider', hotSide: 300, stages: [{ couples: 1, source: { kind: 'couple', runId: '00000000-0000-4000-8000-000000000000' } }] },
   'PUT /modules/:id': { name: 'outsider', p: { kind: 'family', familyId: '00000000-0000-4000-8000-000000000000', perCm3: 1e19, lengthMm: 1, areaMm2: 1 }, n: { kind: 'family', familyId: '00000000-0000-4000-8000-000000000000', perCm3: 1e19, lengthMm: 1, areaMm2: 1 }, hotSide: 300, deltaT: 30 },
 };
 
@@ -168,7 +177,9 @@ it('a member of another team gets 404 for every object of this team, and nothing
   const moduleRes = await lab.post('/api/modules').send({ name: `Matrix module ${Date.now()}`, ...legs, hotSide: 300, deltaT: 30, couples: 10 });
   expect(moduleRes.body.errors ?? []).toEqual([]);
   const moduleId = moduleRes.body.module.id as string;
-  const ids: Record<string, string> = { '/families/': family.id, '/team/members/': viewer.id, '/team/invitations/': randomUUID(), '/designs/': designId, '/runs/': runId, '/sweeps/': sweepId, '/growth-orders/': orderId, '/modules/': moduleId };
+  // The seeded demo cascade: a cooler of this team.
+  const coolerId = (await lab.get('/api/coolers')).body.coolers.find((c: { name: string }) => c.name.startsWith('Demo: detector cascade')).id as string;
+  const ids: Record<string, string> = { '/families/': family.id, '/team/members/': viewer.id, '/team/invitations/': randomUUID(), '/designs/': designId, '/runs/': runId, '/sweeps/': sweepId, '/growth-orders/': orderId, '/modules/': moduleId, '/coolers/': coolerId };
   for (const s of specs.filter((x) => x.path.includes(':id'))) {
     const prefix = Object.keys(ids).find((p) => s.path.startsWith(p))!;
     const outsider = await signedIn(ctx, demo.otherTeamAdmin);
@@ -176,6 +187,7 @@ it('a member of another team gets 404 for every object of this team, and nothing
     expect(`${key(s)} → ${res.status}`).toBe(`${key(s)} → 404`);
   }
   expect((await lab.get(`/api/modules/${moduleId}`)).status).toBe(200);
+  expect((await lab.get(`/api/coolers/${coolerId}`)).body.cooler.name).toMatch(/^Demo: detector cascade/);
   const after = await lab.get(`/api/families/${family.id}`);
   expect(after.body.family).toMatchObject({ version: family.version, archived: false, name: family.name });
   expect((await ctx.ds.query('SELECT role FROM app_user WHERE id = $1', [viewer.id]))[0].role).toBe('viewer');

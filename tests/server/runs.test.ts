@@ -8,7 +8,7 @@ import { globalSearch } from '../../shared/runs/global-search';
 import { attachRealtime } from '../../server/realtime/socket-server';
 import { watchRules } from '../../server/realtime/watch-rules';
 import { demo, eventually, openContext, signedIn, type TestContext } from './context';
-import { spawnWorker, stopWorker, type SpawnedWorker } from './workers';
+import { checkpointHolder, spawnWorker, stopWorker, type SpawnedWorker } from './workers';
 
 /** A private queue: only the workers this file starts take its runs. */
 const queue = `test-runs-${randomUUID().slice(0, 8)}`;
@@ -110,11 +110,8 @@ it('a worker killed with SIGKILL mid-run: another worker resumes from the checkp
   const watcher = await socketFor(demo.physicist);
   const runId = (await api.post(`/api/designs/${designId}/runs`)).body.run.id as string;
   await new Promise((r) => watcher.emit('watch', `run:${runId}`, r));
-  const cp = await eventually(async () => {
-    const [row] = await ctx.ds.query('SELECT worker_id, checkpoint FROM run WHERE id = $1', [runId]);
-    return row?.checkpoint && row.checkpoint.nextStart >= 2 ? row as { worker_id: string; checkpoint: { nextStart: number } } : undefined;
-  }, 120);
-  const victim = workers.find((w) => cp.worker_id.includes(`:${w.pid}:`))!;
+  const held = await checkpointHolder(ctx.ds, workers, runId);
+  const victim = held.victim!;
   expect(victim).toBeDefined();
   const afterKill: RunProgress[] = [];
   victim.child.kill('SIGKILL');
@@ -127,7 +124,7 @@ it('a worker killed with SIGKILL mid-run: another worker resumes from the checkp
   expect(done.run.state).toBe('succeeded');
   expect(done.run.attempts).toBe(2);
   const [row] = await ctx.ds.query('SELECT worker_id FROM run WHERE id = $1', [runId]);
-  expect(row.worker_id).not.toBe(cp.worker_id);
+  expect(row.worker_id).not.toBe(held.workerId);
   // Resumed, not restarted: the new worker's first reported start is the checkpoint's next one or later.
   const firstStart = Number(/start (\d+) of/.exec(afterKill[0]!.phase)![1]) - 1;
   expect(firstStart).toBeGreaterThanOrEqual(next);

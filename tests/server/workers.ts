@@ -1,5 +1,7 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import { join } from 'node:path';
+import type { DataSource } from 'typeorm';
+import { eventually } from './context';
 
 const root = join(__dirname, '..', '..');
 
@@ -36,4 +38,17 @@ export async function stopWorker(w: SpawnedWorker): Promise<void> {
     w.child.once('exit', () => { clearTimeout(force); resolve(); });
     w.child.kill('SIGTERM');
   });
+}
+
+/**
+ * Waits until a run has a saved checkpoint past its second start and names
+ * the worker holding it (its pid is in worker_id), so a test can kill that
+ * worker mid-run and watch the run resume elsewhere.
+ */
+export async function checkpointHolder(ds: DataSource, workers: SpawnedWorker[], runId: string, seconds = 120): Promise<{ workerId: string; victim: SpawnedWorker | undefined }> {
+  const cp = await eventually(async () => {
+    const [row] = (await ds.query('SELECT worker_id, checkpoint FROM run WHERE id = $1', [runId])) as Array<{ worker_id: string; checkpoint: { nextStart: number } | null }>;
+    return row?.checkpoint && row.checkpoint.nextStart >= 2 ? row : undefined;
+  }, seconds);
+  return { workerId: cp.worker_id, victim: workers.find((w) => cp.worker_id.includes(`:${w.pid}:`)) };
 }

@@ -15,6 +15,7 @@ export const auditActionLabels: Record<AuditAction, string> = {
   'member-removed': 'Member removed',
   'order-released': 'Released',
   'module-deleted': 'Module deleted',
+  'cooler-deleted': 'Cooler deleted',
   'family-archived': 'Family archived',
   'family-unarchived': 'Family restored',
   'sheet-exported': 'Sheet exported',
@@ -23,4 +24,4 @@ export const auditActionLabels: Record<AuditAction, string> = {
 };
 
 /** Events worth a second look get the warm tag: refusals and what cannot be undone. */
-export const auditWarnings: ReadonlySet<AuditAction> = new Set(['sign-in-failed', 'member-removed', 'module-deleted', 'signed-out-everywhere', 'password-reset']);
+export const auditWarnings: ReadonlySet<AuditAction> = new Set(['sign-in-failed', 'member-removed', 'module-deleted', 'cooler-deleted', 'signed-out-everywhere', 'password-reset']);

@@ -12,3 +12,4 @@ export { Sweep } from './sweep';
 export { GrowthOrder } from './growth-order';
 export { ModuleDesign } from './module-design';
 export { SignUpRequest } from './sign-up-request';
+export { Cooler } from './cooler';

@@ -93,6 +93,48 @@ export const demoModule = {
   currentLimit: 5,
 };
 
+/**
+ * A demo cascade for the detector project: three stages of the demo band
+ * models at uniform doping (as in the demo module), coldest first, under a
+ * 300 K sink with 5 mW on the detector, the couple counts optimised within
+ * 78 couples, all stages in series on one supply, and a grease-and-ceramic
+ * interface of a few hundredths of a K/W between stages. Invented settings
+ * to show the Stages page, not a product.
+ */
+const demoLegs = { p: { perCm3: 1.6e19, lengthMm: 1.2, areaMm2: 0.6 }, n: { perCm3: 2e19, lengthMm: 1.2, areaMm2: 0.6 } };
+export const demoCascade = {
+  name: 'Demo: detector cascade, 3 uniform stages',
+  notes: 'Demo data: invented settings; legs at uniform doping from the NL-P7 and NL-N3 band models.',
+  hotSide: 300,
+  heatLoad: 0.005,
+  wiring: 'series' as const,
+  objective: 'maxDeltaT' as const,
+  /** Coldest first: the optimiser's start for the pyramid. */
+  stages: [{ couples: 6, interfaceResistance: 0.05 }, { couples: 18, interfaceResistance: 0.03 }, { couples: 54, interfaceResistance: 0.02 }],
+  couplesTotal: 78,
+  starts: 2,
+  pFamily: modelFamilies[0]!.name,
+  nFamily: modelFamilies[1]!.name,
+  legs: demoLegs,
+};
+
+/**
+ * A demo matched couple: the same two band models at uniform doping, the
+ * n/p area ratio and the current free, for the largest ΔT without load. The
+ * demo lab has no leg designs, so the legs are families (invented settings).
+ */
+export const demoCouple = {
+  name: 'Demo: matched couple, NL-P7 with NL-N3',
+  notes: 'Demo data: invented settings; the area ratio is left free to show how far the two legs are from matched.',
+  hotSide: 300,
+  heatLoad: 0,
+  objective: 'maxDeltaT' as const,
+  starts: 2,
+  pFamily: modelFamilies[0]!.name,
+  nFamily: modelFamilies[1]!.name,
+  legs: demoLegs,
+};
+
 /** Demo accounts, one per role in the demo lab and one in the second team; all share one password. */
 export const demoPassword = 'graded-legs-demo';
 export const demoUsers = [

@@ -2,11 +2,12 @@ import { randomBytes } from 'node:crypto';
 import type { DataSource } from 'typeorm';
 import { hashPassword } from '../../auth/passwords';
 import { insertFamily } from '../../services/family-service';
+import { writeCooler } from '../../services/cooler-service';
 import { writeModule } from '../../services/module-service';
-import { AppUser, MaterialFamily, ModuleDesign, Team } from '../entities';
-import { demoFamilies, demoModule, demoPassword, demoTeam, demoUsers, otherTeam } from './demo-data';
+import { AppUser, Cooler, MaterialFamily, ModuleDesign, Team } from '../entities';
+import { demoCascade, demoCouple, demoFamilies, demoModule, demoPassword, demoTeam, demoUsers, otherTeam } from './demo-data';
 
-export type SeedCounts = { teams: number; users: number; families: number; modules: number };
+export type SeedCounts = { teams: number; users: number; families: number; modules: number; coolers: number };
 
 /** Insert the demo lab if it is missing; running it twice changes nothing. */
 export async function seedDemo(ds: DataSource): Promise<SeedCounts> {
@@ -15,7 +16,7 @@ export async function seedDemo(ds: DataSource): Promise<SeedCounts> {
     const teams = m.getRepository(Team);
     const users = m.getRepository(AppUser);
     const families = m.getRepository(MaterialFamily);
-    const added: SeedCounts = { teams: 0, users: 0, families: 0, modules: 0 };
+    const added: SeedCounts = { teams: 0, users: 0, families: 0, modules: 0, coolers: 0 };
     const bySlug = new Map<string, Team>();
     for (const t of [demoTeam, otherTeam]) {
       let team = await teams.findOneBy({ slug: t.slug });
@@ -36,9 +37,9 @@ export async function seedDemo(ds: DataSource): Promise<SeedCounts> {
       await insertFamily(m, lab, { ...f, isDemo: true }, 'demo seed');
       added.families += 1;
     }
+    const byName = async (name: string) => (await families.findOneByOrFail({ teamId: lab.id, name })).id;
     const module = demoModule;
     if (!(await m.getRepository(ModuleDesign).existsBy({ teamId: lab.id, name: module.name }))) {
-      const byName = async (name: string) => (await families.findOneByOrFail({ teamId: lab.id, name })).id;
       const { pFamily, nFamily, ...settings } = module;
       await writeModule(m, lab, 'demo seed', {
         ...settings,
@@ -46,6 +47,26 @@ export async function seedDemo(ds: DataSource): Promise<SeedCounts> {
         n: { kind: 'family', familyId: await byName(nFamily.name), perCm3: nFamily.perCm3, lengthMm: nFamily.lengthMm, areaMm2: nFamily.areaMm2 },
       });
       added.modules += 1;
+    }
+    const uniform = async (familyName: string, leg: { perCm3: number; lengthMm: number; areaMm2: number }) => ({ kind: 'family' as const, familyId: await byName(familyName), ...leg });
+    if (!(await m.getRepository(Cooler).existsBy({ teamId: lab.id, name: demoCascade.name }))) {
+      const c = demoCascade;
+      const p = await uniform(c.pFamily, c.legs.p);
+      const n = await uniform(c.nFamily, c.legs.n);
+      await writeCooler(m, lab, 'demo seed', {
+        kind: 'cascade', name: c.name, notes: c.notes, hotSide: c.hotSide, heatLoad: c.heatLoad, objective: c.objective, wiring: c.wiring, starts: c.starts,
+        stages: c.stages.map((s) => ({ ...s, source: { kind: 'legs' as const, p, n } })),
+        couplesLimit: { kind: 'total', total: c.couplesTotal },
+      });
+      added.coolers += 1;
+    }
+    if (!(await m.getRepository(Cooler).existsBy({ teamId: lab.id, name: demoCouple.name }))) {
+      const c = demoCouple;
+      await writeCooler(m, lab, 'demo seed', {
+        kind: 'couple', name: c.name, notes: c.notes, hotSide: c.hotSide, heatLoad: c.heatLoad, objective: c.objective, starts: c.starts,
+        p: await uniform(c.pFamily, c.legs.p), n: await uniform(c.nFamily, c.legs.n),
+      });
+      added.coolers += 1;
     }
     return added;
   });
