@@ -90,6 +90,8 @@ describe('Stages: the demo cascade launched, watched and read; a new 2-stage cas
     const id = page.url().split('/').pop()!;
     const { cooler } = coolerResponseSchema.parse(await getJsonAs(piet, `/api/coolers/${id}`));
     expect(cooler.input.kind === 'cascade' && cooler.input.stages.map((s) => s.source.kind)).toEqual(['couple', expect.any(String)]);
+    // The saved cascade's own page, drawn before it is photographed.
+    await visible(page.getByTestId('cooler-facts')).waitFor({ timeout: 60_000 });
     await saveScreenshot(page, 'stages-new-cascade-1280');
     await page.close();
   });
