@@ -9,6 +9,8 @@ import { pyramidBars, type PyramidStage } from './pyramid-geometry';
 /** Bars narrower than this (px) carry no words inside; the count stays in the label beside them. */
 const wordsInsideMin = 96;
 
+const couplesWord = (n: number) => `${n} ${n === 1 ? 'couple' : 'couples'}`;
+
 type Props = {
   stages: readonly PyramidStage[];
   /** The couple count that fills the width (several pyramids side by side share one). */
@@ -46,14 +48,14 @@ export function Pyramid({ stages, scaleCouples, sink, compact = false, testID = 
             <View style={[styles.label, compact && styles.labelCompact]}>
               <AppText variant="label">{`Stage ${b.number}`}</AppText>
               <AppText variant="caption" tone="muted">{`${quantity(b.coldSide, 'K')} → ${quantity(b.hotSide, 'K')}`}</AppText>
-              {roomy ? null : <AppText variant="caption">{`${b.couples} couples`}</AppText>}
+              {roomy ? null : <AppText variant="caption">{couplesWord(b.couples)}</AppText>}
             </View>
             <View style={styles.track} onLayout={(e) => setTrackWidth(e.nativeEvent.layout.width)}>
               <View
                 style={[styles.bar, { width: `${b.widthShare * 100}%`, backgroundColor: gradeColor(warmth(b, lo, hi)) }]}
                 testID={`${testID}-bar-${b.number}`}
               >
-                {roomy ? <AppText variant="label" style={styles.barText} numberOfLines={1}>{`${b.couples} couples`}</AppText> : null}
+                {roomy ? <AppText variant="label" style={styles.barText} numberOfLines={1}>{couplesWord(b.couples)}</AppText> : null}
               </View>
             </View>
           </View>
