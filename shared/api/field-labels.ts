@@ -54,7 +54,7 @@ export const fieldLabels = {
   designId: 'Leg design',
   stages: 'Stages',
   'stages.source': 'Legs of the stage',
-  interfaceResistance: 'Interface resistance to the stage above',
+  interfaceResistance: 'Interface resistance to the next warmer stage',
   wiring: 'Wiring',
   couplesLimit: 'Couple count limit',
   total: 'Couples in all stages',

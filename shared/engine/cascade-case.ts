@@ -29,14 +29,14 @@ const stageSchema = z.strictObject(
     couples: z
       .number({ error: (issue) => (issue.input === undefined ? 'couples is required: the number of couples in this stage' : 'couples must be a whole number') })
       .int({ error: 'couples must be a whole number' })
-      .min(1, { error: 'a stage needs at least 1 couple: a stage of 0 couples pumps nothing, so the stages above it would have no load to carry' })
+      .min(1, { error: 'a stage needs at least 1 couple: a stage of 0 couples pumps nothing, so the warmer stages would have no load to carry' })
       .max(100000, { error: 'couples must be at most 100000' }),
     p: stageLeg('p'),
     n: stageLeg('n'),
     interfaceResistance: z
       .number({ error: 'interfaceResistance must be a finite number' })
       .min(0, { error: 'interfaceResistance must not be negative' })
-      .max(1e3, { error: 'interfaceResistance above 1000 K/W is implausible: it is the thermal resistance in K/W from this stage to the one above (or the sink), ~0.01–1 K/W for a ceramic plate and grease' })
+      .max(1e3, { error: 'interfaceResistance above 1000 K/W is implausible: it is the thermal resistance in K/W from this stage to the next warmer one (or the sink), ~0.01–1 K/W for a ceramic plate and grease' })
       .optional(),
   },
   { error: 'each stage must be an object: {couples, p, n, interfaceResistance}' },

@@ -139,7 +139,7 @@ describe('cooler runs', () => {
     const result = cascadeResultSchema.extend({ search: coolerSearchSchema }).parse(done.result);
     expect(result.stages).toHaveLength(2);
     expect(result.stages.reduce((a, s) => a + s.couples, 0)).toBe(16);
-    // The heat a stage rejects is the load of the stage above it; the headline is the result's.
+    // The heat a stage rejects is the load of the next warmer stage; the headline is the result's.
     expect(result.stages[1]!.heatLoad).toBeCloseTo(result.stages[0]!.heatRejected, 6);
     expect(done.run.deltaT).toBeCloseTo(result.deltaT, 9);
     expect(done.run.best).toBeCloseTo(result.deltaT, 9);

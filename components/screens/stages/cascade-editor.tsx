@@ -60,7 +60,7 @@ export function CascadeEditor({ initial, savedId, onSaved }: Props) {
         ) : null}
         <TextField id="cascade-starts" label="Search starts" help="More starts search wider and take longer" mono value={text.starts} onChangeText={(starts) => set({ starts })} error={shown.starts} />
       </Section>
-      <Section title="Stages, coldest first" hint={`Stage 1 holds the load; each stage's rejected heat is the load of the stage below it. Up to ${maxStages} stages.`}>
+      <Section title="Stages, coldest first" hint={`Stage 1 holds the load; each stage's rejected heat is the load of the next warmer stage. Up to ${maxStages} stages.`}>
         {shown.stages ? <AppText tone="danger">{shown.stages}</AppText> : null}
         {text.stages.map((s, i) => (
           <StageFields

@@ -44,7 +44,7 @@ export function CascadeResultView({ result: r, runId }: { result: CascadeRunResu
           />
         </ChartCard>
       </Columns>
-      <Section title="Stages" hint={`${r.wiring === 'series' ? 'All stages in series on one supply' : 'One supply per stage'}; each stage rejects its heat into the stage below it.`}>
+      <Section title="Stages" hint={`${r.wiring === 'series' ? 'All stages in series on one supply' : 'One supply per stage'}; each stage rejects its heat into the next warmer stage, the warmest into the sink.`}>
         <StageTable result={r} />
         <DownloadLink label="Export cascade CSV" url={coolerCsvUrl(runId, 'cascade')} testID="cascade-csv" />
       </Section>

@@ -16,7 +16,7 @@ const sources = [
   { value: 'couple', label: 'A matched-couple run' },
 ] as const;
 
-/** One stage of the cascade: its couples, where they come from, and the interface to the stage below. */
+/** One stage of the cascade: its couples, where they come from, and the interface to the next warmer stage. */
 export function StageFields({ index, count, value, onChange, onRemove, errors, countsOptimised }: Props) {
   const set = (patch: Partial<StageText>) => onChange({ ...value, ...patch });
   const at = `stages.${index}`;
