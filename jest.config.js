@@ -35,9 +35,7 @@ module.exports = {
     {
       displayName: 'client',
       preset: 'jest-expo',
-      // A screen test renders the whole router; on a loaded 2-core machine one
-      // takes well over jest's default 5 s, which is a limit, not a measurement.
-      testTimeout: 30_000,
+      setupFilesAfterEnv: ['<rootDir>/tests/setup/client-timeout.js'],
       roots: roots('app', 'components'),
       testMatch: ['**/*.test.ts?(x)'],
       moduleNameMapper: { '^@/(.*)$': '<rootDir>/$1' },
