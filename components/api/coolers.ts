@@ -38,13 +38,15 @@ export function useSaveCooler() {
   });
 }
 
-/** `DELETE /api/coolers/:id` (admins): the setup goes; its runs keep their record. */
+/** `DELETE /api/coolers/:id` (admins): the setup goes and its finished runs with it; refused while one is queued or running. */
 export function useDeleteCooler() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (id: string) => apiCommand('DELETE', coolerPath(id), { none: true }),
     onSuccess: (_data, id) => {
       queryClient.removeQueries({ queryKey: coolerDetailKey(id) });
+      // Its runs went with it: the run lists must not offer them.
+      void queryClient.invalidateQueries({ queryKey: runsQueryKey });
       return queryClient.invalidateQueries({ queryKey: coolersQueryKey });
     },
   });

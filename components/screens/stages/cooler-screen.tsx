@@ -19,6 +19,7 @@ import { AppText } from '@/components/ui/text';
 import { CoolerFacts } from './cooler-facts';
 import { coolerGoal, coolerKindLabel } from './cooler-format';
 import { CoolerActiveRun, CoolerLatestResult } from './cooler-latest';
+import { DeleteCooler } from './delete-cooler';
 
 const back = { label: 'Stages', href: '/stages' } as const;
 
@@ -78,6 +79,7 @@ function CoolerPage({ cooler }: { cooler: Cooler }) {
           </View>
         ) : null}
       </Section>
+      {runs.data ? <DeleteCooler cooler={cooler} finishedRuns={list.filter((r) => isFinished(r.state)).length} /> : null}
     </ScreenFrame>
   );
 }
