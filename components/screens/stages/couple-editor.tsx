@@ -68,5 +68,6 @@ const styles = StyleSheet.create({
   wrap: { gap: spacing.lg },
   legs: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.lg },
   grid: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-end', gap: spacing.md },
-  field: { flexGrow: 1, flexBasis: 200 },
+  // As the cascade editor's: narrower, a field is squeezed below its input and unit and the unit spills out of the card.
+  field: { flexGrow: 1, flexBasis: 240 },
 });
