@@ -37,7 +37,7 @@ describe('GET /api/families', () => {
 
   it('seeding twice adds nothing the second time', async () => {
     const again = await seedDemo(ctx.ds);
-    expect(again).toEqual({ teams: 0, users: 0, families: 0, modules: 0 });
+    expect(again).toEqual({ teams: 0, users: 0, families: 0, modules: 0, coolers: 0 });
   });
 });
 
