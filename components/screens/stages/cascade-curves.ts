@@ -14,7 +14,9 @@ export function curveLabel(stages: number, of: number): string {
 /**
  * Heat load against cold-side temperature at the best currents: the
  * cascade, and with one and two stages fewer, one line style each. The
- * heat load in mW when every point is under a watt.
+ * heat load in mW when every point is under a watt. The chart's heat axis is
+ * logarithmic (fewer stages pump watts where the cascade pumps milliwatts),
+ * so a point of no heat load, the end of a curve at its largest ΔT, is left out.
  */
 export function cascadeCurveSeries(r: CascadeRunResult): { series: PlotSeries[]; unit: 'mW' | 'W' } {
   const { unit, factor } = heatUnit(r.curves.flatMap((c) => c.points.map((p) => p.heatLoad)));
@@ -24,7 +26,7 @@ export function cascadeCurveSeries(r: CascadeRunResult): { series: PlotSeries[];
     key: `stages-${c.stages}`,
     label: curveLabel(c.stages, of),
     mark: chartMarks[i % chartMarks.length],
-    line: c.points.filter((p) => Number.isFinite(p.heatLoad)).map((p) => ({ x: p.coldSide, y: p.heatLoad * factor })),
+    line: c.points.filter((p) => Number.isFinite(p.heatLoad) && p.heatLoad > 0).map((p) => ({ x: p.coldSide, y: p.heatLoad * factor })),
   }));
   return { series: series.filter((s) => s.line.length > 0), unit };
 }

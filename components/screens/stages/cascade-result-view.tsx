@@ -35,9 +35,10 @@ export function CascadeResultView({ result: r, runId }: { result: CascadeRunResu
         <ChartCard title={`Pyramid: ${r.stages.length} stages, ${r.stages.reduce((n, s) => n + s.couples, 0)} couples`} hint="Drawn to scale: bar width in proportion to the stage's couples; the coldest stage on top, the heat sink below." testID="cascade-pyramid">
           <Pyramid stages={r.stages} sink={r.hotSide} />
         </ChartCard>
-        <ChartCard title="Heat load against cold side" hint="At the best currents; the cascade and with its coldest stages removed." testID="cascade-curves">
+        <ChartCard title="Heat load against cold side" hint="At the best currents; the cascade and with its coldest stages removed. Log scale: a detector's milliwatts and a one-stage module's watts on one chart." testID="cascade-curves">
           <SeriesPlot
             series={curves.series}
+            yScale="log"
             xLabel="Cold side Tc (K)"
             yLabel={`Qc (${curves.unit})`}
             description={`Heat load against cold-side temperature: ${curves.series.map((s) => s.label).join(', ')}`}
