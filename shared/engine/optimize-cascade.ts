@@ -172,7 +172,9 @@ export function optimizeCascade(c: CheckedCascadeCase, o: CascadeOptimizeOptions
   /** Read through a call: the closures update B, which TypeScript cannot see. */
   const kept = (): Best | undefined => B.best;
   const report = (phase: CascadeProgress['phase'], iteration: number) => {
-    if (!B.best) return;
+    // For minPower the feasibility phase maximises ΔT at the load: its power
+    // is not one that holds the cold side, so it is no "best power" to show.
+    if (!B.best || (c.objective === 'minPower' && phase === 'feasible')) return;
     o.onProgress?.({ phase, iteration, objective: c.objective === 'maxDeltaT' ? c.hotSide - B.best.point.coldSide : B.best.point.power, currents: B.best.currents, counts: B.best.counts, evaluations: solver.evaluations() });
   };
 

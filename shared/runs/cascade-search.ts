@@ -73,6 +73,14 @@ export function cascadeSearch(c: CheckedCascadeCase, o: SearchOptionsOf<CascadeC
       bestStart = k;
     }
     if (halted) { stopped = true; k += 1; break; }
+    // One event per finished start: a series cascade at fixed counts has a
+    // single free current, which the least-power search settles without any
+    // iteration of its own to report.
+    const value = (x: CascadeResult) => (c.objective === 'maxDeltaT' ? x.deltaT : x.power);
+    o.onProgress?.({
+      start: k, starts, phase: 'start finished', iteration: 0, objective: value(r), best: value(best), bestCurrent: best.stages[0].current,
+      startBest: value(r), state: null, evaluations, fractionDone: Math.min(1, (k + 1) / starts),
+    });
     o.onCheckpoint?.({ nextStart: k + 1, bestStart, best });
   }
   if (!best) throw new SearchStoppedEarly();
