@@ -68,6 +68,9 @@ describe('Stages: the demo cascade launched, watched and read; a new 2-stage cas
     expect(bars[0]).toBeLessThanOrEqual(bars[bars.length - 1]! + 0.5);
     await noSideways(page);
     await saveScreenshot(page, 'stages-cascade-390');
+    // The heat-load curves, on their log axis, to look at.
+    await visible(page.getByTestId('cooler-latest').getByTestId('cascade-curves')).scrollIntoViewIfNeeded();
+    await saveScreenshot(page, 'stages-cascade-curves-390');
     const downloading = page.waitForEvent('download', { timeout: 60_000 });
     await visible(page.getByText('Export cascade CSV')).click();
     const csv = readFileSync((await (await downloading).path())!, 'utf8');

@@ -15,4 +15,13 @@ describe('cascade heat-load curves', () => {
     expect(series[0].line.every((p) => p.y > 0)).toBe(true);
     expect(series[0].line[0]).toEqual({ x: r.curves[0].points[1].coldSide, y: r.curves[0].points[1].heatLoad * 1000 });
   });
+
+  it('spans four decades below the largest load: a tail falling towards no load does not stretch the axis', () => {
+    const r = cascadeResult();
+    const largest = Math.max(...r.curves.flatMap((c) => c.points.map((p) => p.heatLoad)));
+    r.curves[1].points[0].heatLoad = largest * 1e-10;
+    r.curves[1].points[1].heatLoad = largest * 2e-4;
+    const { series } = cascadeCurveSeries(r);
+    expect(series[1].line.map((p) => p.y / 1000)).toEqual(r.curves[1].points.slice(1).map((p) => p.heatLoad));
+  });
 });
